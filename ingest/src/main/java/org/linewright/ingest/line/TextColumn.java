@@ -1,0 +1,88 @@
+package org.linewright.ingest.line;
+
+import java.nio.charset.StandardCharsets;
+import java.util.Arrays;
+
+/**
+ * A column of short texts (quantum labels, codes) stored as one byte array plus offsets, in the manner
+ * of Arrow's variable-width vectors: no object per row. Rows are appended in order; {@link #clear()}
+ * resets the column for reuse without releasing its arrays.
+ */
+public final class TextColumn {
+    private byte[] data;
+    private int[] offsets;
+    private int rows;
+
+    public TextColumn(int capacityRows, int expectedBytesPerRow) {
+        this.data = new byte[Math.max(16, capacityRows * Math.max(1, expectedBytesPerRow))];
+        this.offsets = new int[capacityRows + 1];
+    }
+
+    /** Appends the bytes {@code src[from, from+length)} as the next row (bytes are copied verbatim). */
+    public void append(byte[] src, int from, int length) {
+        ensureRows(rows + 1);
+        int start = offsets[rows];
+        ensureBytes(start + length);
+        System.arraycopy(src, from, data, start, length);
+        offsets[++rows] = start + length;
+    }
+
+    /** Appends a string as UTF-8 (a convenience for readers that are not on a hot path). */
+    public void append(String text) {
+        byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
+        append(bytes, 0, bytes.length);
+    }
+
+    /** Appends an empty value. */
+    public void appendEmpty() {
+        ensureRows(rows + 1);
+        offsets[rows + 1] = offsets[rows];
+        rows++;
+    }
+
+    public int rows() {
+        return rows;
+    }
+
+    /** Start offset of {@code row} in {@link #bytes()}. */
+    public int start(int row) {
+        return offsets[row];
+    }
+
+    /** Length in bytes of {@code row}. */
+    public int length(int row) {
+        return offsets[row + 1] - offsets[row];
+    }
+
+    /** The backing bytes; valid in {@code [start(row), start(row)+length(row))}. */
+    public byte[] bytes() {
+        return data;
+    }
+
+    /** The backing offsets ({@code rows()+1} valid entries, first is 0). */
+    public int[] offsets() {
+        return offsets;
+    }
+
+    /** The row decoded as UTF-8 (allocates; for output and tests, not for hot paths). */
+    public String get(int row) {
+        return new String(data, offsets[row], length(row), StandardCharsets.UTF_8);
+    }
+
+    public void clear() {
+        rows = 0;
+        offsets[0] = 0;
+    }
+
+    private void ensureRows(int needed) {
+        if (needed + 1 > offsets.length) {
+            offsets = Arrays.copyOf(offsets, Math.max(needed + 1, offsets.length * 2));
+        }
+    }
+
+    private void ensureBytes(int needed) {
+        if (needed > data.length) {
+            data = Arrays.copyOf(data, Math.max(needed, data.length * 2));
+        }
+    }
+}
