@@ -1,8 +1,8 @@
 package org.linewright.ingest.source;
 
 /**
- * Maps the ways other formats name an isotopologue to the registry's (molecule, isotopologue) numbers.
- * Implemented by the molecule registry; readers depend only on this interface.
+ * What readers need to know of isotopologues: how other formats name them, their natural abundance and
+ * partition sum. Implemented by the molecule registry; readers depend only on this interface.
  */
 public interface IsotopologueLookup {
 
@@ -24,4 +24,16 @@ public interface IsotopologueLookup {
 
     /** True when the registry knows the (molecule, isotopologue) pair (its mass, abundance, Q(296 K)). */
     boolean isKnown(int moleculeId, int isotopologue);
+
+    /**
+     * Natural (terrestrial) abundance of the isotopologue, the weight included in the line intensities
+     * of the line model; NaN when unknown.
+     */
+    double naturalAbundance(int moleculeId, int isotopologue);
+
+    /**
+     * Total internal partition sum Q(T) of the isotopologue (user table when supplied, else the built-in
+     * value); readers need it to convert intensities given at another reference temperature. NaN when unknown.
+     */
+    double partitionSum(int moleculeId, int isotopologue, double temperatureK);
 }
