@@ -25,6 +25,9 @@ public interface IsotopologueLookup {
     /** True when the registry knows the (molecule, isotopologue) pair (its mass, abundance, Q(296 K)). */
     boolean isKnown(int moleculeId, int isotopologue);
 
+    /** Mass of the isotopologue in g/mol (numerically, in unified atomic mass units); NaN when unknown. */
+    double massGPerMol(int moleculeId, int isotopologue);
+
     /**
      * Natural (terrestrial) abundance of the isotopologue, the weight included in the line intensities
      * of the line model; NaN when unknown.

@@ -1,12 +1,14 @@
 package org.linewright.ingest.source;
 
+import org.linewright.ingest.InputException;
+
 /**
  * Bad input, located exactly: the file, the 1-based line, the 1-based column range, the field, the
  * offending text and what was expected. {@link #getMessage()} is the one line shown to the user, e.g.
  * {@code lines.par:12:cols 4-15: field wavenumber: "12.3x4" is not a number (expected F12.6)}.
  * Problems that concern a whole file (empty, wrong format, corrupt compression) use line 0 and no columns.
  */
-public final class LineFormatException extends RuntimeException {
+public final class LineFormatException extends InputException {
     private final String file;
     private final long lineNumber;
     private final int firstColumn;
