@@ -1,0 +1,128 @@
+package org.linewright.broadening.intensity;
+
+import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.source.IsotopologueLookup;
+import org.linewright.ingest.units.PhysicalConstants;
+
+/**
+ * Line intensity S(T) in cm⁻¹/(molecule·cm⁻²), abundance-weighted as in the line model.
+ *
+ * <p>From the intensity at T_ref = 296 K (Rothman et al. 1998, JQSRT 60, 665, appendix, eq. A11;
+ * Šimečková et al. 2006, JQSRT 98, 130, eq. 11):
+ * <pre>
+ *   S(T) = S(T_ref) · Q(T_ref)/Q(T) · exp(−c2·E''/T)/exp(−c2·E''/T_ref) · [1 − exp(−c2·ν/T)]/[1 − exp(−c2·ν/T_ref)]
+ * </pre>
+ * From the Einstein A coefficient when no intensity is given (state lists) (Šimečková et al. 2006, eq. 20):
+ * <pre>
+ *   S(T) = I_a · A · g' / (8π·c·ν²) · exp(−c2·E''/T) · [1 − exp(−c2·ν/T)] / Q(T)
+ * </pre>
+ * with c in cm/s, ν in cm⁻¹, E'' in cm⁻¹, c2 = hc/k the second radiation constant (CODATA 2018) and I_a the
+ * natural abundance, Q(T) the total internal partition sum, both from {@link IsotopologueLookup}.
+ *
+ * <p>Numerics: 1 − exp(−x) is evaluated as {@code -Math.expm1(-x)}; for x = c2ν/T ≪ 1 (microwave lines,
+ * ν ~ 10⁻³ cm⁻¹ gives x ~ 10⁻⁵) the direct form loses about −log10(x) digits to cancellation, expm1 keeps full
+ * double precision. The Boltzmann ratio is one exponential exp(−c2·E''·(1/T − 1/T_ref)), which cannot overflow
+ * where the two separate factors could underflow to 0/0 for high E''. The accuracy is that of the inputs:
+ * a few ulps of double arithmetic beyond the Q(T) and abundance values supplied.
+ *
+ * <p>Vectorised methods are allocation-free: they write into caller-supplied arrays of at least
+ * {@code batch.size} elements and look up Q(T) once per run of rows with the same isotopologue.
+ */
+public final class LineIntensity {
+    /** Reference temperature of the line model's intensities, in K. */
+    public static final double REFERENCE_TEMPERATURE_K = LineBatch.REFERENCE_TEMPERATURE_K;
+
+    private static final double C2_CM_K = PhysicalConstants.SECOND_RADIATION_CONSTANT_CM_K;
+    /** 8π·c in cm/s, the denominator of the Einstein-A relation (without ν²). */
+    private static final double EIGHT_PI_C_CM_PER_S = 8.0 * Math.PI * PhysicalConstants.SPEED_OF_LIGHT_CM_PER_S;
+
+    private LineIntensity() {
+    }
+
+    /**
+     * S(T) from S(296 K) for one line (formula in the class comment).
+     *
+     * @param intensity296 S(296 K) in cm⁻¹/(molecule·cm⁻²)
+     * @param wavenumberCm1 line position ν in cm⁻¹ (positive)
+     * @param lowerEnergyCm1 lower-state energy E'' in cm⁻¹
+     * @param partitionRatio Q(296 K)/Q(T)
+     * @param temperatureK T in K
+     */
+    public static double scaledFromReference(double intensity296, double wavenumberCm1, double lowerEnergyCm1,
+                                             double partitionRatio, double temperatureK) {
+        double invT = 1.0 / temperatureK;
+        double invTref = 1.0 / REFERENCE_TEMPERATURE_K;
+        // one exponential for the Boltzmann ratio: no 0/0 for large E''
+        double boltzmann = Math.exp(-C2_CM_K * lowerEnergyCm1 * (invT - invTref));
+        // expm1: 1 − e^(−x) without cancellation when x = c2ν/T is small
+        double stimulated = Math.expm1(-C2_CM_K * wavenumberCm1 * invT)
+                / Math.expm1(-C2_CM_K * wavenumberCm1 * invTref);
+        return intensity296 * partitionRatio * boltzmann * stimulated;
+    }
+
+    /**
+     * S(T) from the Einstein A coefficient for one line (formula in the class comment).
+     *
+     * @param einsteinAS1 A in s⁻¹
+     * @param upperDegeneracy g' (total statistical weight of the upper state, nuclear spin included)
+     * @param wavenumberCm1 ν in cm⁻¹
+     * @param lowerEnergyCm1 E'' in cm⁻¹
+     * @param abundance natural abundance I_a (1 for an isotopically pure sample)
+     * @param partitionSum Q(T)
+     * @param temperatureK T in K
+     */
+    public static double fromEinsteinA(double einsteinAS1, double upperDegeneracy, double wavenumberCm1,
+                                       double lowerEnergyCm1, double abundance, double partitionSum,
+                                       double temperatureK) {
+        double x = C2_CM_K * wavenumberCm1 / temperatureK;
+        return abundance * einsteinAS1 * upperDegeneracy / (EIGHT_PI_C_CM_PER_S * wavenumberCm1 * wavenumberCm1)
+                * Math.exp(-C2_CM_K * lowerEnergyCm1 / temperatureK)
+                * -Math.expm1(-x) // 1 − e^(−x), exact for small x
+                / partitionSum;
+    }
+
+    /**
+     * S(T) for every row of a batch: from S(296 K) where the row has one (finite and positive), else from the
+     * Einstein A coefficient and g'. Rows with neither get NaN.
+     *
+     * @param out receives S(T) for rows {@code 0 .. batch.size-1}
+     * @throws IllegalArgumentException for a non-positive temperature
+     * @throws IllegalStateException when the lookup does not know a row's isotopologue
+     */
+    public static void atTemperature(LineBatch batch, double temperatureK, IsotopologueLookup lookup, double[] out) {
+        if (!(temperatureK > 0) || Double.isInfinite(temperatureK)) {
+            throw new IllegalArgumentException("temperature must be positive and finite: " + temperatureK + " K");
+        }
+        int lastMol = Integer.MIN_VALUE;
+        int lastIso = Integer.MIN_VALUE;
+        double qT = Double.NaN;
+        double ratio = Double.NaN;
+        double abundance = Double.NaN;
+        for (int i = 0; i < batch.size; i++) {
+            int mol = batch.moleculeId[i];
+            int iso = batch.isotopologue[i];
+            if (mol != lastMol || iso != lastIso) {
+                qT = lookup.partitionSum(mol, iso, temperatureK);
+                double q296 = lookup.partitionSum(mol, iso, REFERENCE_TEMPERATURE_K);
+                if (!(qT > 0) || !(q296 > 0)) {
+                    throw new IllegalStateException("no partition sum for molecule " + mol + " isotopologue " + iso
+                            + " at " + temperatureK + " K (line " + batch.sourceLine[i] + ")");
+                }
+                ratio = q296 / qT;
+                abundance = lookup.naturalAbundance(mol, iso);
+                lastMol = mol;
+                lastIso = iso;
+            }
+            double s296 = batch.intensityCmPerMolecule[i];
+            if (s296 > 0 && Double.isFinite(s296)) {
+                out[i] = scaledFromReference(s296, batch.wavenumberCm1[i], batch.lowerEnergyCm1[i], ratio,
+                        temperatureK);
+            } else if (batch.einsteinAS1[i] >= 0 && batch.upperDegeneracy[i] > 0) {
+                out[i] = fromEinsteinA(batch.einsteinAS1[i], batch.upperDegeneracy[i], batch.wavenumberCm1[i],
+                        batch.lowerEnergyCm1[i], abundance, qT, temperatureK);
+            } else {
+                out[i] = Double.NaN;
+            }
+        }
+    }
+}

@@ -1,0 +1,62 @@
+package org.linewright.broadening.width;
+
+import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.source.IsotopologueLookup;
+import org.linewright.ingest.units.PhysicalConstants;
+
+/**
+ * Doppler (thermal) half width at half maximum of a Gaussian line profile:
+ * <pre>
+ *   α_D = ν/c · √(2·ln2·k·T / m)
+ * </pre>
+ * with m = M·m_u the molecular mass (M in g/mol, m_u the atomic mass constant), k the Boltzmann constant and c
+ * the speed of light in m/s (CODATA 2018, {@link PhysicalConstants}). Common practice; e.g. the handbook form
+ * α_D = 3.581×10⁻⁷·ν·√(T/M). Accuracy: that of the constants and the mass (a few ulps of arithmetic).
+ */
+public final class DopplerWidth {
+    /** 2·ln2·k/m_u in m²/(s²·K): multiplied by T/M (M in g/mol) gives (c·α_D/ν)². */
+    private static final double TWO_LN2_K_OVER_MU = 2.0 * Math.log(2.0) * PhysicalConstants.BOLTZMANN_J_PER_K
+            / PhysicalConstants.ATOMIC_MASS_CONSTANT_KG;
+
+    private DopplerWidth() {
+    }
+
+    /**
+     * @param wavenumberCm1 line position in cm⁻¹
+     * @param temperatureK temperature in K
+     * @param massGPerMol molecular mass in g/mol
+     * @return α_D in cm⁻¹
+     */
+    public static double hwhmCm1(double wavenumberCm1, double temperatureK, double massGPerMol) {
+        return wavenumberCm1 / PhysicalConstants.SPEED_OF_LIGHT_M_PER_S
+                * Math.sqrt(TWO_LN2_K_OVER_MU * temperatureK / massGPerMol);
+    }
+
+    /**
+     * α_D for every row of a batch (allocation-free; the mass is looked up once per run of rows of the same
+     * isotopologue).
+     *
+     * @param out receives α_D in cm⁻¹ for rows {@code 0 .. batch.size-1}
+     * @throws IllegalStateException when the lookup has no mass for a row's isotopologue
+     */
+    public static void hwhmCm1(LineBatch batch, double temperatureK, IsotopologueLookup lookup, double[] out) {
+        int lastMol = Integer.MIN_VALUE;
+        int lastIso = Integer.MIN_VALUE;
+        double factor = Double.NaN;
+        for (int i = 0; i < batch.size; i++) {
+            int mol = batch.moleculeId[i];
+            int iso = batch.isotopologue[i];
+            if (mol != lastMol || iso != lastIso) {
+                double mass = lookup.massGPerMol(mol, iso);
+                if (!(mass > 0)) {
+                    throw new IllegalStateException("no mass for molecule " + mol + " isotopologue " + iso
+                            + " (line " + batch.sourceLine[i] + ")");
+                }
+                factor = Math.sqrt(TWO_LN2_K_OVER_MU * temperatureK / mass) / PhysicalConstants.SPEED_OF_LIGHT_M_PER_S;
+                lastMol = mol;
+                lastIso = iso;
+            }
+            out[i] = batch.wavenumberCm1[i] * factor;
+        }
+    }
+}
