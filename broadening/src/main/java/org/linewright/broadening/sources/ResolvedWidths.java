@@ -22,6 +22,18 @@ import org.linewright.broadening.background.Composition;
  * </ul>
  */
 public final class ResolvedWidths {
+    /** Output column of {@link #backgroundWidthCm1PerAtm}. */
+    public static final String WIDTH_COLUMN = "background_width_cm1_per_atm";
+    /** Output column of {@link #backgroundWidthExponent}. */
+    public static final String EXPONENT_COLUMN = "background_width_exponent";
+    /** Output column of {@link #backgroundShiftCm1PerAtm}. */
+    public static final String SHIFT_COLUMN = "background_shift_cm1_per_atm";
+
+    /** Output column of the per-line width source code of {@code gas}, e.g. {@code h2_width_source}. */
+    public static String sourceColumn(BackgroundGas gas) {
+        return gas.label() + "_width_source";
+    }
+
     private final int capacity;
     private final Composition composition;
     /** Number of valid rows. */

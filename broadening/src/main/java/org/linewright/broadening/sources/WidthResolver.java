@@ -37,6 +37,9 @@ import org.linewright.ingest.line.LineBatch;
  * when it has one, else it is 0 (shifts are small and seldom known; they are not chained). A line for which no
  * source in the order gives a width (or an exponent) is an {@link InputException} naming the molecule, the gas
  * and the line. Every choice is counted in a {@link WidthSourceTally}.
+ *
+ * <p>A resolver is not thread-safe (it keeps the tally and scratch counts): build one per thread from the same
+ * {@link Builder} settings and {@link WidthSourceTally#add add} their tallies in a fixed order.
  */
 public final class WidthResolver {
     /** Line list, rules, tables, user constants, air proxy (N2/O2), default. */
@@ -278,7 +281,7 @@ public final class WidthResolver {
         return new InputException("molecule " + b.moleculeId[i] + " isotopologue " + b.isotopologue[i]
                 + ", line " + b.sourceLine[i] + " at " + b.wavenumberCm1[i] + " cm-1: no " + gas.label() + " "
                 + what + " from any source (tried " + tried + (defaultsAllowed ? "" : "; defaults forbidden")
-                + "; expected per-line values, a rule, a table or --constants for " + gas.label() + ")");
+                + "; expected per-line values, a rule, a table or user constants for " + gas.label() + ")");
     }
 
     private static long tableKey(int mol, int iso, BackgroundGas gas) {
@@ -350,6 +353,12 @@ public final class WidthResolver {
          */
         public Builder table(int moleculeId, int isotopologue, BackgroundGas gas, JDependentTable table) {
             tables.put(tableKey(moleculeId, isotopologue, gas), table);
+            return this;
+        }
+
+        /** Sets the user's constants for several gases (e.g. from {@link UserConstants#parse}). */
+        public Builder userConstants(Map<BackgroundGas, GasParameters> constants) {
+            userConstants.putAll(constants);
             return this;
         }
 

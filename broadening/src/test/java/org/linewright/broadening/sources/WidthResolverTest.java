@@ -154,7 +154,20 @@ class WidthResolverTest {
         InputException e = assertThrows(InputException.class, () -> r.resolve(b, r.newResult(3)));
         assertEquals("molecule 5 isotopologue 1, line 10 at 2000.0 cm-1: no h2o width from any source (tried line, "
                 + "rule, table, user, air-proxy; defaults forbidden; expected per-line values, a rule, a table or "
-                + "--constants for h2o)", e.getMessage());
+                + "user constants for h2o)", e.getMessage());
+    }
+
+    @Test
+    void userConstantsParse() {
+        var m = UserConstants.parse("h2=0.06:0.6, He=0.05, co2=0.1:0.7:-0.002");
+        assertEquals(new GasParameters(0.06, 0.6, 0.0), m.get(BackgroundGas.H2));
+        assertEquals(new GasParameters(0.05, 0.5, 0.0), m.get(BackgroundGas.HE));
+        assertEquals(new GasParameters(0.1, 0.7, -0.002), m.get(BackgroundGas.CO2));
+        assertThrows(InputException.class, () -> UserConstants.parse("ar=0.05"));
+        assertThrows(InputException.class, () -> UserConstants.parse("h2=0"));
+        assertThrows(InputException.class, () -> UserConstants.parse("h2=0.05:x"));
+        assertThrows(InputException.class, () -> UserConstants.parse("h2=0.05:1:2:3"));
+        assertThrows(InputException.class, () -> UserConstants.parse("h2=0.05,h2=0.06"));
     }
 
     @Test
