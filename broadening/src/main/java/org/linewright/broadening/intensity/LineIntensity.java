@@ -1,5 +1,6 @@
 package org.linewright.broadening.intensity;
 
+import org.linewright.ingest.InputException;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.units.PhysicalConstants;
@@ -87,7 +88,7 @@ public final class LineIntensity {
      *
      * @param out receives S(T) for rows {@code 0 .. batch.size-1}
      * @throws IllegalArgumentException for a non-positive temperature
-     * @throws IllegalStateException when the lookup does not know a row's isotopologue
+     * @throws InputException when the registry does not know a row's isotopologue
      */
     public static void atTemperature(LineBatch batch, double temperatureK, IsotopologueLookup lookup, double[] out) {
         if (!(temperatureK > 0) || Double.isInfinite(temperatureK)) {
@@ -105,8 +106,9 @@ public final class LineIntensity {
                 qT = lookup.partitionSum(mol, iso, temperatureK);
                 double q296 = lookup.partitionSum(mol, iso, REFERENCE_TEMPERATURE_K);
                 if (!(qT > 0) || !(q296 > 0)) {
-                    throw new IllegalStateException("no partition sum for molecule " + mol + " isotopologue " + iso
-                            + " at " + temperatureK + " K (line " + batch.sourceLine[i] + ")");
+                    throw new InputException("no partition sum for molecule " + mol + " isotopologue " + iso
+                            + " at " + temperatureK + " K (line " + batch.sourceLine[i]
+                            + "; expected the isotopologue and its partition sum in the registry)");
                 }
                 ratio = q296 / qT;
                 abundance = lookup.naturalAbundance(mol, iso);

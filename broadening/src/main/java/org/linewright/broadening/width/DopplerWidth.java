@@ -1,5 +1,6 @@
 package org.linewright.broadening.width;
 
+import org.linewright.ingest.InputException;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.units.PhysicalConstants;
@@ -37,7 +38,7 @@ public final class DopplerWidth {
      * isotopologue).
      *
      * @param out receives α_D in cm⁻¹ for rows {@code 0 .. batch.size-1}
-     * @throws IllegalStateException when the lookup has no mass for a row's isotopologue
+     * @throws InputException when the registry has no mass for a row's isotopologue
      */
     public static void hwhmCm1(LineBatch batch, double temperatureK, IsotopologueLookup lookup, double[] out) {
         int lastMol = Integer.MIN_VALUE;
@@ -49,8 +50,8 @@ public final class DopplerWidth {
             if (mol != lastMol || iso != lastIso) {
                 double mass = lookup.massGPerMol(mol, iso);
                 if (!(mass > 0)) {
-                    throw new IllegalStateException("no mass for molecule " + mol + " isotopologue " + iso
-                            + " (line " + batch.sourceLine[i] + ")");
+                    throw new InputException("no mass for molecule " + mol + " isotopologue " + iso
+                            + " (line " + batch.sourceLine[i] + "; expected the isotopologue in the registry)");
                 }
                 factor = Math.sqrt(TWO_LN2_K_OVER_MU * temperatureK / mass) / PhysicalConstants.SPEED_OF_LIGHT_M_PER_S;
                 lastMol = mol;

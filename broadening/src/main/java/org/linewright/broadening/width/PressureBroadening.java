@@ -15,7 +15,7 @@ import org.linewright.ingest.line.LineBatch;
  * e.g. Rothman et al. 1998, JQSRT 60, 665, appendix, eqs. A12–A14, generalised to a sum over broadeners as in
  * Tan et al. 2022, ApJS 262, 40). The line model gives no temperature dependence of the shift, so none is
  * applied. Pressures are in atm here; converting from Pa or bar is the caller's job at the edge. Accuracy:
- * that of one {@code Math.pow} per gas (1 ulp) and the inputs.
+ * a few ulps per gas term (one {@code Math.pow}, or exp(n·ln(296/T)) in the batch form) beyond the inputs.
  */
 public final class PressureBroadening {
     private static final double REFERENCE_TEMPERATURE_K = LineBatch.REFERENCE_TEMPERATURE_K;

@@ -31,6 +31,12 @@ public final class SampleIsotopologues implements IsotopologueLookup {
         put(2, 5, 4.43446e-5, 1225.4, Double.NaN);
         put(2, 6, 8.24623e-6, 7141.3, Double.NaN);
         put(2, 7, 3.95734e-6, 323.42, Double.NaN);
+        put(2, 8, Double.NaN, Double.NaN, Double.NaN); // in sample_CO2.par, not in the README table
+        put(4, 1, 0.990333, 5002, Double.NaN); // README: Q(296) ≈ 5002, derived from the samples
+        put(4, 2, 3.64093e-3, 3362.0, Double.NaN);
+        put(4, 3, 3.64093e-3, 3458.6, Double.NaN);
+        put(4, 4, 1.98582e-3, 5314.7, Double.NaN);
+        put(4, 5, 3.69280e-4, 30971, Double.NaN);
         put(28, 1, 0.999533, 3249.44, Double.NaN);
     }
 
