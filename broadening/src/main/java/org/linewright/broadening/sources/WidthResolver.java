@@ -25,7 +25,8 @@ import org.linewright.ingest.line.LineBatch;
  *       width with the air exponent (the line model carries no self exponent; using n_air for self is common
  *       practice of the 160-character format) and no shift; H2, He, CO2, H2O: the foreign-broadener columns.
  *       N2 and O2 have no per-line columns. A width counts as given when it is finite and positive;</li>
- *   <li>{@link WidthSource#RULE}: a quantum-number rule of the {@link RuleSet} for the molecule and gas;</li>
+ *   <li>{@link WidthSource#RULE}: a quantum-number rule of the {@link RuleSet} for the molecule and gas (for
+ *       {@code self} without rules of its own: the rules of the gas the absorber is — CO2, H2O or H2);</li>
  *   <li>{@link WidthSource#J_TABLE}: a J''-dependent table for the isotopologue (or, failing that, for any
  *       isotopologue of the molecule) and gas;</li>
  *   <li>{@link WidthSource#USER_CONSTANT}: constants given for the gas;</li>
@@ -141,8 +142,14 @@ public final class WidthResolver {
             int mol = batch.moleculeId[i];
             int iso = batch.isotopologue[i];
             if (mol != lastMol || iso != lastIso) {
-                widthRule = rules.rule(mol, gas, BroadeningRule.Quantity.WIDTH);
-                exponentRule = rules.rule(mol, gas, BroadeningRule.Quantity.EXPONENT);
+                BackgroundGas ruleGas = gas;
+                if (gas == BackgroundGas.SELF && rules.rule(mol, gas, BroadeningRule.Quantity.WIDTH) == null) {
+                    // self-broadening of CO2, H2O or H2 is broadening by that gas: its rules apply
+                    BackgroundGas species = selfSpecies(mol);
+                    ruleGas = species != null ? species : gas;
+                }
+                widthRule = rules.rule(mol, ruleGas, BroadeningRule.Quantity.WIDTH);
+                exponentRule = rules.rule(mol, ruleGas, BroadeningRule.Quantity.EXPONENT);
                 table = tables.get(tableKey(mol, iso, gas));
                 if (table == null) {
                     table = tables.get(tableKey(mol, 0, gas));
@@ -259,6 +266,16 @@ public final class WidthResolver {
                 return GasParameters.defaultFor(gas).shiftCm1PerAtm();
             default:
                 return Double.NaN;
+        }
+    }
+
+    /** The background gas that is molecule {@code moleculeId} itself (HITRAN numbers 1 H2O, 2 CO2, 45 H2), or null. */
+    static BackgroundGas selfSpecies(int moleculeId) {
+        switch (moleculeId) {
+            case 1: return BackgroundGas.H2O;
+            case 2: return BackgroundGas.CO2;
+            case 45: return BackgroundGas.H2;
+            default: return null;
         }
     }
 

@@ -132,6 +132,24 @@ class WidthResolverTest {
     }
 
     @Test
+    void co2SelfWithoutSelfWidthUsesCo2Rules() {
+        // a CO2 line "P 27" without a self width: the CO2-CO2 rule serves; sample_CO2_out.par, record at
+        // 310.248338 cm-1 (Tan et al. 2022): γ_CO2 0.0910, n_CO2 0.6529
+        LineBatch b = coLines();
+        b.size = 1;
+        b.moleculeId[0] = 2;
+        b.lowerJ[0] = 27;
+        b.upperJ[0] = 26;
+        b.selfWidthCm1PerAtm[0] = Double.NaN;
+        WidthResolver r = WidthResolver.builder(Composition.parse("self=1")).forbidDefaults().build();
+        ResolvedWidths w = r.newResult(1);
+        r.resolve(b, w);
+        assertEquals(WidthSource.RULE, w.source(BackgroundGas.SELF, 0));
+        assertEquals(0.0910, w.backgroundWidthCm1PerAtm[0], ROUNDING);
+        assertEquals(0.6529, w.backgroundWidthExponent[0], ROUNDING);
+    }
+
+    @Test
     void compositeExponentIsWidthWeightedMean() {
         LineBatch b = coLines();
         WidthResolver r = WidthResolver.builder(Composition.parse("H2=0.85,He=0.15")).order("user")
