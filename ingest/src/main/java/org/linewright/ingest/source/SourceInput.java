@@ -114,12 +114,13 @@ public final class SourceInput implements Closeable {
         HashingInputStream raw = new HashingInputStream(Files.newInputStream(path));
         BufferedInputStream buffered = new BufferedInputStream(raw, RAW_BUFFER_BYTES);
         boolean ok = false;
+        Compression found = Compression.NONE;
         try {
             byte[] magic = new byte[MAGIC_BYTES];
             buffered.mark(MAGIC_BYTES);
             int n = buffered.readNBytes(magic, 0, MAGIC_BYTES);
             buffered.reset();
-            Compression found = byMagic(magic, n);
+            found = byMagic(magic, n);
             Compression named = Compression.bySuffix(path.getFileName().toString());
             if (named != Compression.NONE && named != found) {
                 throw LineFormatException.ofFile(name, "the name says " + named.id() + " but the content does not start with "
@@ -149,7 +150,12 @@ public final class SourceInput implements Closeable {
             ok = true;
             return new SourceInput(name, found, raw, new CheckedInputStream(stream, name, found));
         } catch (IOException e) {
-            throw LineFormatException.ofFile(name, "cannot open as compressed data: " + e.getMessage(), e);
+            if (found == Compression.NONE) {
+                throw e;
+            }
+            // decompressors read their first block on construction: a bad start shows up here
+            throw LineFormatException.ofFile(name, "corrupt or truncated " + found.id() + " data ("
+                    + e.getMessage() + ")", e);
         } finally {
             if (!ok) {
                 buffered.close();
