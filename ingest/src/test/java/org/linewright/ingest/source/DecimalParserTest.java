@@ -80,6 +80,60 @@ class DecimalParserTest {
         }
     }
 
+    /** Shortest representations of random doubles over the whole exponent range, and their last digit ±1. */
+    @Test
+    void randomDoublesOverTheWholeRangeAreBitwiseEqual() {
+        Random random = new Random(7L);
+        for (int i = 0; i < 100_000; i++) {
+            double v = Double.longBitsToDouble(random.nextLong() & 0x7fffffffffffffffL);
+            if (!Double.isFinite(v)) {
+                continue;
+            }
+            String text = Double.toString(v);
+            assertSameAsJdk(text);
+            int e = text.indexOf('E');
+            int last = (e < 0 ? text.length() : e) - 1;
+            char c = text.charAt(last);
+            if (c > '0' && c < '9') {
+                assertSameAsJdk(text.substring(0, last) + (char) (c + 1) + text.substring(last + 1));
+                assertSameAsJdk(text.substring(0, last) + (char) (c - 1) + text.substring(last + 1));
+            }
+        }
+    }
+
+    /** Intensity-like texts d.dddE-xx and long mantissas with exponents from -330 to 330. */
+    @Test
+    void scientificTextsOfAllExponentsAreBitwiseEqual() {
+        Random random = new Random(11L);
+        for (int i = 0; i < 100_000; i++) {
+            int digits = 1 + random.nextInt(18);
+            StringBuilder sb = new StringBuilder();
+            sb.append((char) ('1' + random.nextInt(9))).append('.');
+            for (int k = 1; k < digits; k++) {
+                sb.append((char) ('0' + random.nextInt(10)));
+            }
+            sb.append('E').append(random.nextInt(661) - 330);
+            assertSameAsJdk(sb.toString());
+        }
+    }
+
+    /** The double-double step itself decides (almost) every intensity-like value, always as the JDK does. */
+    @Test
+    void doubleDoubleStepDecidesTypicalIntensities() {
+        Random random = new Random(3L);
+        int decided = 0;
+        for (int i = 0; i < 100_000; i++) {
+            long mantissa = 1000 + random.nextInt(9000);
+            int exponent = -23 - random.nextInt(290 - 23 + 1);
+            double v = DecimalParser.doubleDouble(mantissa, exponent);
+            if (v == v) {
+                decided++;
+                assertEquals(Double.parseDouble(mantissa + "E" + exponent), v, 0.0);
+            }
+        }
+        assertTrue(decided > 99_900, "decided " + decided);
+    }
+
     @Test
     void integers() {
         byte[] b = " -12 ".getBytes(StandardCharsets.ISO_8859_1);
