@@ -148,6 +148,9 @@ public final class HitranDelimitedReader implements LineReader {
         Arrays.fill(columnOf, -1);
         for (int f = 0; f < fieldCount; f++) {
             String name = text(f).trim();
+            if (f == 0 && name.startsWith("\uFEFF")) {
+                name = name.substring(1).trim(); // a UTF-8 byte-order mark before the first name
+            }
             headerNames[f] = name;
             Parameter p = Parameter.byHeader(name);
             if (p == null) {

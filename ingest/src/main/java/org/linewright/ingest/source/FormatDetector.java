@@ -133,7 +133,7 @@ public final class FormatDetector {
     }
 
     private static boolean isDelimitedHeader(byte[] b, int s, int e) {
-        String line = new String(b, s, e - s, StandardCharsets.UTF_8).toLowerCase(Locale.ROOT);
+        String line = new String(b, s, e - s, StandardCharsets.UTF_8).toLowerCase(Locale.ROOT).replace("\uFEFF", "");
         char delimiter = line.indexOf('\t') >= 0 ? '\t' : ',';
         if (line.indexOf(delimiter) < 0) {
             return false;

@@ -136,7 +136,7 @@ public final class SourceInput implements Closeable {
                     stream = new ReadAheadInputStream(new BZip2CompressorInputStream(buffered, true), "bzip2 " + name);
                     break;
                 case XZ:
-                    stream = new ReadAheadInputStream(new XZCompressorInputStream(buffered, true), "xz " + name);
+                    stream = new ReadAheadInputStream(XZCompressorInputStream.builder().setInputStream(buffered).setDecompressConcatenated(true).get(), "xz " + name);
                     break;
                 case ZSTD:
                     stream = new ZstdCompressorInputStream(buffered);

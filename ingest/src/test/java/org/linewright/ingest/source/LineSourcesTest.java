@@ -111,6 +111,22 @@ class LineSourcesTest {
         }
     }
 
+    /** A gzip file of several members (RFC 1952 §2.2: members follow one another) reads as their concatenation. */
+    @Test
+    void concatenatedGzipMembersAreOneStream() throws Exception {
+        int half = 161 * 2000;
+        byte[] first = compress("gzip", Arrays.copyOf(plain, half));
+        byte[] second = compress("gzip", Arrays.copyOfRange(plain, half, plain.length));
+        byte[] both = Arrays.copyOf(first, first.length + second.length);
+        System.arraycopy(second, 0, both, first.length, second.length);
+        Path p = tmp.resolve("members.par.gz");
+        Files.write(p, both);
+        try (OpenedSource s = LineSources.open(p, null, STRICT)) {
+            assertEquals(plainSum, wavenumberSum(s.reader()));
+            assertEquals(sha256(both), s.sha256Hex().get());
+        }
+    }
+
     @Test
     void sha256IsRefusedBeforeTheEnd() throws IOException {
         Path p = tmp.resolve("early.par");
