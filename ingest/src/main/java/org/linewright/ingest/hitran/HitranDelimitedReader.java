@@ -13,6 +13,7 @@ import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.TextColumn;
 import org.linewright.ingest.source.ByteLineScanner;
 import org.linewright.ingest.source.DecimalParser;
+import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
 import org.linewright.ingest.source.LineReader;
@@ -22,6 +23,7 @@ import org.linewright.ingest.source.ReadOptions;
  * Reads comma- or tab-separated line-list exports whose first non-blank line names the parameters
  * ({@link Parameter}). The delimiter is a tab when the header holds one, else a comma. Fields may be
  * enclosed in double quotes (a doubled quote inside stands for one); quoted fields cannot span lines.
+ * Wholly blank lines carry no data and are skipped; every other line must have as many fields as the header.
  *
  * <p>Required columns: {@code molec_id, local_iso_id, nu, sw, elower, gamma_air, n_air}; a file without
  * one of them is refused at once with a one-line error. All other known columns are optional: absent, an
@@ -33,7 +35,7 @@ import org.linewright.ingest.source.ReadOptions;
  * are read as 10, 11, 12. Validation and duplicate counting follow {@link HitranRecordReader}; J', J'', K'
  * are read from the local quanta when they keep their 15-character width.
  */
-public final class HitranDelimitedReader implements LineReader {
+public final class HitranDelimitedReader implements LineReader, DuplicateCounter {
     /** The parameter columns this reader knows, by header name (matched without regard to case). */
     public enum Parameter {
         MOLEC_ID("molec_id", true), LOCAL_ISO_ID("local_iso_id", true), NU("nu", true), SW("sw", true),
@@ -519,6 +521,7 @@ public final class HitranDelimitedReader implements LineReader {
     }
 
     /** Kept rows identical in molecule, isotopologue, wavenumber and the four quanta texts to the row before. */
+    @Override
     public long duplicatesSeen() {
         return duplicates;
     }

@@ -6,6 +6,7 @@ import java.nio.charset.StandardCharsets;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.source.ByteLineScanner;
 import org.linewright.ingest.source.DecimalParser;
+import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
@@ -29,7 +30,7 @@ import org.linewright.ingest.source.ReadOptions;
  * <p>Duplicates: a record with the same molecule, isotopologue, wavenumber (same double) and the same four
  * quanta fields (byte for byte) as the previous kept record is kept and counted in {@link #duplicatesSeen()}.
  */
-public final class HitranRecordReader implements LineReader {
+public final class HitranRecordReader implements LineReader, DuplicateCounter {
     private static final int QUANTA_START = HitranField.UPPER_GLOBAL_QUANTA.start();
     private static final int QUANTA_LENGTH = HitranField.LOWER_LOCAL_QUANTA.end() - QUANTA_START;
     private static final byte KNOWN_UNCHECKED = 0;
@@ -243,6 +244,7 @@ public final class HitranRecordReader implements LineReader {
     }
 
     /** Kept records identical in molecule, isotopologue, wavenumber and the four quanta to the record before. */
+    @Override
     public long duplicatesSeen() {
         return duplicates;
     }

@@ -19,6 +19,11 @@ import java.util.function.Supplier;
 public record OpenedSource(LineReader reader, LineFormat format, String compression, Supplier<String> sha256Hex,
                            String fileName) implements Closeable {
 
+    /** Duplicate lines seen so far when the reader counts them ({@link DuplicateCounter}), else -1. */
+    public long duplicatesSeen() {
+        return reader instanceof DuplicateCounter ? ((DuplicateCounter) reader).duplicatesSeen() : -1;
+    }
+
     @Override
     public void close() throws IOException {
         reader.close();
