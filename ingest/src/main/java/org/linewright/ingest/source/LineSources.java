@@ -24,6 +24,7 @@ public final class LineSources {
      * @param path the file (any of a state/transition set for {@link LineFormat#EXOMOL})
      * @param formatOrNull the format to read, or null to detect it
      * @throws LineFormatException for an empty, corrupt or unrecognised file, or a file of another format
+     * @throws UnsupportedOperationException for ExoMol and catalog files until their readers are wired in
      */
     public static OpenedSource open(Path path, LineFormat formatOrNull, ReadOptions options) throws IOException {
         String name = path.toString();

@@ -37,6 +37,7 @@ final class ReadAheadInputStream extends InputStream {
     private Chunk current;
     private int position;
     private boolean finished;
+    private IOException failure;
 
     ReadAheadInputStream(InputStream source, String threadName) {
         this.source = source;
@@ -80,6 +81,9 @@ final class ReadAheadInputStream extends InputStream {
     }
 
     private boolean ensureData() throws IOException {
+        if (failure != null) {
+            throw failure; // again on every read: never a short read after a failure
+        }
         if (finished) {
             return false;
         }
@@ -92,8 +96,8 @@ final class ReadAheadInputStream extends InputStream {
             }
             position = 0;
             if (current.failure != null) {
-                finished = true;
-                throw current.failure;
+                failure = current.failure;
+                throw failure;
             }
             if (current == END) {
                 finished = true;

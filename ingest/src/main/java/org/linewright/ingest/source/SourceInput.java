@@ -324,6 +324,7 @@ public final class SourceInput implements Closeable {
         private final String name;
         private final Compression compression;
         volatile boolean atEnd;
+        private RuntimeException failed;
 
         CheckedInputStream(InputStream in, String name, Compression compression) {
             super(in);
@@ -333,6 +334,7 @@ public final class SourceInput implements Closeable {
 
         @Override
         public int read() throws IOException {
+            rethrowEarlierFailure();
             try {
                 int b = in.read();
                 if (b < 0) {
@@ -348,6 +350,7 @@ public final class SourceInput implements Closeable {
 
         @Override
         public int read(byte[] b, int off, int len) throws IOException {
+            rethrowEarlierFailure();
             try {
                 int n = in.read(b, off, len);
                 if (n < 0) {
@@ -362,6 +365,19 @@ public final class SourceInput implements Closeable {
         }
 
         private RuntimeException failure(Exception e) {
+            if (failed == null) {
+                failed = describe(e);
+            }
+            return failed;
+        }
+
+        private void rethrowEarlierFailure() {
+            if (failed != null) {
+                throw failed; // again on every read: never a short read after a failure
+            }
+        }
+
+        private RuntimeException describe(Exception e) {
             if (e instanceof LineFormatException) {
                 return (LineFormatException) e;
             }

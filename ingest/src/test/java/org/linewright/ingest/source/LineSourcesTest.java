@@ -148,6 +148,18 @@ class LineSourcesTest {
             }
         });
         assertTrue(e.getMessage().startsWith(p + ": corrupt or truncated " + kind + " data"), e.getMessage());
+        // reading on after the failure repeats it rather than ending quietly
+        try (SourceInput in = SourceInput.open(p)) {
+            byte[] buffer = new byte[8192];
+            LineFormatException first = assertThrows(LineFormatException.class, () -> {
+                while (in.stream().read(buffer) >= 0) {
+                    // until the failure
+                }
+            });
+            assertEquals(first.getMessage(), assertThrows(LineFormatException.class, () -> in.stream().read(buffer)).getMessage());
+        } catch (LineFormatException atOpen) {
+            assertTrue(atOpen.getMessage().contains("corrupt or truncated"), atOpen.getMessage()); // bzip2: the first block
+        }
     }
 
     @Test
