@@ -10,7 +10,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import org.apache.commons.compress.compressors.bzip2.BZip2CompressorOutputStream;
 import org.apache.commons.compress.compressors.gzip.GzipCompressorOutputStream;
-import org.apache.commons.compress.compressors.xz.XZCompressorOutputStream;
 import org.apache.commons.compress.compressors.zstandard.ZstdCompressorOutputStream;
 import org.junit.jupiter.api.io.TempDir;
 import java.util.Random;
@@ -153,7 +152,7 @@ class HitranRecordReaderBenchmark {
             case "gzip": return new GzipCompressorOutputStream(raw);
             case "zstd": return new ZstdCompressorOutputStream(raw);
             case "bzip2": return new BZip2CompressorOutputStream(raw);
-            case "xz": return new XZCompressorOutputStream(raw, 1);
+            case "xz": return new org.tukaani.xz.XZOutputStream(raw, new org.tukaani.xz.LZMA2Options(1));
             default: return raw;
         }
     }
