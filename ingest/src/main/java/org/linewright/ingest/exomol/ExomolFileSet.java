@@ -76,7 +76,12 @@ public record ExomolFileSet(String name, String isotopeFormula, Path states, Lis
         String name;
         switch (kind) {
             case "trans" -> name = stripRange(stem);
-            case "broad" -> name = uniqueStatesName(files, iso, given);
+            case "broad" -> {
+                // NAME__GAS.broad names its set; ISO__GAS.broad needs the one set of that isotopologue
+                int last = stem.lastIndexOf("__");
+                String candidate = last > 0 ? stem.substring(0, last) : stem;
+                name = hasStates(files, candidate) ? candidate : uniqueStatesName(files, iso, given);
+            }
             default -> name = stem;
         }
         Path states = null;
@@ -125,6 +130,15 @@ public record ExomolFileSet(String name, String isotopeFormula, Path states, Lis
                 .thenComparing(p -> p.getFileName().toString()));
         return new ExomolFileSet(name, name.contains("__") ? name.substring(0, name.indexOf("__")) : name,
                 states, trans, pf, def, broad);
+    }
+
+    private static boolean hasStates(List<Path> files, String name) {
+        for (Path p : files) {
+            if (stripCompression(p.getFileName().toString()).equals(name + ".states")) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static String uniqueStatesName(List<Path> files, String iso, String given) {
