@@ -22,7 +22,7 @@ import org.linewright.ingest.units.PhysicalConstants;
  * DR 30–31 I2, ELO 32–41 F10.4 (cm⁻¹), GUP 42–44 I3, TAG 45–51 I7, QNFMT 52–55 I4, QN′ 56–67 6×I2,
  * QN″ 68–79 6×I2. Trailing blanks may be missing; the record must reach column 55.
  *
- * <p>Conversions (documented in {@code docs/formats.md} too):
+ * <p>Conversions (also in {@code docs/formats-state-lists-and-catalogs.md}):
  * <ul>
  *   <li>ν [cm⁻¹] = f [MHz] · 10⁶ / c [cm/s]; the uncertainty likewise. A negative ERR means that FREQ and ERR are
  *       already in cm⁻¹ (a convention of the catalog programs, from memory).</li>
