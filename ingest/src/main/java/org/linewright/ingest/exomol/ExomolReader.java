@@ -3,10 +3,8 @@ package org.linewright.ingest.exomol;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.linewright.ingest.line.Broadener;
@@ -45,7 +43,7 @@ import org.linewright.ingest.text.AsciiNumbers;
  *       the upper/lower state. Uncertainty codes, reference codes and line-mixing flag are empty; upperK is NaN.</li>
  *   <li>{@code sourceLine}: the line number in the transition file the line came from.</li>
  * </ul>
- * Memory: the states (about 40 bytes per state plus its labels) and one input buffer; transitions are never
+ * Memory: the states (about 50 bytes per state plus its label text, twice that while the arrays grow) and one input buffer; transitions are never
  * held beyond the current batch.
  */
 public final class ExomolReader implements LineReader {
