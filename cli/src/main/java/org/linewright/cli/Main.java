@@ -34,10 +34,19 @@ public final class Main {
         return commandLine(out, err).execute(args);
     }
 
-    /** The configured command tree writing to the given streams, for callers that add subcommands. */
-    public static CommandLine commandLine(PrintWriter out, PrintWriter err) {
+    /**
+     * The configured command tree writing to the given streams. Streams, converters and error handling are
+     * applied to every command present when this returns, so extra commands must be passed here rather than
+     * added afterwards.
+     *
+     * @param extraCommands further picocli command objects (annotated with {@code @Command(name = ...)})
+     */
+    public static CommandLine commandLine(PrintWriter out, PrintWriter err, Object... extraCommands) {
         LinewrightCommand root = new LinewrightCommand();
         CommandLine commandLine = new CommandLine(root);
+        for (Object command : extraCommands) {
+            commandLine.addSubcommand(command);
+        }
         QuantityConverters.registerAll(commandLine);
         ErrorReporting errors = new ErrorReporting(root.globalOptions());
         commandLine.setOut(out)
