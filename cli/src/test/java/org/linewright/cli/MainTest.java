@@ -151,6 +151,18 @@ class MainTest {
     }
 
     @Test
+    void quietInheritedByTheDemoSilencesStdout(@TempDir Path tmp) {
+        Path shipped = Path.of("..", "demo");
+        org.junit.jupiter.api.Assumptions.assumeTrue(java.nio.file.Files.isRegularFile(shipped.resolve("plan.toml")),
+                "shipped demo folder not found");
+        Run r = run("demo", "--demo-dir", shipped.toString(), "--out", tmp.toString(), "--quiet");
+        assertEquals(ExitCodes.OK, r.code(), r.err());
+        assertEquals("", r.out());
+        assertEquals("", r.err());
+        assertTrue(java.nio.file.Files.isRegularFile(tmp.resolve("report.html")));
+    }
+
+    @Test
     void completionPrintsABashScriptCoveringTheCommands() {
         Run r = run("completion");
         assertEquals(0, r.code());

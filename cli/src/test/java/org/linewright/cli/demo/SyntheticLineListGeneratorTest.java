@@ -88,7 +88,8 @@ class SyntheticLineListGeneratorTest {
             int lowerJ = Integer.parseInt(local.substring(6, 9).strip());
             reference.put(coKey(iso, vUpper, branch, lowerJ), new double[] {
                 Double.parseDouble(r.substring(3, 15)), Double.parseDouble(r.substring(15, 25)),
-                Double.parseDouble(r.substring(45, 55))});
+                Double.parseDouble(r.substring(45, 55)), Double.parseDouble(r.substring(146, 153)),
+                Double.parseDouble(r.substring(153, 160))});
         }
         int compared = 0;
         double worstPosition = 0;
@@ -106,6 +107,9 @@ class SyntheticLineListGeneratorTest {
             }
             // the lower-state energy comes from the same term values as the position
             assertEquals(ref[2], l.lowerEnergyCm1(), 0.02, "E'' of " + l);
+            // HITRAN degeneracy convention, nuclear-spin factor included (2 for 13C16O)
+            assertEquals(ref[3], l.upperDegeneracy(), 0.0, "g' of " + l);
+            assertEquals(ref[4], l.lowerDegeneracy(), 0.0, "g'' of " + l);
         }
         assertTrue(compared >= 20, "only " + compared + " lines in common with the sample");
         // truncated Dunham series: positions within 0.01 cm-1 up to J'' = 30
