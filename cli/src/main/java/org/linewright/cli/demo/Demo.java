@@ -1,0 +1,89 @@
+package org.linewright.cli.demo;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The demo: runs a list of {@link DemoStep}s in order on the shipped synthetic data, times each, and writes
+ * {@code report.txt} and {@code report.html} into the output folder.
+ *
+ * <p>{@link #availableSteps()} lists the steps this build can run. Integration point: when the line readers,
+ * the line store and the table builder are wired in, a step reading the staged lists into the line store replaces
+ * {@link SyntheticLinesStep}, and a step building the table named in {@code plan.toml} follows it; the report
+ * picks both up without change.
+ */
+public final class Demo {
+    private final Path demoDir;
+    private final Path outDir;
+    private final List<DemoStep> steps;
+    private final boolean quiet;
+
+    /**
+     * @param demoDir the shipped demo folder ({@code plan.toml}, {@code data/})
+     * @param outDir  the output folder, created when missing
+     * @param steps   the steps, run in this order
+     * @param quiet   the {@code --quiet} option
+     */
+    public Demo(Path demoDir, Path outDir, List<DemoStep> steps, boolean quiet) {
+        this.demoDir = demoDir;
+        this.outDir = outDir;
+        this.steps = List.copyOf(steps);
+        this.quiet = quiet;
+    }
+
+    /** The steps this build runs: stage the data, take the synthetic lines, draw the stick spectrum. */
+    public static List<DemoStep> availableSteps() {
+        return List.of(new StageDataStep(), new SyntheticLinesStep(), new StickSpectrumStep());
+    }
+
+    /**
+     * Runs every step, then writes the reports.
+     *
+     * @param listener told when each step starts and ends (e.g. to print a line per step)
+     * @return what was done
+     */
+    public DemoReport run(StepListener listener) throws IOException {
+        Files.createDirectories(outDir);
+        DemoContext context = new DemoContext(demoDir, outDir, quiet);
+        Instant started = Instant.now();
+        long t0 = System.nanoTime();
+        List<DemoReport.StepRecord> records = new ArrayList<>();
+        for (DemoStep step : steps) {
+            listener.started(step);
+            long s0 = System.nanoTime();
+            StepOutcome outcome = step.run(context);
+            Duration took = Duration.ofNanos(System.nanoTime() - s0);
+            DemoReport.StepRecord record = new DemoReport.StepRecord(step.name(), took, outcome.details(),
+                    outcome.files());
+            records.add(record);
+            listener.finished(record);
+        }
+        Duration total = Duration.ofNanos(System.nanoTime() - t0);
+        DemoReport report = new DemoReport(started, outDir, records, total, context.plan());
+        report.write();
+        return report;
+    }
+
+    /** Told when a step starts and ends. */
+    public interface StepListener {
+        /** A listener that ignores everything. */
+        StepListener NONE = new StepListener() {
+            @Override
+            public void started(DemoStep step) {
+            }
+
+            @Override
+            public void finished(DemoReport.StepRecord record) {
+            }
+        };
+
+        void started(DemoStep step);
+
+        void finished(DemoReport.StepRecord record);
+    }
+}

@@ -1,0 +1,2 @@
+/** PNG plots of cross sections, stick spectra and residuals, drawn headless with XChart. */
+package org.linewright.cli.plot;

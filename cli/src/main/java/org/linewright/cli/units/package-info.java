@@ -1,0 +1,2 @@
+/** Quantities with units in command-line option values: parsers and picocli converters. */
+package org.linewright.cli.units;

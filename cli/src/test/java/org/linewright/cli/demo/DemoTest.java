@@ -1,0 +1,85 @@
+package org.linewright.cli.demo;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+import java.util.List;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.linewright.ingest.InputException;
+
+/** The demo on the shipped synthetic data: steps run in order, reports and plot written. */
+class DemoTest {
+    /** The shipped demo folder, seen from the cli module (Surefire's working directory). */
+    private static final Path SHIPPED = Paths.get("..", "demo");
+
+    @Test
+    void demoWritesReportsAndStickPlot(@TempDir Path out) throws IOException {
+        Assumptions.assumeTrue(Files.isRegularFile(SHIPPED.resolve("plan.toml")), "shipped demo folder not found");
+        DemoReport report = new Demo(SHIPPED, out, Demo.availableSteps(), true).run(Demo.StepListener.NONE);
+        assertEquals(3, report.steps().size());
+        String text = Files.readString(out.resolve("report.txt"));
+        String html = Files.readString(out.resolve("report.html"));
+        assertTrue(text.contains("INVENTED"), text);
+        assertTrue(html.contains("<img src=\"plots/stick-spectrum.png\""), html);
+        // the plan's parameters are reported (values written in demo/plan.toml)
+        assertTrue(text.contains("grid.temperatures_K") && text.contains("[500.0, 800.0, 1100.0]"), text);
+        // 804 CO lines (2 isotopologues x 2 bands x (101 R + 100 P)) and 161 CO2 lines (81 R + 80 P)
+        assertTrue(text.contains("12C16O: 402 lines") && text.contains("12C16O2: 161 lines"), text);
+        assertTrue(Files.isRegularFile(out.resolve("data/synthetic-co.par.bz2")));
+        var image = ImageIO.read(out.resolve(StickSpectrumStep.PLOT_FILE).toFile());
+        assertEquals(1200, image.getWidth());
+    }
+
+    @Test
+    void stepsRunInOrderAndAreTimed(@TempDir Path out) throws IOException {
+        StringBuilder order = new StringBuilder();
+        DemoStep first = step("first", order);
+        DemoStep second = step("second", order);
+        DemoReport report = new Demo(out, out, List.of(first, second), true).run(Demo.StepListener.NONE);
+        assertEquals("first second ", order.toString());
+        assertEquals(List.of("first", "second"), report.steps().stream().map(DemoReport.StepRecord::name).toList());
+        assertTrue(report.steps().get(0).took().toNanos() >= 0);
+        assertTrue(Files.readString(report.textFile()).contains("2. second"));
+    }
+
+    @Test
+    void aPlanNamingAMissingListIsBadInput(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("plan.toml"), "[lines]\nsources = [\"data/absent.par.bz2\"]\n");
+        InputException e = assertThrows(InputException.class,
+                () -> new Demo(dir, dir.resolve("out"), Demo.availableSteps(), true).run(Demo.StepListener.NONE));
+        assertTrue(e.getMessage().contains("lines.sources[0]") && e.getMessage().contains("absent.par.bz2"),
+                e.getMessage());
+    }
+
+    @Test
+    void aBrokenPlanIsBadInputWithItsPosition(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("plan.toml"), "[lines]\nsources = [\"a\"\n");
+        InputException e = assertThrows(InputException.class,
+                () -> new Demo(dir, dir.resolve("out"), Demo.availableSteps(), true).run(Demo.StepListener.NONE));
+        assertTrue(e.getMessage().contains("plan.toml:"), e.getMessage());
+        assertTrue(!e.getMessage().contains("\n"), e.getMessage());
+    }
+
+    private static DemoStep step(String name, StringBuilder order) {
+        return new DemoStep() {
+            @Override
+            public String name() {
+                return name;
+            }
+
+            @Override
+            public StepOutcome run(DemoContext context) {
+                order.append(name).append(' ');
+                return new StepOutcome(List.of("ran " + name), List.of());
+            }
+        };
+    }
+}
