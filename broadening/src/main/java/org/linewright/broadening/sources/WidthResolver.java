@@ -13,6 +13,7 @@ import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.rules.BroadeningRule;
 import org.linewright.broadening.rules.RuleSet;
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.exomol.BroadeningTable;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
 
@@ -27,7 +28,8 @@ import org.linewright.ingest.line.LineBatch;
  *       N2 and O2 have no per-line columns. A width counts as given when it is finite and positive;</li>
  *   <li>{@link WidthSource#RULE}: a quantum-number rule of the {@link RuleSet} for the molecule and gas (for
  *       {@code self} without rules of its own: the rules of the gas the absorber is — CO2, H2O or H2);</li>
- *   <li>{@link WidthSource#J_TABLE}: a J''-dependent table for the isotopologue (or, failing that, for any
+ *   <li>{@link WidthSource#J_TABLE}: a J''-dependent table ({@link BroadeningTable}, read from the broadening
+ *       files of a state/transition set, lookup rule there) for the isotopologue (or, failing that, for any
  *       isotopologue of the molecule) and gas;</li>
  *   <li>{@link WidthSource#USER_CONSTANT}: constants given for the gas;</li>
  *   <li>{@link WidthSource#AIR_PROXY}: for N2 and O2 only, the line's air values;</li>
@@ -51,7 +53,7 @@ public final class WidthResolver {
     private final BackgroundGas[] gases;
     private final WidthSource[] order;
     private final RuleSet rules;
-    private final Map<Long, JDependentTable> tables;
+    private final Map<Long, BroadeningTable> tables;
     private final GasParameters[] userConstants;
     private final WidthSourceTally tally = new WidthSourceTally();
     /** Scratch counts per source for one gas and batch (keeps {@link #resolve} allocation-free). */
@@ -135,7 +137,7 @@ public final class WidthResolver {
         int lastIso = Integer.MIN_VALUE;
         BroadeningRule widthRule = null;
         BroadeningRule exponentRule = null;
-        JDependentTable table = null;
+        BroadeningTable table = null;
         long[] counts = sourceCounts;
         Arrays.fill(counts, 0L);
         for (int i = 0; i < batch.size; i++) {
@@ -196,7 +198,7 @@ public final class WidthResolver {
     }
 
     private double width(WidthSource s, BackgroundGas gas, LineBatch b, int i, BroadeningRule rule,
-                         JDependentTable table) {
+                         BroadeningTable table) {
         switch (s) {
             case LINE_LIST:
                 switch (gas) {
@@ -208,7 +210,7 @@ public final class WidthResolver {
             case RULE:
                 return rule == null ? Double.NaN : rule.evaluate(b.lowerJ[i], b.upperJ[i], b.upperK[i]);
             case J_TABLE:
-                return table == null ? Double.NaN : table.widthCm1PerAtm(b.lowerJ[i]);
+                return table == null ? Double.NaN : table.widthAt(b.lowerJ[i]);
             case USER_CONSTANT: {
                 GasParameters p = userConstants[gas.ordinal()];
                 return p == null ? Double.NaN : p.widthCm1PerAtm();
@@ -223,7 +225,7 @@ public final class WidthResolver {
     }
 
     private double exponent(WidthSource s, BackgroundGas gas, LineBatch b, int i, BroadeningRule rule,
-                            JDependentTable table) {
+                            BroadeningTable table) {
         switch (s) {
             case LINE_LIST:
                 switch (gas) {
@@ -234,7 +236,7 @@ public final class WidthResolver {
             case RULE:
                 return rule == null ? Double.NaN : rule.evaluate(b.lowerJ[i], b.upperJ[i], b.upperK[i]);
             case J_TABLE:
-                return table == null ? Double.NaN : table.exponent(b.lowerJ[i]);
+                return table == null ? Double.NaN : table.exponentAt(b.lowerJ[i]);
             case USER_CONSTANT: {
                 GasParameters p = userConstants[gas.ordinal()];
                 return p == null ? Double.NaN : p.exponent();
@@ -310,7 +312,7 @@ public final class WidthResolver {
         private final Composition composition;
         private List<WidthSource> order = new ArrayList<>(DEFAULT_ORDER);
         private RuleSet rules = RuleSet.builtIn();
-        private final Map<Long, JDependentTable> tables = new HashMap<>();
+        private final Map<Long, BroadeningTable> tables = new HashMap<>();
         private final Map<BackgroundGas, GasParameters> userConstants = new EnumMap<>(BackgroundGas.class);
 
         private Builder(Composition composition) {
@@ -366,9 +368,10 @@ public final class WidthResolver {
 
         /**
          * Adds a J''-dependent table for an isotopologue and gas; isotopologue 0 makes it serve every
-         * isotopologue of the molecule that has no table of its own.
+         * isotopologue of the molecule that has no table of its own. The gas named in a table file maps to a
+         * gas with {@link BackgroundGas#byName} ({@code H2}, {@code He}, {@code air}, ...).
          */
-        public Builder table(int moleculeId, int isotopologue, BackgroundGas gas, JDependentTable table) {
+        public Builder table(int moleculeId, int isotopologue, BackgroundGas gas, BroadeningTable table) {
             tables.put(tableKey(moleculeId, isotopologue, gas), table);
             return this;
         }

@@ -9,7 +9,7 @@ public enum WidthSource {
     LINE_LIST("line"),
     /** A published quantum-number rule for the molecule and gas ({@link org.linewright.broadening.rules.RuleSet}). */
     RULE("rule"),
-    /** A J''-dependent table for the isotopologue and gas ({@link JDependentTable}). */
+    /** A J''-dependent table for the isotopologue and gas ({@link org.linewright.ingest.exomol.BroadeningTable}). */
     J_TABLE("table"),
     /** A constant γ, n (and δ) given by the user for the gas. */
     USER_CONSTANT("user"),

@@ -5,12 +5,11 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.util.Arrays;
-
 import org.junit.jupiter.api.Test;
 import org.linewright.broadening.background.BackgroundGas;
 import org.linewright.broadening.background.Composition;
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.exomol.BroadeningTable;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
 
@@ -52,8 +51,8 @@ class WidthResolverTest {
         b.foreignWidthExponent[h2][1] = 0.55;
         b.foreignShiftCm1PerAtm[h2][1] = -0.001;
         WidthResolver r = WidthResolver.builder(Composition.parse("H2=0.85,He=0.15"))
-                .table(5, 0, BackgroundGas.HE, new JDependentTable(new double[] {0, 1, 2},
-                        new double[] {0.05, 0.045, 0.04}, new double[] {0.5, 0.45, 0.4}))
+                .table(5, 0, BackgroundGas.HE, new BroadeningTable("He", Double.NaN, Double.NaN,
+                        new double[] {0, 1, 2}, new double[] {0.05, 0.045, 0.04}, new double[] {0.5, 0.45, 0.4}))
                 .userConstant(BackgroundGas.H2, new GasParameters(0.066, 0.6, 0.0))
                 .build();
         ResolvedWidths w = r.newResult(4);
@@ -88,8 +87,8 @@ class WidthResolverTest {
         LineBatch b = coLines();
         WidthResolver r = WidthResolver.builder(Composition.parse("He=1"))
                 .order("table,rule,default")
-                .table(5, 0, BackgroundGas.HE, new JDependentTable(new double[] {0, 1, 2},
-                        new double[] {0.05, 0.045, 0.04}, new double[] {0.5, 0.45, Double.NaN}))
+                .table(5, 0, BackgroundGas.HE, new BroadeningTable("He", Double.NaN, Double.NaN,
+                        new double[] {0, 1, 2}, new double[] {0.05, 0.045, 0.04}, new double[] {0.5, 0.45, Double.NaN}))
                 .build();
         ResolvedWidths w = r.newResult(3);
         r.resolve(b, w);
@@ -193,11 +192,5 @@ class WidthResolverTest {
         Composition c = Composition.air();
         assertThrows(InputException.class, () -> WidthResolver.builder(c).order("line,guess"));
         assertThrows(InputException.class, () -> WidthResolver.builder(c).order("line,line"));
-        assertThrows(IllegalArgumentException.class,
-                () -> new JDependentTable(new double[] {1, 1}, new double[2], new double[2]));
-        JDependentTable t = new JDependentTable(new double[] {0, 2, 5}, new double[] {1, 2, 3},
-                new double[] {4, 5, 6});
-        double[] got = {t.widthCm1PerAtm(-1), t.widthCm1PerAtm(0), t.widthCm1PerAtm(3), t.widthCm1PerAtm(9)};
-        assertTrue(Arrays.equals(new double[] {1, 1, 2, 3}, got), Arrays.toString(got));
     }
 }
