@@ -57,7 +57,8 @@ public final class WidthResolver {
     private final GasParameters[] userConstants;
     private final WidthSourceTally tally = new WidthSourceTally();
     /** Scratch counts per source for one gas and batch (keeps {@link #resolve} allocation-free). */
-    private final long[] sourceCounts = new long[WidthSource.values().length];
+    private final long[] sourceCounts = new long[SOURCES.length];
+    private static final WidthSource[] SOURCES = WidthSource.values();
 
     private WidthResolver(Builder b) {
         this.composition = b.composition;
@@ -192,7 +193,7 @@ public final class WidthResolver {
             counts[served.ordinal()]++;
             tally.countExponent(gas, exponentSource);
         }
-        for (WidthSource s : WidthSource.values()) {
+        for (WidthSource s : SOURCES) {
             tally.countWidth(gas, s, counts[s.ordinal()]);
         }
     }
