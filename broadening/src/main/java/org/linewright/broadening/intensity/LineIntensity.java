@@ -1,9 +1,9 @@
 package org.linewright.broadening.intensity;
 
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.source.IsotopologueLookup;
-import org.linewright.ingest.units.PhysicalConstants;
 
 /**
  * Line intensity S(T) in cm⁻¹/(molecule·cm⁻²), abundance-weighted as in the line model.
@@ -18,13 +18,18 @@ import org.linewright.ingest.units.PhysicalConstants;
  *   S(T) = I_a · A · g' / (8π·c·ν²) · exp(−c2·E''/T) · [1 − exp(−c2·ν/T)] / Q(T)
  * </pre>
  * with c in cm/s, ν in cm⁻¹, E'' in cm⁻¹, c2 = hc/k the second radiation constant (CODATA 2018) and I_a the
- * natural abundance, Q(T) the total internal partition sum, both from {@link IsotopologueLookup}.
+ * natural abundance, Q(T) the total internal partition sum, both from {@link IsotopologueLookup}; constants
+ * from {@code PhysicalConstants} (CODATA 2018).
  *
  * <p>Numerics: 1 − exp(−x) is evaluated as {@code -Math.expm1(-x)}; for x = c2ν/T ≪ 1 (microwave lines,
  * ν ~ 10⁻³ cm⁻¹ gives x ~ 10⁻⁵) the direct form loses about −log10(x) digits to cancellation, expm1 keeps full
- * double precision. The Boltzmann ratio is one exponential exp(−c2·E''·(1/T − 1/T_ref)), which cannot overflow
- * where the two separate factors could underflow to 0/0 for high E''. The accuracy is that of the inputs:
+ * double precision. The Boltzmann ratio is one exponential exp(−c2·E''·(1/T − 1/T_ref)), which avoids the
+ * 0/0 that two separately underflowing factors would give for very high E''. The accuracy is that of the inputs:
  * a few ulps of double arithmetic beyond the Q(T) and abundance values supplied.
+ *
+ * <p>The single-line relations are evaluated by {@link EinsteinCoefficients} of the line model (one place for
+ * them in linewright, shared with the readers); this class applies them to whole batches with the partition
+ * sums and abundances of the registry.
  *
  * <p>Vectorised methods are allocation-free: they write into caller-supplied arrays of at least
  * {@code batch.size} elements and look up Q(T) once per run of rows with the same isotopologue.
@@ -32,10 +37,6 @@ import org.linewright.ingest.units.PhysicalConstants;
 public final class LineIntensity {
     /** Reference temperature of the line model's intensities, in K. */
     public static final double REFERENCE_TEMPERATURE_K = LineBatch.REFERENCE_TEMPERATURE_K;
-
-    private static final double C2_CM_K = PhysicalConstants.SECOND_RADIATION_CONSTANT_CM_K;
-    /** 8π·c in cm/s, the denominator of the Einstein-A relation (without ν²). */
-    private static final double EIGHT_PI_C_CM_PER_S = 8.0 * Math.PI * PhysicalConstants.SPEED_OF_LIGHT_CM_PER_S;
 
     private LineIntensity() {
     }
@@ -51,14 +52,9 @@ public final class LineIntensity {
      */
     public static double scaledFromReference(double intensity296, double wavenumberCm1, double lowerEnergyCm1,
                                              double partitionRatio, double temperatureK) {
-        double invT = 1.0 / temperatureK;
-        double invTref = 1.0 / REFERENCE_TEMPERATURE_K;
-        // one exponential for the Boltzmann ratio: no 0/0 for large E''
-        double boltzmann = Math.exp(-C2_CM_K * lowerEnergyCm1 * (invT - invTref));
-        // expm1: 1 − e^(−x) without cancellation when x = c2ν/T is small
-        double stimulated = Math.expm1(-C2_CM_K * wavenumberCm1 * invT)
-                / Math.expm1(-C2_CM_K * wavenumberCm1 * invTref);
-        return intensity296 * partitionRatio * boltzmann * stimulated;
+        // partitionRatio = Q(296)/Q(T): passed as "from" sum against a "to" sum of 1
+        return intensity296 * EinsteinCoefficients.intensityRatio(wavenumberCm1, lowerEnergyCm1,
+                REFERENCE_TEMPERATURE_K, partitionRatio, temperatureK, 1.0);
     }
 
     /**
@@ -75,11 +71,8 @@ public final class LineIntensity {
     public static double fromEinsteinA(double einsteinAS1, double upperDegeneracy, double wavenumberCm1,
                                        double lowerEnergyCm1, double abundance, double partitionSum,
                                        double temperatureK) {
-        double x = C2_CM_K * wavenumberCm1 / temperatureK;
-        return abundance * einsteinAS1 * upperDegeneracy / (EIGHT_PI_C_CM_PER_S * wavenumberCm1 * wavenumberCm1)
-                * Math.exp(-C2_CM_K * lowerEnergyCm1 / temperatureK)
-                * -Math.expm1(-x) // 1 − e^(−x), exact for small x
-                / partitionSum;
+        return EinsteinCoefficients.intensityFromEinsteinA(einsteinAS1, wavenumberCm1, upperDegeneracy,
+                lowerEnergyCm1, temperatureK, partitionSum, abundance);
     }
 
     /**
