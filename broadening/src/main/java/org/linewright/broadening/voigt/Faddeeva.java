@@ -233,7 +233,7 @@ public final class Faddeeva {
             return 5;
         } else if (s < 6400.0) {
             return 4;
-        } else if (s < 40000.0) {
+        } else if (s < 1e6) {
             return 3;
         }
         return 2;
