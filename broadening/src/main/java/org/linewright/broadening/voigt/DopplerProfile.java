@@ -36,12 +36,31 @@ public final class DopplerProfile {
      */
     public static void addProfile(double[] gridCm1, int from, int to, double centerCm1, double dopplerHwhmCm1,
                                   double strength, double[] out) {
+        addProfile(gridCm1, from, to, centerCm1, dopplerHwhmCm1, strength, 0.0, out);
+    }
+
+    /**
+     * Adds {@code strength · (profile(gridCm1[i] − centerCm1) − baselineCm)} to {@code out[i]} for
+     * {@code from ≤ i < to}; the baseline removes a pedestal inside a wing cutoff.
+     *
+     * @param gridCm1    wavenumbers in cm⁻¹
+     * @param from       first index, inclusive
+     * @param to         last index, exclusive
+     * @param centerCm1  line centre in cm⁻¹
+     * @param dopplerHwhmCm1 half width at half maximum in cm⁻¹, positive
+     * @param strength   multiplier
+     * @param baselineCm value subtracted from the profile at every point, in cm
+     * @param out        accumulator
+     */
+    public static void addProfile(double[] gridCm1, int from, int to, double centerCm1, double dopplerHwhmCm1,
+                                  double strength, double baselineCm, double[] out) {
+        double offset = strength * baselineCm;
         requirePositive(dopplerHwhmCm1);
         double scale = SQRT_LN2 / dopplerHwhmCm1;
         double norm = strength * SQRT_LN2_OVER_PI / dopplerHwhmCm1;
         for (int i = from; i < to; i++) {
             double x = scale * (gridCm1[i] - centerCm1);
-            out[i] += norm * Math.exp(-x * x);
+            out[i] += norm * Math.exp(-x * x) - offset;
         }
     }
 

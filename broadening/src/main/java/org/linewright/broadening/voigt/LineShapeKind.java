@@ -13,8 +13,8 @@ public enum LineShapeKind implements LineShape {
 
         @Override
         public void addProfile(double[] gridCm1, int from, int to, double centerCm1, double dopplerHwhmCm1,
-                               double lorentzHwhmCm1, double strength, double[] out) {
-            VoigtProfile.addProfile(gridCm1, from, to, centerCm1, dopplerHwhmCm1, lorentzHwhmCm1, strength, out);
+                               double lorentzHwhmCm1, double strength, double baselineCm, double[] out) {
+            VoigtProfile.addProfile(gridCm1, from, to, centerCm1, dopplerHwhmCm1, lorentzHwhmCm1, strength, baselineCm, out);
         }
 
         @Override
@@ -31,8 +31,8 @@ public enum LineShapeKind implements LineShape {
 
         @Override
         public void addProfile(double[] gridCm1, int from, int to, double centerCm1, double dopplerHwhmCm1,
-                               double lorentzHwhmCm1, double strength, double[] out) {
-            DopplerProfile.addProfile(gridCm1, from, to, centerCm1, dopplerHwhmCm1, strength, out);
+                               double lorentzHwhmCm1, double strength, double baselineCm, double[] out) {
+            DopplerProfile.addProfile(gridCm1, from, to, centerCm1, dopplerHwhmCm1, strength, baselineCm, out);
         }
 
         @Override
@@ -49,8 +49,8 @@ public enum LineShapeKind implements LineShape {
 
         @Override
         public void addProfile(double[] gridCm1, int from, int to, double centerCm1, double dopplerHwhmCm1,
-                               double lorentzHwhmCm1, double strength, double[] out) {
-            LorentzProfile.addProfile(gridCm1, from, to, centerCm1, lorentzHwhmCm1, strength, out);
+                               double lorentzHwhmCm1, double strength, double baselineCm, double[] out) {
+            LorentzProfile.addProfile(gridCm1, from, to, centerCm1, lorentzHwhmCm1, strength, baselineCm, out);
         }
 
         @Override

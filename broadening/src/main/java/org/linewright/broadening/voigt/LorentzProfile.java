@@ -34,12 +34,31 @@ public final class LorentzProfile {
      */
     public static void addProfile(double[] gridCm1, int from, int to, double centerCm1, double lorentzHwhmCm1,
                                   double strength, double[] out) {
+        addProfile(gridCm1, from, to, centerCm1, lorentzHwhmCm1, strength, 0.0, out);
+    }
+
+    /**
+     * Adds {@code strength · (profile(gridCm1[i] − centerCm1) − baselineCm)} to {@code out[i]} for
+     * {@code from ≤ i < to}; the baseline removes a pedestal inside a wing cutoff.
+     *
+     * @param gridCm1    wavenumbers in cm⁻¹
+     * @param from       first index, inclusive
+     * @param to         last index, exclusive
+     * @param centerCm1  line centre in cm⁻¹
+     * @param lorentzHwhmCm1 half width at half maximum in cm⁻¹, positive
+     * @param strength   multiplier
+     * @param baselineCm value subtracted from the profile at every point, in cm
+     * @param out        accumulator
+     */
+    public static void addProfile(double[] gridCm1, int from, int to, double centerCm1, double lorentzHwhmCm1,
+                                  double strength, double baselineCm, double[] out) {
+        double offset = strength * baselineCm;
         requirePositive(lorentzHwhmCm1);
         double numerator = strength * INV_PI * lorentzHwhmCm1;
         double gamma2 = lorentzHwhmCm1 * lorentzHwhmCm1;
         for (int i = from; i < to; i++) {
             double d = gridCm1[i] - centerCm1;
-            out[i] += numerator / (d * d + gamma2);
+            out[i] += numerator / (d * d + gamma2) - offset;
         }
     }
 
