@@ -51,6 +51,32 @@ public final class Faddeeva {
     /** √NEGLIGIBLE_EXPONENT: half-width, in units of x, of the window of significant Gaussian terms. */
     private static final double NEGLIGIBLE_DISTANCE = Math.sqrt(NEGLIGIBLE_EXPONENT);
 
+    /** e^(−a²n²) for n = 0.. while a²n² is below the negligible exponent. */
+    private static final double[] EXP_MINUS_A2N2;
+    /** e^(−2a²k) for k = 0 .. (largest number of terms in a Zaghloul–Ali window). */
+    private static final double[] EXP_MINUS_2A2K;
+
+    static {
+        int n1 = (int) Math.ceil(NEGLIGIBLE_DISTANCE / ZA_STEP);
+        EXP_MINUS_A2N2 = new double[n1];
+        for (int n = 0; n < n1; n++) {
+            EXP_MINUS_A2N2[n] = Math.exp(-ZA_STEP_SQUARED * n * n);
+        }
+        // window of Σ₃ spans 2·√42/a + 2 terms; |z| < 8 adds nothing to its length
+        int window = (int) Math.ceil(2 * NEGLIGIBLE_DISTANCE / ZA_STEP) + 3;
+        EXP_MINUS_2A2K = new double[window];
+        for (int k = 0; k < window; k++) {
+            EXP_MINUS_2A2K[k] = Math.exp(-2.0 * ZA_STEP_SQUARED * k);
+        }
+    }
+
+    /** Anchor point of erfcx below which the erf series or the anchored series is used. */
+    private static final double ANCHOR_Y = 2.0;
+    /** From here up to the anchor, the anchored Taylor series replaces the erf series. */
+    private static final double SERIES_TO_ANCHOR_Y = 1.25;
+    /** erfcx(2), from the 60-level continued fraction (relative error ~1e-16). */
+    private static final double ERFCX_AT_ANCHOR = erfcxNonNegative(ANCHOR_Y);
+
     /** |z|² below which the Zaghloul–Ali series is used (|z| &lt; 8). */
     static final double SERIES_RADIUS_SQUARED = 64.0;
     /** |z|² from which the one-level closed form is used (|z| ≥ 4000; relative error ≤ 1e-14). */
@@ -138,10 +164,11 @@ public final class Faddeeva {
 
     /**
      * Scaled complementary error function erfcx(y) = e^(y²)·erfc(y) = w(iy) for real y.
-     * For 0 ≤ y &lt; 2 it is e^(y²) − (2/√π)·Σ y(2y²)ⁿ/(2n+1)!! (the all-positive series of erf, Abramowitz and
-     * Stegun 7.1.6); for y ≥ 2 the Laplace continued fraction erfcx(y) = (1/√π)/(y + ½/(y + 1/(y + (3/2)/(y + …))))
+     * For 0 ≤ y &lt; 1.25 it is e^(y²) − (2/√π)·Σ y(2y²)ⁿ/(2n+1)!! (the all-positive series of erf, Abramowitz
+     * and Stegun 7.1.6); for 1.25 ≤ y &lt; 2 erfc(2) plus the Taylor series of ∫_y^2 e^(−t²) dt (see
+     * erfcxBelowAnchor); for y ≥ 2 the Laplace continued fraction erfcx(y) = (1/√π)/(y + ½/(y + 1/(y + (3/2)/(y + …))))
      * (Abramowitz and Stegun 7.1.14) with 60 levels at y = 2 down to 1 level for y ≥ 10⁴; for y &lt; 0,
-     * erfcx(y) = 2e^(y²) − erfcx(−y), which overflows below y ≈ −26.6. Relative error below 5×10⁻¹⁴.
+     * erfcx(y) = 2e^(y²) − erfcx(−y), which overflows below y ≈ −26.6. Relative error below 1×10⁻¹⁴ for y ≥ 0.
      *
      * @param y real argument
      * @return e^(y²)·erfc(y)
@@ -154,7 +181,10 @@ public final class Faddeeva {
     }
 
     private static double erfcxNonNegative(double y) {
-        if (y < 2.0) {
+        if (y >= SERIES_TO_ANCHOR_Y && y < ANCHOR_Y) {
+            return erfcxBelowAnchor(y);
+        }
+        if (y < ANCHOR_Y) {
             // erf(y)·e^(y²) = (2/√π)·Σ y(2y²)ⁿ/(2n+1)!!: positive terms, so the only cancellation is the final
             // difference, which costs at most two digits at y = 2.
             double twoY2 = 2.0 * y * y;
@@ -187,6 +217,31 @@ public final class Faddeeva {
             tail = 0.5 * k / (y + tail);
         }
         return INV_SQRT_PI / (y + tail);
+    }
+
+    /**
+     * erfcx(y) for 1.25 ≤ y &lt; 2 from the anchor erfcx(2) without cancellation:
+     * erfcx(y) = e^(y²−4)·(erfcx(2) + (2/√π)·I), I = ∫_y^2 e^(4−t²) dt = Σ_k H_k(2)·|h|^(k+1)/(k+1)!, h = y − 2,
+     * the Taylor series of e^(4−t²) = e^(−4s−s²) about t = 2 (derivatives (−1)^k H_k(2), Hermite polynomials by
+     * their three-term recurrence). Both parts are positive, so no digits are lost (the erf series loses up to
+     * two near y = 2).
+     */
+    private static double erfcxBelowAnchor(double y) {
+        double h = ANCHOR_Y - y;
+        double hermitePrevious = 1.0;              // H_0(2)
+        double hermite = 2.0 * ANCHOR_Y;           // H_1(2)
+        double power = h;                          // |h|^(k+1)/(k+1)! for k = 0
+        double integral = power;                   // k = 0 term, H_0 = 1
+        // fixed length: for |h| ≤ 0.75 the terms fall below 1e-21 by k = 36 (H_k(2) may be near zero for some k,
+        // so a size test on one term could stop early)
+        for (int k = 1; k < 40; k++) {
+            power *= h / (k + 1);
+            integral += hermite * power;
+            double next = 2.0 * ANCHOR_Y * hermite - 2.0 * k * hermitePrevious;
+            hermitePrevious = hermite;
+            hermite = next;
+        }
+        return Math.exp(y * y - ANCHOR_Y * ANCHOR_Y) * (ERFCX_AT_ANCHOR + TWO_OVER_SQRT_PI * integral);
     }
 
     /**
@@ -280,44 +335,64 @@ public final class Faddeeva {
      * Σ₁ = Σ e^(−a²n²−x²)/(a²n²+y²), Σ₂,₃ = Σ e^(−(an±x)²)/(a²n²+y²), Σ₄,₅ = Σ an·e^(−(an±x)²)/(a²n²+y²), n ≥ 1.
      */
     private static double zaghloulAli(double x, double y, boolean realPart) {
+        return zaghloulAli(x, y, erfcxNonNegative(y), realPart);
+    }
+
+    /**
+     * K(x, y) for x ≥ 0, y ≥ 0 and x² + y² &lt; 64 with erfcx(y) supplied by the caller, so that a caller holding y
+     * fixed over many x (a line on a grid) computes it once.
+     */
+    static double zaghloulAliK(double x, double y, double erfcxOfY) {
+        return zaghloulAli(x, y, erfcxOfY, true);
+    }
+
+    private static double zaghloulAli(double x, double y, double erfcxOfY, boolean realPart) {
         double y2 = y * y;
         double expMinusX2 = Math.exp(-x * x);
 
-        // Σ₁: Gaussian in n centred at 0.
+        // Σ₁: Gaussian in n centred at 0; e^(−a²n²) from a table.
         double sum1 = 0.0;
-        for (int n = 1; ZA_STEP_SQUARED * n * n < NEGLIGIBLE_EXPONENT; n++) {
-            double an2 = ZA_STEP_SQUARED * n * n;
-            sum1 += Math.exp(-an2) / (an2 + y2);
+        for (int n = 1; n < EXP_MINUS_A2N2.length; n++) {
+            sum1 += EXP_MINUS_A2N2[n] / (ZA_STEP_SQUARED * n * n + y2);
         }
         sum1 *= expMinusX2;
 
-        // Σ₂, Σ₄: terms e^(−(an+x)²), significant only for small x.
+        // Consecutive Gaussian terms differ by e^(−(a(n+1)±x)²)/e^(−(an±x)²) = e^(−2a·u_n − a²)·e^(−2a²k) with
+        // u_n = an ± x at the first term and k terms further on: two exponentials per sum instead of one per term;
+        // the factors e^(−2a²k) come from a table, so rounding grows only linearly with the term count.
+
+        // Σ₂, Σ₄: terms e^(−(an+x)²), significant only while (a + x)² is below the negligible exponent.
         double sum2 = 0.0;
         double sum4 = 0.0;
-        for (int n = 1; ; n++) {
-            double u = ZA_STEP * n + x;
-            if (u * u >= NEGLIGIBLE_EXPONENT) {
-                break;
+        double u = ZA_STEP + x;
+        if (u * u < NEGLIGIBLE_EXPONENT) {
+            double term = Math.exp(-u * u);
+            double step = Math.exp(-2.0 * ZA_STEP * u - ZA_STEP_SQUARED);
+            for (int n = 1, k = 0; u * u < NEGLIGIBLE_EXPONENT; n++, k++) {
+                double weighted = term / (ZA_STEP_SQUARED * n * n + y2);
+                sum2 += weighted;
+                sum4 += weighted * (ZA_STEP * n);
+                term *= step * EXP_MINUS_2A2K[k];
+                u += ZA_STEP;
             }
-            double term = Math.exp(-u * u) / (ZA_STEP_SQUARED * n * n + y2);
-            sum2 += term;
-            sum4 += term * (ZA_STEP * n);
         }
 
-        // Σ₃, Σ₅: terms e^(−(an−x)²), summed over the window where the Gaussian is significant; computing each
-        // exponential directly (instead of as products of e^(±2ax)) avoids overflow and rounding build-up.
+        // Σ₃, Σ₅: terms e^(−(an−x)²), summed over the window where the Gaussian is significant.
         double sum3 = 0.0;
         double sum5 = 0.0;
         int nFirst = Math.max(1, (int) Math.floor((x - NEGLIGIBLE_DISTANCE) / ZA_STEP));
         int nLast = (int) Math.ceil((x + NEGLIGIBLE_DISTANCE) / ZA_STEP);
-        for (int n = nFirst; n <= nLast; n++) {
-            double u = ZA_STEP * n - x;
-            double term = Math.exp(-u * u) / (ZA_STEP_SQUARED * n * n + y2);
-            sum3 += term;
-            sum5 += term * (ZA_STEP * n);
+        double u0 = ZA_STEP * nFirst - x;
+        double term = Math.exp(-u0 * u0);
+        double step = Math.exp(-2.0 * ZA_STEP * u0 - ZA_STEP_SQUARED);
+        for (int n = nFirst, k = 0; n <= nLast; n++, k++) {
+            double weighted = term / (ZA_STEP_SQUARED * n * n + y2);
+            sum3 += weighted;
+            sum5 += weighted * (ZA_STEP * n);
+            term *= step * EXP_MINUS_2A2K[k];
         }
 
-        double coefficient1 = expMinusX2 * erfcxNonNegative(y) - ZA_FACTOR * y * sum1;
+        double coefficient1 = expMinusX2 * erfcxOfY - ZA_FACTOR * y * sum1;
         double xy = x * y;
         if (realPart) {
             double sinXy = Math.sin(xy);

@@ -13,7 +13,8 @@ import static org.linewright.broadening.voigt.LineShapeConstants.SQRT_LN2_OVER_P
  * <p>{@link #value} has the accuracy of {@link Faddeeva#voigtK} (relative error below 1×10⁻¹³).
  * {@link #addProfile} uses, for |z| ≥ 250 (the far wing, most grid points of a line), the one-level continued
  * fraction K ≈ y(s + ½)/(√π·(s² − x² + y² + ¼)), s = x² + y², whose relative error is below 2.5/|z|⁴ ≤ 7×10⁻¹⁰,
- * costing one division per point; nearer the centre it calls {@link Faddeeva#voigtK}.
+ * costing one division per point; nearer the centre it uses the methods of {@link Faddeeva}, with the
+ * line-constant erfcx(y) computed once per line.
  */
 public final class VoigtProfile {
 
@@ -101,11 +102,19 @@ public final class VoigtProfile {
         }
         double y = scale * lorentzHwhmCm1;
         double y2 = y * y;
+        // erfcx(y) is needed by every point near the centre and depends on the line only
+        double erfcxOfY = Faddeeva.erfcx(y);
         for (int i = from; i < to; i++) {
             double x = scale * (gridCm1[i] - centerCm1);
-            double x2 = x * x;
-            double s = x2 + y2;
-            double k = s >= FAST_FAR_WING_RADIUS_SQUARED ? Faddeeva.farWingK(Math.abs(x), y) : Faddeeva.voigtK(x, y);
+            double s = x * x + y2;
+            double k;
+            if (s >= FAST_FAR_WING_RADIUS_SQUARED) {
+                k = Faddeeva.farWingK(Math.abs(x), y);
+            } else if (s < Faddeeva.SERIES_RADIUS_SQUARED) {
+                k = Faddeeva.zaghloulAliK(Math.abs(x), y, erfcxOfY);
+            } else {
+                k = Faddeeva.voigtK(x, y);
+            }
             out[i] += norm * k - offset;
         }
     }
