@@ -51,6 +51,8 @@ public final class Faddeeva {
     /** √NEGLIGIBLE_EXPONENT: half-width, in units of x, of the window of significant Gaussian terms. */
     private static final double NEGLIGIBLE_DISTANCE = Math.sqrt(NEGLIGIBLE_EXPONENT);
 
+    /** Number of entries of the per-line table of {@link #zaghloulAliReciprocals}: n = 0 .. the largest n used. */
+    static final int ZA_TABLE_LENGTH = (int) Math.ceil((8.0 + NEGLIGIBLE_DISTANCE) / ZA_STEP) + 2;
     /** e^(−a²n²) for n = 0.. while a²n² is below the negligible exponent. */
     private static final double[] EXP_MINUS_A2N2;
     /** e^(−2a²k) for k = 0 .. (largest number of terms in a Zaghloul–Ali window). */
@@ -335,27 +337,59 @@ public final class Faddeeva {
      * Σ₁ = Σ e^(−a²n²−x²)/(a²n²+y²), Σ₂,₃ = Σ e^(−(an±x)²)/(a²n²+y²), Σ₄,₅ = Σ an·e^(−(an±x)²)/(a²n²+y²), n ≥ 1.
      */
     private static double zaghloulAli(double x, double y, boolean realPart) {
-        return zaghloulAli(x, y, erfcxNonNegative(y), realPart);
+        return zaghloulAli(x, y, erfcxNonNegative(y), zaghloulAliSum1(y), null, realPart);
     }
 
     /**
-     * K(x, y) for x ≥ 0, y ≥ 0 and x² + y² &lt; 64 with erfcx(y) supplied by the caller, so that a caller holding y
-     * fixed over many x (a line on a grid) computes it once.
+     * The y-only part of Σ₁ of the Zaghloul–Ali series, Σ_{n≥1} e^(−a²n²)/(a²n² + y²).
+     *
+     * @param y imaginary part, ≥ 0
+     * @return the sum
      */
-    static double zaghloulAliK(double x, double y, double erfcxOfY) {
-        return zaghloulAli(x, y, erfcxOfY, true);
-    }
-
-    private static double zaghloulAli(double x, double y, double erfcxOfY, boolean realPart) {
+    static double zaghloulAliSum1(double y) {
         double y2 = y * y;
-        double expMinusX2 = Math.exp(-x * x);
-
-        // Σ₁: Gaussian in n centred at 0; e^(−a²n²) from a table.
         double sum1 = 0.0;
         for (int n = 1; n < EXP_MINUS_A2N2.length; n++) {
             sum1 += EXP_MINUS_A2N2[n] / (ZA_STEP_SQUARED * n * n + y2);
         }
-        sum1 *= expMinusX2;
+        return sum1;
+    }
+
+    /**
+     * Fills {@code reciprocals[n] = 1/(a²n² + y²)} for n = 0 .. {@link #ZA_TABLE_LENGTH} − 1, the denominators of
+     * the Zaghloul–Ali sums, which depend on y only.
+     *
+     * @param y           imaginary part, ≥ 0
+     * @param reciprocals array of at least {@link #ZA_TABLE_LENGTH} entries
+     */
+    static void zaghloulAliReciprocals(double y, double[] reciprocals) {
+        double y2 = y * y;
+        for (int n = 0; n < ZA_TABLE_LENGTH; n++) {
+            reciprocals[n] = 1.0 / (ZA_STEP_SQUARED * n * n + y2);
+        }
+    }
+
+    /**
+     * K(x, y) for x ≥ 0, y ≥ 0 and x² + y² &lt; 64 with the y-only quantities supplied by the caller, so that a
+     * caller holding y fixed over many x (a line on a grid) computes them once.
+     *
+     * @param x           real part, ≥ 0
+     * @param y           imaginary part, ≥ 0
+     * @param erfcxOfY    {@link #erfcx}(y)
+     * @param sum1OfY     {@link #zaghloulAliSum1}(y)
+     * @param reciprocals table from {@link #zaghloulAliReciprocals}(y)
+     * @return K(x, y)
+     */
+    static double zaghloulAliK(double x, double y, double erfcxOfY, double sum1OfY, double[] reciprocals) {
+        return zaghloulAli(x, y, erfcxOfY, sum1OfY, reciprocals, true);
+    }
+
+    /** The series; {@code reciprocals} may be null, then the denominators are divided out term by term. */
+    private static double zaghloulAli(double x, double y, double erfcxOfY, double sum1OfY, double[] reciprocals,
+                                      boolean realPart) {
+        double y2 = y * y;
+        double expMinusX2 = Math.exp(-x * x);
+        double sum1 = sum1OfY * expMinusX2;
 
         // Consecutive Gaussian terms differ by e^(−(a(n+1)±x)²)/e^(−(an±x)²) = e^(−2a·u_n − a²)·e^(−2a²k) with
         // u_n = an ± x at the first term and k terms further on: two exponentials per sum instead of one per term;
@@ -369,7 +403,8 @@ public final class Faddeeva {
             double term = Math.exp(-u * u);
             double step = Math.exp(-2.0 * ZA_STEP * u - ZA_STEP_SQUARED);
             for (int n = 1, k = 0; u * u < NEGLIGIBLE_EXPONENT; n++, k++) {
-                double weighted = term / (ZA_STEP_SQUARED * n * n + y2);
+                double weighted = reciprocals != null ? term * reciprocals[n]
+                        : term / (ZA_STEP_SQUARED * n * n + y2);
                 sum2 += weighted;
                 sum4 += weighted * (ZA_STEP * n);
                 term *= step * EXP_MINUS_2A2K[k];
@@ -386,7 +421,7 @@ public final class Faddeeva {
         double term = Math.exp(-u0 * u0);
         double step = Math.exp(-2.0 * ZA_STEP * u0 - ZA_STEP_SQUARED);
         for (int n = nFirst, k = 0; n <= nLast; n++, k++) {
-            double weighted = term / (ZA_STEP_SQUARED * n * n + y2);
+            double weighted = reciprocals != null ? term * reciprocals[n] : term / (ZA_STEP_SQUARED * n * n + y2);
             sum3 += weighted;
             sum5 += weighted * (ZA_STEP * n);
             term *= step * EXP_MINUS_2A2K[k];

@@ -14,12 +14,17 @@ import static org.linewright.broadening.voigt.LineShapeConstants.SQRT_LN2_OVER_P
  * {@link #addProfile} uses, for |z| ≥ 250 (the far wing, most grid points of a line), the one-level continued
  * fraction K ≈ y(s + ½)/(√π·(s² − x² + y² + ¼)), s = x² + y², whose relative error is below 2.5/|z|⁴ ≤ 7×10⁻¹⁰,
  * costing one division per point; nearer the centre it uses the methods of {@link Faddeeva}, with the
- * line-constant erfcx(y) computed once per line.
+ * quantities that depend on y only (erfcx(y), the y-part of the first sum and the sums' denominators) computed once
+ * per line.
  */
 public final class VoigtProfile {
 
     /** |z|² from which {@link #addProfile} uses the one-level closed form (relative error ≤ 6.4e-10). */
     static final double FAST_FAR_WING_RADIUS_SQUARED = 250.0 * 250.0;
+
+    /** Per-thread table of the series denominators of the current line (reused, so the kernel allocates nothing). */
+    private static final ThreadLocal<double[]> SERIES_RECIPROCALS =
+            ThreadLocal.withInitial(() -> new double[Faddeeva.ZA_TABLE_LENGTH]);
 
     private VoigtProfile() {
     }
@@ -102,8 +107,16 @@ public final class VoigtProfile {
         }
         double y = scale * lorentzHwhmCm1;
         double y2 = y * y;
-        // erfcx(y) is needed by every point near the centre and depends on the line only
-        double erfcxOfY = Faddeeva.erfcx(y);
+        // the series near the centre needs y-only quantities: compute them once per line
+        double erfcxOfY = 0;
+        double sum1OfY = 0;
+        double[] reciprocals = null;
+        if (y2 < Faddeeva.SERIES_RADIUS_SQUARED) {
+            erfcxOfY = Faddeeva.erfcx(y);
+            sum1OfY = Faddeeva.zaghloulAliSum1(y);
+            reciprocals = SERIES_RECIPROCALS.get();
+            Faddeeva.zaghloulAliReciprocals(y, reciprocals);
+        }
         for (int i = from; i < to; i++) {
             double x = scale * (gridCm1[i] - centerCm1);
             double s = x * x + y2;
@@ -111,7 +124,7 @@ public final class VoigtProfile {
             if (s >= FAST_FAR_WING_RADIUS_SQUARED) {
                 k = Faddeeva.farWingK(Math.abs(x), y);
             } else if (s < Faddeeva.SERIES_RADIUS_SQUARED) {
-                k = Faddeeva.zaghloulAliK(Math.abs(x), y, erfcxOfY);
+                k = Faddeeva.zaghloulAliK(Math.abs(x), y, erfcxOfY, sum1OfY, reciprocals);
             } else {
                 k = Faddeeva.voigtK(x, y);
             }
