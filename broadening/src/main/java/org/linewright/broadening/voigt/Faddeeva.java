@@ -257,7 +257,7 @@ public final class Faddeeva {
         if (s > LEADING_TERM_RADIUS_SQUARED) {
             // s² would overflow for |z| ≳ 1e154; the correction terms are below 1e-16 here anyway.
             double r = Math.hypot(x, y);
-            return (y / r) * (INV_SQRT_PI / r);
+            return r == Double.POSITIVE_INFINITY ? 0.0 : (y / r) * (INV_SQRT_PI / r);
         }
         return y * (s + 0.5) * INV_SQRT_PI / (s * s - x2 + y2 + 0.25);
     }
@@ -269,7 +269,7 @@ public final class Faddeeva {
         double s = x2 + y2;
         if (s > LEADING_TERM_RADIUS_SQUARED) {
             double r = Math.hypot(x, y);
-            return (x / r) * (INV_SQRT_PI / r);
+            return r == Double.POSITIVE_INFINITY ? 0.0 : (x / r) * (INV_SQRT_PI / r);
         }
         return x * (s - 0.5) * INV_SQRT_PI / (s * s - x2 + y2 + 0.25);
     }

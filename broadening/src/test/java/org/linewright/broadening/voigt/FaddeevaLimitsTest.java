@@ -105,6 +105,19 @@ class FaddeevaLimitsTest {
         assertEquals(0.2082189382028316, Faddeeva.voigtL(1, 1), 1e-15);
     }
 
+    /** Limits at infinity: w(z) → 0 as |z| → ∞ in the upper half plane (w ~ i/(√π z), A&amp;S 7.1.23). */
+    @Test
+    void infiniteArguments() {
+        double inf = Double.POSITIVE_INFINITY;
+        assertEquals(0.0, Faddeeva.voigtK(inf, 1.0));
+        assertEquals(0.0, Faddeeva.voigtL(inf, 1.0));
+        assertEquals(0.0, Faddeeva.voigtK(-inf, 1.0));
+        assertEquals(0.0, Faddeeva.voigtK(3.0, inf));
+        assertEquals(0.0, Faddeeva.voigtL(3.0, inf));
+        assertEquals(0.0, Faddeeva.erfcx(inf));
+        assertTrue(Double.isNaN(Faddeeva.voigtK(Double.NaN, 1.0)));
+    }
+
     /** Σ_{m=0}^{M} (−1)ᵐ (2m−1)!!/(2y²)ᵐ /(√π y), A&amp;S 7.1.23; for y ≥ 26 ten terms reach 1e-20. */
     private static double asymptoticErfcx(double y) {
         double term = 1.0;
