@@ -13,7 +13,9 @@ package org.linewright.broadening.voigt;
  * <ul>
  *   <li>|z| &lt; 8: the series of M.R. Zaghloul and A.N. Ali, "Algorithm 916: computing the Faddeyeva and Voigt
  *       functions", ACM Trans. Math. Softw. 38 (2011) 15, with the step a = π/√(−ln(ε/2)) for double precision,
- *       the three sums evaluated term by term around their Gaussian peaks, and erfcx(y) from this class.
+ *       the Gaussian sums taken only over the window of significant terms (e^(−u²) &gt; e^(−42)), their
+ *       exponentials by a table-driven two-term recurrence (two calls of exp per sum), and erfcx(y) from this
+ *       class.
  *       The series keeps its relative accuracy in K even where K is tiny (small y, moderate x), because the
  *       terms that carry y are all positive.</li>
  *   <li>8 ≤ |z| &lt; 4000: the Laplace continued fraction w(z) = (i/√π)/(z − ½/(z − 1/(z − (3/2)/(z − …)))),
