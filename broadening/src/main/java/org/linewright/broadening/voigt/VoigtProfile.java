@@ -13,7 +13,8 @@ import static org.linewright.broadening.voigt.LineShapeConstants.SQRT_LN2_OVER_P
  * <p>{@link #value} has the accuracy of {@link Faddeeva#voigtK} (relative error below 1×10⁻¹³).
  * {@link #addProfile} uses, for |z| ≥ 250 (the far wing, most grid points of a line), the one-level continued
  * fraction K ≈ y(s + ½)/(√π·(s² − x² + y² + ¼)), s = x² + y², whose relative error is below 2.5/|z|⁴ ≤ 7×10⁻¹⁰,
- * costing one division per point; nearer the centre it uses the methods of {@link Faddeeva}, with the
+ * costing one division per point; for 50 ≤ |z| &lt; 250 the two-level fraction in closed form (one division,
+ * relative error ≤ 4×10⁻¹⁰); nearer the centre the methods of {@link Faddeeva}, with the
  * quantities that depend on y only (erfcx(y), the y-part of the first sum and the sums' denominators) computed once
  * per line.
  */
@@ -21,6 +22,8 @@ public final class VoigtProfile {
 
     /** |z|² from which {@link #addProfile} uses the one-level closed form (relative error ≤ 6.4e-10). */
     static final double FAST_FAR_WING_RADIUS_SQUARED = 250.0 * 250.0;
+    /** |z|² from which {@link #addProfile} uses the two-level closed form (relative error ≤ 4e-10). */
+    static final double TWO_LEVEL_RADIUS_SQUARED = 50.0 * 50.0;
 
     /** Per-thread table of the series denominators of the current line (reused, so the kernel allocates nothing). */
     private static final ThreadLocal<double[]> SERIES_RECIPROCALS =
@@ -123,6 +126,8 @@ public final class VoigtProfile {
             double k;
             if (s >= FAST_FAR_WING_RADIUS_SQUARED) {
                 k = Faddeeva.farWingK(Math.abs(x), y);
+            } else if (s >= TWO_LEVEL_RADIUS_SQUARED) {
+                k = Faddeeva.twoLevelK(Math.abs(x), y);
             } else if (s < Faddeeva.SERIES_RADIUS_SQUARED) {
                 k = Faddeeva.zaghloulAliK(Math.abs(x), y, erfcxOfY, sum1OfY, reciprocals);
             } else {

@@ -61,6 +61,29 @@ class FaddeevaReferenceTest {
         assertTrue(worst <= CLAIMED_RELATIVE_ERROR, "max relative error of K " + worst + where);
     }
 
+    /**
+     * The closed forms used by the profile kernel in the far wing against the same table: one level for
+     * |z| ≥ 250 (bound 2.5/|z|⁴ = 6.4e-10) and two levels for |z| ≥ 50 (bound 4e-10).
+     */
+    @Test
+    void farWingClosedFormsMatchWofz() {
+        int checked = 0;
+        for (double[] r : ROWS) {
+            double x = Math.abs(r[0]);
+            double y = r[1];
+            double s = x * x + y * y;
+            if (s >= VoigtProfile.FAST_FAR_WING_RADIUS_SQUARED) {
+                assertEquals(r[2], Faddeeva.farWingK(x, y), 6.5e-10 * r[2], "one level at x=" + x + " y=" + y);
+                checked++;
+            }
+            if (s >= VoigtProfile.TWO_LEVEL_RADIUS_SQUARED && s < 1e100) {
+                assertEquals(r[2], Faddeeva.twoLevelK(x, y), 4e-10 * r[2], "two levels at x=" + x + " y=" + y);
+                checked++;
+            }
+        }
+        assertTrue(checked > 2000, "rows checked: " + checked);
+    }
+
     @Test
     void imaginaryPartMatchesWofzRelativeToModulus() {
         double worst = 0;
