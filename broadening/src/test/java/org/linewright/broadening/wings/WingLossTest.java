@@ -80,6 +80,24 @@ class WingLossTest {
         assertEquals(8, checked);
     }
 
+    /**
+     * Near |Z| = 50 the asymptotic form and the numerical quadrature meet; both are checked against SciPy above.
+     * Here they must agree with each other to 1e-10 on either side of the switch (the quadrature is reached just
+     * inside |Z| = 50, the asymptotic form just outside; the tail changes by far less than 1e-10 in between).
+     */
+    @Test
+    void voigtTailContinuousAtMethodSwitch() {
+        double alphaD = 0.01;
+        double scale = Math.sqrt(Math.log(2)) / alphaD;
+        for (double y : new double[] {1e-3, 1.0, 10.0, 30.0}) {
+            double gamma = y / scale;
+            double x = Math.sqrt(2500 - y * y);
+            double inside = WingLoss.voigtTailFraction((x - 1e-9) / scale, alphaD, gamma);
+            double outside = WingLoss.voigtTailFraction((x + 1e-9) / scale, alphaD, gamma);
+            assertEquals(inside, outside, 1e-10 * inside, "y=" + y);
+        }
+    }
+
     /** Voigt tail tends to the Lorentz and Gaussian closed forms in its limits. */
     @Test
     void voigtTailLimits() {
