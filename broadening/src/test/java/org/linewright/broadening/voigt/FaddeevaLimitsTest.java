@@ -118,6 +118,25 @@ class FaddeevaLimitsTest {
         assertTrue(Double.isNaN(Faddeeva.voigtK(Double.NaN, 1.0)));
     }
 
+    /**
+     * On the real axis L(x, 0) = (2/√π)·F(x), F Dawson's integral (A&amp;S 7.1.3 with 7.1.17); F from
+     * scipy.special.dawsn (SciPy 1.17.1), printed with repr.
+     */
+    @Test
+    void realAxisImaginaryPartIsDawson() {
+        double[][] dawson = {
+            {0.001, 0.0009999993333336}, {0.5, 0.4244363835020223}, {1.0, 0.5380795069127684},
+            {3.0, 0.17827103061055827}, {7.9, 0.0638109032198449}, {8.5, 0.05923937177997215},
+            {20.0, 0.02503136792640365}, {1000.0, 0.000500000250000375}};
+        for (double[] row : dawson) {
+            double expected = 2 / Faddeeva.SQRT_PI * row[1];
+            // the accuracy of L is stated relative to |w| = hypot(e^(−x²), L)
+            double modulus = Math.hypot(Math.exp(-row[0] * row[0]), expected);
+            assertEquals(expected, Faddeeva.voigtL(row[0], 0), 1e-14 * modulus, "x=" + row[0]);
+            assertEquals(-expected, Faddeeva.voigtL(-row[0], 0), 1e-14 * modulus, "x=" + -row[0]);
+        }
+    }
+
     /** Σ_{m=0}^{M} (−1)ᵐ (2m−1)!!/(2y²)ᵐ /(√π y), A&amp;S 7.1.23; for y ≥ 26 ten terms reach 1e-20. */
     private static double asymptoticErfcx(double y) {
         double term = 1.0;
