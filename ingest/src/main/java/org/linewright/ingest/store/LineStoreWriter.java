@@ -1,0 +1,374 @@
+package org.linewright.ingest.store;
+
+import java.io.IOException;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.TreeMap;
+import java.util.UUID;
+import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
+import org.linewright.ingest.line.TextColumn;
+
+/**
+ * Writes the lines of one source into a line store as one Arrow IPC file sorted by wavenumber (stable for
+ * equal wavenumbers), with bounded memory whatever the number of lines.
+ *
+ * <p>Lines arriving in ascending order (the usual case) stream straight into the file. From the first line
+ * out of order on, lines are collected in runs of at most {@code runLines} lines, each sorted in memory and
+ * spilled to a temporary Arrow file; {@link #commit} then merges the runs (k-way, ties in input order).
+ *
+ * <p>Atomicity: everything is written under temporary names ({@code .partial-...}) in the store directory;
+ * {@link #commit} forces the finished file to disk, renames it over the source's file (replacing an earlier
+ * ingest of the same source name) and then updates the store index atomically. A crash or {@link #abort()}
+ * never leaves a file the store would list; the earlier file stays intact until the rename.
+ *
+ * <p>Use: {@code create}, {@code write} batches, {@code commit(counts)}; {@code close()} without commit
+ * aborts. Not thread-safe.
+ */
+public final class LineStoreWriter implements AutoCloseable {
+    /** Default maximum lines per sorted run (≈ 90 MB of heap for the run buffer). */
+    public static final int DEFAULT_RUN_LINES = 262_144;
+    /** Lines per record batch written by the merge and the run spills. */
+    static final int OUTPUT_BATCH_LINES = 65_536;
+    private static final String PARTIAL_PREFIX = ".partial-";
+
+    private final Path storeDir;
+    private final String sourceName;
+    private final SourceMetadata metadata;
+    private final Instant created;
+    private final int runLines;
+    private final Map<String, String> schemaMetadata;
+    /** The file being streamed (final when no line came out of order, else the first run). */
+    private ArrowLineFileWriter stream;
+    private final List<Path> runs = new ArrayList<>();
+    private LineBatch runBuffer;
+    private int[] orderA;
+    private int[] orderB;
+    private LineBatch gather;
+    private long linesWritten;
+    private boolean done;
+
+    private LineStoreWriter(Path storeDir, String sourceName, SourceMetadata metadata, int runLines) {
+        this.storeDir = storeDir;
+        this.sourceName = sourceName;
+        this.metadata = metadata;
+        this.runLines = runLines;
+        this.created = Instant.now();
+        Map<String, String> m = new LinkedHashMap<>();
+        m.put(StoreColumns.KEY_STORE_FORMAT, StoreColumns.STORE_FORMAT_VERSION);
+        m.put(StoreColumns.KEY_SOURCE_NAME, sourceName);
+        m.put(StoreColumns.KEY_SOURCE_FILE, metadata.sourceFileName());
+        m.put(StoreColumns.KEY_SOURCE_SHA256, metadata.sourceSha256());
+        m.put(StoreColumns.KEY_READER_FORMAT, metadata.readerFormat());
+        m.put(StoreColumns.KEY_TOOL_VERSION, metadata.toolVersion());
+        m.put(StoreColumns.KEY_CREATED, created.toString());
+        m.put(StoreColumns.KEY_SORT_ORDER, StoreColumns.SORT_ORDER_VALUE);
+        metadata.creationParameters().forEach((k, v) -> m.put(StoreColumns.PARAM_PREFIX + k, v));
+        this.schemaMetadata = m;
+    }
+
+    /** Starts writing source {@code sourceName} into the store directory (created if missing). */
+    public static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata) throws IOException {
+        return create(storeDir, sourceName, metadata, DEFAULT_RUN_LINES);
+    }
+
+    /** As {@link #create(Path, String, SourceMetadata)} with the maximum lines per sorted run of the external sort. */
+    public static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata, int runLines)
+            throws IOException {
+        Objects.requireNonNull(metadata, "metadata");
+        if (sourceName == null || sourceName.isBlank()) {
+            throw new IllegalArgumentException("source name must not be blank");
+        }
+        if (runLines < 1) {
+            throw new IllegalArgumentException("runLines must be positive: " + runLines);
+        }
+        Files.createDirectories(storeDir);
+        return new LineStoreWriter(storeDir, sourceName, metadata, runLines);
+    }
+
+    /**
+     * Adds the batch's lines (copied; the batch may be reused). Wavenumbers may come in any order but must
+     * be numbers.
+     *
+     * @throws IllegalArgumentException on a NaN wavenumber or a text column whose row count differs from the batch's
+     */
+    public void write(LineBatch batch) throws IOException {
+        checkOpen();
+        int n = batch.size;
+        if (n == 0) {
+            return;
+        }
+        double[] wn = batch.wavenumberCm1;
+        boolean ascending = true;
+        double previous = stream == null ? Double.NEGATIVE_INFINITY : stream.lastWavenumberCm1();
+        for (int i = 0; i < n; i++) {
+            double w = wn[i];
+            if (Double.isNaN(w)) {
+                throw new IllegalArgumentException("line without wavenumber (NaN) from source line " + batch.sourceLine[i]);
+            }
+            ascending &= w >= previous;
+            previous = w;
+        }
+        for (LineColumn c : StoreColumns.COLUMNS) {
+            if (c.kind() == LineColumn.Kind.TEXT && c.text(batch).rows() != n) {
+                throw new IllegalArgumentException("text column " + c.columnName() + " has " + c.text(batch).rows()
+                        + " rows but the batch has " + n);
+            }
+        }
+        if (runBuffer == null && ascending) {
+            if (stream == null) {
+                stream = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
+            }
+            stream.write(batch);
+        } else {
+            if (runBuffer == null) {
+                runBuffer = new LineBatch(runLines);
+                orderA = new int[runLines];
+                orderB = new int[runLines];
+                gather = new LineBatch(Math.min(runLines, OUTPUT_BATCH_LINES));
+            }
+            int from = 0;
+            while (from < n) {
+                int take = Math.min(n - from, runLines - runBuffer.size);
+                copyRows(batch, from, runBuffer, runBuffer.size, take);
+                runBuffer.size += take;
+                from += take;
+                if (runBuffer.isFull()) {
+                    spillRun();
+                }
+            }
+        }
+        linesWritten += n;
+    }
+
+    /** Sorts the run buffer (stable) and writes it as a temporary run file. */
+    private void spillRun() throws IOException {
+        int n = runBuffer.size;
+        if (n == 0) {
+            return;
+        }
+        int[] order = StableOrder.permutation(runBuffer.wavenumberCm1, n, orderA, orderB);
+        Path path = partialPath("run");
+        runs.add(path);
+        try (ArrowLineFileWriter run = new ArrowLineFileWriter(path, schemaMetadata)) {
+            for (int from = 0; from < n; from += gather.capacity()) {
+                int m = Math.min(gather.capacity(), n - from);
+                gather.clear();
+                gatherRows(runBuffer, order, from, gather, m);
+                gather.size = m;
+                run.write(gather);
+            }
+            run.finish(Map.of());
+        }
+        runBuffer.clear();
+    }
+
+    /**
+     * Finishes the file, makes it the store's file for this source (replacing an earlier one) and updates
+     * the index.
+     *
+     * @return the committed source as the store now lists it
+     */
+    public SourceInfo commit(IngestCounts counts) throws IOException {
+        checkOpen();
+        Objects.requireNonNull(counts, "counts");
+        Map<String, String> footer = new LinkedHashMap<>();
+        footer.put(StoreColumns.KEY_RECORDS_READ, Long.toString(counts.recordsRead()));
+        footer.put(StoreColumns.KEY_LINES_KEPT, Long.toString(counts.linesKept()));
+        footer.put(StoreColumns.KEY_RECORDS_REJECTED, Long.toString(counts.recordsRejected()));
+        footer.put(StoreColumns.KEY_DUPLICATES, Long.toString(counts.duplicates()));
+        ArrowLineFileWriter finished;
+        try {
+            if (runBuffer == null) {
+                if (stream == null) {
+                    stream = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
+                }
+                finished = stream;
+                finished.finish(footer);
+            } else {
+                finished = mergeRuns(footer);
+            }
+            Path target = storeDir.resolve(fileName(sourceName));
+            Files.move(finished.path(), target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            StoreIndex.syncDirectory(storeDir);
+            try (FileChannel lock = StoreIndex.lock(storeDir)) {
+                TreeMap<String, StoreIndex.Entry> entries = StoreIndex.read(storeDir);
+                ArrowLineFile file = ArrowLineFile.open(target);
+                SourceInfo info = LineStore.describe(sourceName, file);
+                entries.put(sourceName, new StoreIndex.Entry(sourceName, target.getFileName().toString(), info.lines(),
+                        info.minWavenumberCm1(), info.maxWavenumberCm1(), metadata.sourceSha256(), metadata.readerFormat()));
+                StoreIndex.write(storeDir, entries);
+                done = true;
+                return info;
+            }
+        } finally {
+            if (!done) {
+                abort();
+            }
+        }
+    }
+
+    private ArrowLineFileWriter mergeRuns(Map<String, String> footer) throws IOException {
+        if (stream != null) {
+            // The lines streamed before the first out-of-order line form the first (oldest) run.
+            stream.finish(Map.of());
+            runs.add(0, stream.path());
+            stream = null;
+        }
+        spillRun();
+        runBuffer = null;
+        gather = null;
+        orderA = null;
+        orderB = null;
+        List<ArrowLineFile> files = new ArrayList<>();
+        for (Path run : runs) {
+            files.add(ArrowLineFile.open(run));
+        }
+        ArrowLineFileWriter out = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
+        stream = out;
+        LineBatch batch = new LineBatch(OUTPUT_BATCH_LINES);
+        try (LineCursor cursor = new LineCursor(files, LineQuery.all())) {
+            while (cursor.read(batch)) {
+                out.write(batch);
+            }
+        }
+        out.finish(footer);
+        deleteRuns();
+        return out;
+    }
+
+    /** Discards everything written so far; the store is left as it was. Idempotent. */
+    public void abort() {
+        if (done) {
+            return;
+        }
+        done = true;
+        if (stream != null) {
+            stream.discard();
+            stream = null;
+        }
+        deleteRuns();
+        runBuffer = null;
+    }
+
+    /** Aborts unless committed. */
+    @Override
+    public void close() {
+        abort();
+    }
+
+    /** Lines accepted so far. */
+    public long linesWritten() {
+        return linesWritten;
+    }
+
+    private void deleteRuns() {
+        for (Path run : runs) {
+            try {
+                Files.deleteIfExists(run);
+            } catch (IOException ignored) {
+                // a leftover temporary file is never listed by the store
+            }
+        }
+        runs.clear();
+    }
+
+    private void checkOpen() {
+        if (done) {
+            throw new IllegalStateException("writer for source '" + sourceName + "' is already committed or aborted");
+        }
+    }
+
+    private Path partialPath(String kind) {
+        return storeDir.resolve(PARTIAL_PREFIX + kind + "-" + UUID.randomUUID() + ".arrow");
+    }
+
+    /**
+     * The store file name of a source: {@code lines-<name with unusual characters replaced>-<hash>.arrow},
+     * where the hash (8 hex digits of the SHA-256 of the name) keeps distinct names apart.
+     */
+    static String fileName(String sourceName) {
+        StringBuilder slug = new StringBuilder();
+        for (int i = 0; i < sourceName.length() && slug.length() < 64; i++) {
+            char c = sourceName.charAt(i);
+            slug.append((c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || (c >= '0' && c <= '9') || c == '-' || c == '_'
+                    || (c == '.' && i > 0) ? c : '_');
+        }
+        try {
+            byte[] digest = MessageDigest.getInstance("SHA-256").digest(sourceName.getBytes(StandardCharsets.UTF_8));
+            return "lines-" + slug + "-" + HexFormat.of().formatHex(digest, 0, 4) + ".arrow";
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
+        }
+    }
+
+    /** Copies rows {@code [from, from+n)} of every column of {@code src} to rows {@code [to, to+n)} of {@code dst}. */
+    static void copyRows(LineBatch src, int from, LineBatch dst, int to, int n) {
+        for (LineColumn c : StoreColumns.COLUMNS) {
+            switch (c.kind()) {
+                case INT -> System.arraycopy(c.ints(src), from, c.ints(dst), to, n);
+                case LONG -> System.arraycopy(c.longs(src), from, c.longs(dst), to, n);
+                case DOUBLE -> System.arraycopy(c.doubles(src), from, c.doubles(dst), to, n);
+                case TEXT -> {
+                    TextColumn s = c.text(src);
+                    TextColumn d = c.text(dst);
+                    for (int i = from; i < from + n; i++) {
+                        d.append(s.bytes(), s.start(i), s.length(i));
+                    }
+                }
+                default -> throw new AssertionError(c);
+            }
+        }
+    }
+
+    /** Copies rows {@code order[from..from+n)} of {@code src} to rows {@code [0, n)} of {@code dst}. */
+    private static void gatherRows(LineBatch src, int[] order, int from, LineBatch dst, int n) {
+        for (LineColumn c : StoreColumns.COLUMNS) {
+            switch (c.kind()) {
+                case INT -> {
+                    int[] s = c.ints(src);
+                    int[] d = c.ints(dst);
+                    for (int i = 0; i < n; i++) {
+                        d[i] = s[order[from + i]];
+                    }
+                }
+                case LONG -> {
+                    long[] s = c.longs(src);
+                    long[] d = c.longs(dst);
+                    for (int i = 0; i < n; i++) {
+                        d[i] = s[order[from + i]];
+                    }
+                }
+                case DOUBLE -> {
+                    double[] s = c.doubles(src);
+                    double[] d = c.doubles(dst);
+                    for (int i = 0; i < n; i++) {
+                        d[i] = s[order[from + i]];
+                    }
+                }
+                case TEXT -> {
+                    TextColumn s = c.text(src);
+                    TextColumn d = c.text(dst);
+                    for (int i = 0; i < n; i++) {
+                        int r = order[from + i];
+                        d.append(s.bytes(), s.start(r), s.length(r));
+                    }
+                }
+                default -> throw new AssertionError(c);
+            }
+        }
+    }
+
+}
