@@ -118,7 +118,7 @@ final class ArrowLineFile {
     /** Reads record-batch metadata and column bytes of one file through one channel and one scratch buffer. */
     final class BlockReader implements AutoCloseable {
         private final FileChannel channel;
-        private ByteBuffer scratch = ByteBuffer.allocateDirect(1 << 20);
+        private ByteBuffer scratch = ByteBuffer.allocateDirect(1 << 16);
         private final RecordBatch batch = new RecordBatch();
         private final Buffer buffer = new Buffer();
         private final FieldNode node = new FieldNode();

@@ -9,7 +9,7 @@ import org.linewright.ingest.line.TextColumn;
 /**
  * Walks the record batches of one store file in order, skipping those outside the query's wavenumber range
  * (per-batch ranges from the footer; binary search inside the batch), reading only the projected columns of
- * the rows in range, and dropping lines outside the species selection. Holds the current batch's selected
+ * the rows in range (in slices of bounded size), and dropping lines outside the species selection. Holds the current batch's selected
  * rows in {@link #buf} at {@code [pos, buf.size)}.
  */
 final class FileScanner implements AutoCloseable {
@@ -23,18 +23,33 @@ final class FileScanner implements AutoCloseable {
     private final boolean[] keep;
     private final int[] textOffsets;
     private byte[] textBytes = new byte[1 << 16];
+    private final double[] blockWavenumbers;
     private int nextBlock;
+    /** Rows of the current record batch still to load: [sliceFrom, blockEnd). */
+    private int sliceFrom;
+    private int blockEnd;
     private boolean exhausted;
 
-    FileScanner(ArrowLineFile file, LineQuery query, LineColumn[] numeric, LineColumn[] text) throws IOException {
+    /**
+     * @param sliceRows the most rows held at once (batches are read in slices of this size; bounds memory
+     *                  when many files are merged)
+     */
+    FileScanner(ArrowLineFile file, LineQuery query, LineColumn[] numeric, LineColumn[] text, int sliceRows) throws IOException {
         this.file = file;
         this.query = query;
         this.numeric = numeric;
         this.text = text;
-        int capacity = Math.max(1, file.maxBlockRows);
+        this.blockWavenumbers = new double[Math.max(1, file.maxBlockRows)];
+        int capacity = Math.max(1, Math.min(sliceRows, file.maxBlockRows));
         this.buf = new LineBatch(capacity);
         this.keep = new boolean[capacity];
         this.textOffsets = new int[capacity + 1];
+        for (LineColumn c : LineColumn.values()) {
+            // A double column the file lacks (an older layout) reads as missing values.
+            if (c.kind() == LineColumn.Kind.DOUBLE && !file.has(c)) {
+                java.util.Arrays.fill(c.doubles(buf), Double.NaN);
+            }
+        }
         this.reader = file.new BlockReader();
     }
 
@@ -54,31 +69,16 @@ final class FileScanner implements AutoCloseable {
     }
 
     private boolean loadNext() throws IOException {
-        double qMin = query.minWavenumberCm1();
-        double qMax = query.maxWavenumberCm1();
-        while (nextBlock < file.blocks.size()) {
-            int b = nextBlock++;
-            if (file.blockMaxCm1[b] < qMin) {
-                continue;
-            }
-            if (file.blockMinCm1[b] > qMax) {
-                // The file is sorted: no later batch can be in range.
-                nextBlock = file.blocks.size();
+        while (true) {
+            if (sliceFrom >= blockEnd && !openNextBlock()) {
                 return false;
             }
-            int rows = reader.open(b);
-            buf.clear();
-            double[] wn = buf.wavenumberCm1;
-            reader.readDoubles(LineColumn.WAVENUMBER, 0, rows, wn, 0);
-            int lo = file.blockMinCm1[b] >= qMin ? 0 : firstAtLeast(wn, rows, qMin);
-            int hi = file.blockMaxCm1[b] <= qMax ? rows : firstAbove(wn, rows, qMax);
-            if (lo >= hi) {
-                continue;
-            }
+            int lo = sliceFrom;
+            int hi = Math.min(blockEnd, lo + buf.capacity());
+            sliceFrom = hi;
             int n = hi - lo;
-            if (lo > 0) {
-                System.arraycopy(wn, lo, wn, 0, n);
-            }
+            buf.clear();
+            System.arraycopy(blockWavenumbers, lo, buf.wavenumberCm1, 0, n);
             for (LineColumn c : numeric) {
                 switch (c.kind()) {
                     case INT -> reader.readInts(c, lo, hi, c.ints(buf), 0);
@@ -101,6 +101,35 @@ final class FileScanner implements AutoCloseable {
             buf.size = kept;
             pos = 0;
             if (kept > 0) {
+                return true;
+            }
+        }
+    }
+
+    /**
+     * Opens the next record batch holding lines in the wavenumber range: reads its wavenumbers and sets the
+     * row range {@code [sliceFrom, blockEnd)} in range. False when no batch is left.
+     */
+    private boolean openNextBlock() throws IOException {
+        double qMin = query.minWavenumberCm1();
+        double qMax = query.maxWavenumberCm1();
+        while (nextBlock < file.blocks.size()) {
+            int b = nextBlock++;
+            if (file.blockMaxCm1[b] < qMin) {
+                continue;
+            }
+            if (file.blockMinCm1[b] > qMax) {
+                // The file is sorted: no later batch can be in range.
+                nextBlock = file.blocks.size();
+                return false;
+            }
+            int rows = reader.open(b);
+            reader.readDoubles(LineColumn.WAVENUMBER, 0, rows, blockWavenumbers, 0);
+            int lo = file.blockMinCm1[b] >= qMin ? 0 : firstAtLeast(blockWavenumbers, rows, qMin);
+            int hi = file.blockMaxCm1[b] <= qMax ? rows : firstAbove(blockWavenumbers, rows, qMax);
+            if (lo < hi) {
+                sliceFrom = lo;
+                blockEnd = hi;
                 return true;
             }
         }
@@ -141,9 +170,12 @@ final class FileScanner implements AutoCloseable {
         ByteBuffer bytes = reader.readTextBytes(c, from, to);
         bytes.get(textBytes, 0, length);
         TextColumn column = c.text(buf);
-        boolean filter = query.selectsSpecies();
+        if (!query.selectsSpecies()) {
+            column.appendRows(textBytes, 0, textOffsets, 0, n);
+            return;
+        }
         for (int i = 0; i < n; i++) {
-            if (!filter || keep[i]) {
+            if (keep[i]) {
                 column.append(textBytes, textOffsets[i] - from, textOffsets[i + 1] - textOffsets[i]);
             }
         }

@@ -22,7 +22,10 @@ public final class LineCursor implements AutoCloseable {
     private final LineColumn[] text;
     private long delivered;
 
-    LineCursor(List<ArrowLineFile> files, LineQuery query) throws IOException {
+    /** Rows each file's scanner holds at most when reading for the store (a record batch at a time). */
+    static final int DEFAULT_SLICE_ROWS = 65_536;
+
+    LineCursor(List<ArrowLineFile> files, LineQuery query, int sliceRows) throws IOException {
         List<LineColumn> num = new ArrayList<>();
         List<LineColumn> txt = new ArrayList<>();
         for (LineColumn c : query.columns()) {
@@ -33,7 +36,7 @@ public final class LineCursor implements AutoCloseable {
         List<FileScanner> open = new ArrayList<>();
         try {
             for (ArrowLineFile f : files) {
-                open.add(new FileScanner(f, query, present(f, numeric), present(f, text)));
+                open.add(new FileScanner(f, query, present(f, numeric), present(f, text), sliceRows));
             }
         } catch (IOException | RuntimeException e) {
             for (FileScanner s : open) {
@@ -124,7 +127,6 @@ public final class LineCursor implements AutoCloseable {
         for (LineColumn c : text) {
             TextColumn s = c.text(src);
             TextColumn d = c.text(dst);
-            byte[] bytes = s.bytes();
             if (s.rows() == 0 && src.size > 0) {
                 // Column absent from this file: empty texts keep the rows aligned.
                 for (int i = 0; i < n; i++) {
@@ -132,9 +134,7 @@ public final class LineCursor implements AutoCloseable {
                 }
                 continue;
             }
-            for (int i = from; i < from + n; i++) {
-                d.append(bytes, s.start(i), s.length(i));
-            }
+            d.appendRows(s, from, n);
         }
     }
 

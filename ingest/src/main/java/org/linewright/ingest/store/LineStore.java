@@ -133,7 +133,7 @@ public final class LineStore {
             }
             selected.add(files.get(i));
         }
-        return new LineCursor(selected, query);
+        return new LineCursor(selected, query, LineCursor.DEFAULT_SLICE_ROWS);
     }
 
     /** Reads a source's description from its file's metadata. */

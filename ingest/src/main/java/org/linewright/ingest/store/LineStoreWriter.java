@@ -40,9 +40,17 @@ import org.linewright.ingest.line.TextColumn;
 public final class LineStoreWriter implements AutoCloseable {
     /** Default maximum lines per sorted run (≈ 90 MB of heap for the run buffer). */
     public static final int DEFAULT_RUN_LINES = 262_144;
-    /** Lines per record batch written by the merge and the run spills. */
+    /** Lines per record batch written by the merge. */
     static final int OUTPUT_BATCH_LINES = 65_536;
+    /** Lines per record batch of the temporary runs (small, so that the merge reads them in small steps). */
+    static final int SPILL_BATCH_LINES = 8_192;
     private static final String PARTIAL_PREFIX = ".partial-";
+    /** Heap the merge's per-run slices may use together. */
+    private static final long MERGE_HEAP_BYTES = 96L << 20;
+    /** Heap per line of a {@link LineBatch} (numeric columns plus typical texts), for sizing slices. */
+    private static final long BYTES_PER_LINE_ESTIMATE = 360;
+    /** Smallest slice per run, whatever the number of runs (keeps reads efficient). */
+    private static final int MIN_MERGE_SLICE_ROWS = 1024;
 
     private final Path storeDir;
     private final String sourceName;
@@ -137,7 +145,7 @@ public final class LineStoreWriter implements AutoCloseable {
                 runBuffer = new LineBatch(runLines);
                 orderA = new int[runLines];
                 orderB = new int[runLines];
-                gather = new LineBatch(Math.min(runLines, OUTPUT_BATCH_LINES));
+                gather = new LineBatch(Math.min(runLines, SPILL_BATCH_LINES));
             }
             int from = 0;
             while (from < n) {
@@ -239,7 +247,9 @@ public final class LineStoreWriter implements AutoCloseable {
         ArrowLineFileWriter out = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
         stream = out;
         LineBatch batch = new LineBatch(OUTPUT_BATCH_LINES);
-        try (LineCursor cursor = new LineCursor(files, LineQuery.all())) {
+        // Each run's scanner holds a slice of its lines: the slices together stay within MERGE_HEAP_BYTES.
+        int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS, MERGE_HEAP_BYTES / (files.size() * BYTES_PER_LINE_ESTIMATE));
+        try (LineCursor cursor = new LineCursor(files, LineQuery.all(), sliceRows)) {
             while (cursor.read(batch)) {
                 out.write(batch);
             }
@@ -322,11 +332,7 @@ public final class LineStoreWriter implements AutoCloseable {
                 case LONG -> System.arraycopy(c.longs(src), from, c.longs(dst), to, n);
                 case DOUBLE -> System.arraycopy(c.doubles(src), from, c.doubles(dst), to, n);
                 case TEXT -> {
-                    TextColumn s = c.text(src);
-                    TextColumn d = c.text(dst);
-                    for (int i = from; i < from + n; i++) {
-                        d.append(s.bytes(), s.start(i), s.length(i));
-                    }
+                    c.text(dst).appendRows(c.text(src), from, n);
                 }
                 default -> throw new AssertionError(c);
             }

@@ -1,5 +1,13 @@
 package org.linewright.ingest.store;
 
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.DigestInputStream;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
 import java.util.Map;
 import java.util.Objects;
 import java.util.TreeMap;
@@ -29,5 +37,19 @@ public record SourceMetadata(String sourceFileName, String sourceSha256, String 
     public static SourceMetadata of(String sourceFileName, String sourceSha256, String readerFormat,
                                     Map<String, String> creationParameters) {
         return new SourceMetadata(sourceFileName, sourceSha256, readerFormat, ToolVersion.get(), creationParameters);
+    }
+
+    /** Hex SHA-256 of a file's bytes as stored (before any decompression), for {@link #sourceSha256}. */
+    public static String sha256(Path file) throws IOException {
+        MessageDigest digest;
+        try {
+            digest = MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
+        }
+        try (InputStream in = new DigestInputStream(Files.newInputStream(file), digest)) {
+            in.transferTo(java.io.OutputStream.nullOutputStream());
+        }
+        return HexFormat.of().formatHex(digest.digest());
     }
 }

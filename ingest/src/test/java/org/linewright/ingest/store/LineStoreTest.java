@@ -352,6 +352,42 @@ class LineStoreTest {
     }
 
     @Test
+    void smallSlicesOfRecordBatchesGiveTheSameLines() throws IOException {
+        List<Planned> a = plan(1500, 17, true, 0);
+        List<Planned> b = plan(900, 18, true, 40);
+        SourceInfo sa = ingest(dir, "a", a, 256, 1000);
+        SourceInfo sb = ingest(dir, "b", b, 100, 1000);
+        LineStore store = LineStore.open(dir);
+        LineQuery q = LineQuery.all().withWavenumberRange(300, 900).withMolecules(1, 3);
+        List<long[]> whole = readIds(store, q, 64);
+        List<long[]> sliced = new ArrayList<>();
+        // Scanners holding 7 rows at a time read each record batch in many slices.
+        try (LineCursor c = new LineCursor(List.of(ArrowLineFile.open(sa.file()), ArrowLineFile.open(sb.file())), q, 7)) {
+            LineBatch batch = new LineBatch(33);
+            while (c.read(batch)) {
+                for (int i = 0; i < batch.size; i++) {
+                    sliced.add(new long[] {batch.sourceLine[i], Double.doubleToLongBits(batch.wavenumberCm1[i])});
+                }
+            }
+        }
+        List<Planned> all = new ArrayList<>(a);
+        all.addAll(b);
+        List<Long> want = all.stream().filter(p -> p.wavenumberCm1 >= 300 && p.wavenumberCm1 <= 900)
+                .filter(p -> p.molecule == 1 || p.molecule == 3)
+                .sorted(Comparator.comparingDouble(Planned::wavenumberCm1)).map(Planned::id).collect(Collectors.toList());
+        assertEquals(want, sliced.stream().map(x -> x[0]).collect(Collectors.toList()));
+        assertEquals(want, whole.stream().map(x -> x[0]).collect(Collectors.toList()));
+    }
+
+    @Test
+    void sha256OfAFileMatchesThePublishedTestVector() throws IOException {
+        // FIPS 180-2 example: SHA-256("abc") = ba7816bf 8f01cfea 414140de 5dae2223 b00361a3 96177a9c b410ff61 f20015ad.
+        Path f = dir.resolve("abc.txt");
+        Files.writeString(f, "abc");
+        assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad", SourceMetadata.sha256(f));
+    }
+
+    @Test
     void notAStoreIsAClearError() throws IOException {
         InputException e = assertThrows(InputException.class, () -> LineStore.open(dir));
         assertTrue(e.getMessage().contains("linestore.properties"), e.getMessage());
