@@ -1,9 +1,10 @@
 package org.linewright.ingest.store;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.File;
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -28,14 +29,16 @@ class LineStoreBenchmarkTest {
                 Process p = new ProcessBuilder(List.of(java, "-Xmx512m", "--add-opens=java.base/java.nio=ALL-UNNAMED",
                         "-cp", System.getProperty("surefire.test.class.path", System.getProperty("java.class.path")), LineStoreBenchmark.class.getName(),
                         Long.toString(lines), order, dir.toString()))
-                        .redirectErrorStream(true).redirectOutput(ProcessBuilder.Redirect.INHERIT).start();
+                        .redirectErrorStream(true).start();
+                String output = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+                System.out.print(output);
                 // The child fails (non-zero exit) on OutOfMemoryError or a wrong line count.
-                assertEquals(0, p.waitFor(), "benchmark child JVM exit code (" + order + ")");
+                assertEquals(0, p.waitFor(), "benchmark child JVM exit code (" + order + "):\n" + output);
+                assertTrue(output.contains("reload cross-section columns"), output);
             } finally {
                 LineStoreBenchmark.deleteTree(dir);
             }
         }
-        System.out.println("machine: " + Runtime.getRuntime().availableProcessors() + " cores, java " + System.getProperty("java.version")
-                + File.separator);
+        System.out.println("machine: " + Runtime.getRuntime().availableProcessors() + " cores, java " + System.getProperty("java.version"));
     }
 }
