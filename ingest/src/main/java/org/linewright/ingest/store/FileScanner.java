@@ -24,6 +24,8 @@ final class FileScanner implements AutoCloseable {
     private final int[] textOffsets;
     private byte[] textBytes = new byte[1 << 16];
     private final double[] blockWavenumbers;
+    /** The arrays of {@link #buf} behind {@link #numeric}, resolved once. */
+    private final Object[] numericArrays;
     private int nextBlock;
     /** Rows of the current record batch still to load: [sliceFrom, blockEnd). */
     private int sliceFrom;
@@ -49,6 +51,15 @@ final class FileScanner implements AutoCloseable {
             if (c.kind() == LineColumn.Kind.DOUBLE && !file.has(c)) {
                 java.util.Arrays.fill(c.doubles(buf), Double.NaN);
             }
+        }
+        this.numericArrays = new Object[numeric.length];
+        for (int k = 0; k < numeric.length; k++) {
+            LineColumn c = numeric[k];
+            numericArrays[k] = switch (c.kind()) {
+                case INT -> c.ints(buf);
+                case LONG -> c.longs(buf);
+                default -> c.doubles(buf);
+            };
         }
         this.reader = file.new BlockReader();
     }
@@ -145,18 +156,27 @@ final class FileScanner implements AutoCloseable {
             keep[i] = query.selects(mol[i], iso[i]);
             if (keep[i]) {
                 if (m != i) {
-                    for (LineColumn c : numeric) {
-                        switch (c.kind()) {
-                            case INT -> c.ints(buf)[m] = c.ints(buf)[i];
-                            case LONG -> c.longs(buf)[m] = c.longs(buf)[i];
-                            default -> c.doubles(buf)[m] = c.doubles(buf)[i];
-                        }
-                    }
+                    moveRow(i, m);
                 }
                 m++;
             }
         }
         return m;
+    }
+
+    /** Copies numeric row {@code from} to row {@code to} in every column read. */
+    private void moveRow(int from, int to) {
+        for (int k = 0; k < numericArrays.length; k++) {
+            Object a = numericArrays[k];
+            if (a instanceof double[] d) {
+                d[to] = d[from];
+            } else if (a instanceof int[] v) {
+                v[to] = v[from];
+            } else {
+                long[] l = (long[]) a;
+                l[to] = l[from];
+            }
+        }
     }
 
     private void readText(LineColumn c, int lo, int hi, int n) throws IOException {
