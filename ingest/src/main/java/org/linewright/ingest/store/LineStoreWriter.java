@@ -211,7 +211,8 @@ public final class LineStoreWriter implements AutoCloseable {
             Path target = storeDir.resolve(fileName(sourceName));
             Files.move(finished.path(), target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             StoreIndex.syncDirectory(storeDir);
-            try (FileChannel lock = StoreIndex.lock(storeDir)) {
+            FileChannel lock = StoreIndex.lock(storeDir);
+            try {
                 TreeMap<String, StoreIndex.Entry> entries = StoreIndex.read(storeDir);
                 ArrowLineFile file = ArrowLineFile.open(target);
                 SourceInfo info = LineStore.describe(sourceName, file);
@@ -220,6 +221,9 @@ public final class LineStoreWriter implements AutoCloseable {
                 StoreIndex.write(storeDir, entries);
                 done = true;
                 return info;
+            } finally {
+                // Closing the channel releases the lock.
+                lock.close();
             }
         } finally {
             if (!done) {

@@ -137,7 +137,7 @@ final class StoreColumns {
     }
 
     private static void setAllValid(org.apache.arrow.memory.ArrowBuf validity, int n) {
-        validity.setOne(0, BitVectorHelper.getValidityBufferSize(n));
+        validity.setOne(0L, (long) BitVectorHelper.getValidityBufferSize(n));
     }
 
     static ByteBuffer littleEndian(ByteBuffer b) {
