@@ -2,6 +2,7 @@ package org.linewright.ingest.store;
 
 import java.io.IOException;
 import java.nio.ByteBuffer;
+import java.util.Arrays;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.line.TextColumn;
@@ -9,8 +10,8 @@ import org.linewright.ingest.line.TextColumn;
 /**
  * Walks the record batches of one store file in order, skipping those outside the query's wavenumber range
  * (per-batch ranges from the footer; binary search inside the batch), reading only the projected columns of
- * the rows in range (in slices of bounded size), and dropping lines outside the species selection. Holds the current batch's selected
- * rows in {@link #buf} at {@code [pos, buf.size)}.
+ * the rows in range (in slices of bounded size), and dropping lines outside the species selection. Holds the
+ * current slice's selected rows in {@link #buf} at {@code [pos, buf.size)}.
  */
 final class FileScanner implements AutoCloseable {
     final LineBatch buf;
@@ -49,7 +50,7 @@ final class FileScanner implements AutoCloseable {
         for (LineColumn c : LineColumn.values()) {
             // A double column the file lacks (an older layout) reads as missing values.
             if (c.kind() == LineColumn.Kind.DOUBLE && !file.has(c)) {
-                java.util.Arrays.fill(c.doubles(buf), Double.NaN);
+                Arrays.fill(c.doubles(buf), Double.NaN);
             }
         }
         this.numericArrays = new Object[numeric.length];
