@@ -1,7 +1,6 @@
 package org.linewright.ingest.store;
 
 import java.io.IOException;
-import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -211,20 +210,17 @@ public final class LineStoreWriter implements AutoCloseable {
             Path target = storeDir.resolve(fileName(sourceName));
             Files.move(finished.path(), target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             StoreIndex.syncDirectory(storeDir);
-            FileChannel lock = StoreIndex.lock(storeDir);
-            try {
+            SourceInfo info = StoreIndex.locked(storeDir, () -> {
                 TreeMap<String, StoreIndex.Entry> entries = StoreIndex.read(storeDir);
-                ArrowLineFile file = ArrowLineFile.open(target);
-                SourceInfo info = LineStore.describe(sourceName, file);
-                entries.put(sourceName, new StoreIndex.Entry(sourceName, target.getFileName().toString(), info.lines(),
-                        info.minWavenumberCm1(), info.maxWavenumberCm1(), metadata.sourceSha256(), metadata.readerFormat()));
+                SourceInfo committed = LineStore.describe(sourceName, ArrowLineFile.open(target));
+                entries.put(sourceName, new StoreIndex.Entry(sourceName, target.getFileName().toString(),
+                        committed.lines(), committed.minWavenumberCm1(), committed.maxWavenumberCm1(),
+                        metadata.sourceSha256(), metadata.readerFormat()));
                 StoreIndex.write(storeDir, entries);
-                done = true;
-                return info;
-            } finally {
-                // Closing the channel releases the lock.
-                lock.close();
-            }
+                return committed;
+            });
+            done = true;
+            return info;
         } finally {
             if (!done) {
                 abort();

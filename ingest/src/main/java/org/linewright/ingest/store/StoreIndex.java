@@ -96,15 +96,27 @@ final class StoreIndex {
         syncDirectory(storeDir);
     }
 
-    /** Takes the store's update lock; closing the returned channel releases it. */
-    static FileChannel lock(Path storeDir) throws IOException {
-        FileChannel ch = FileChannel.open(storeDir.resolve(LOCK_NAME), StandardOpenOption.CREATE, StandardOpenOption.WRITE);
-        try {
-            ch.lock();
-            return ch;
-        } catch (IOException | RuntimeException e) {
-            ch.close();
-            throw e;
+    /** An index update, run under the store's lock. */
+    @FunctionalInterface
+    interface Update<T> {
+        T run() throws IOException;
+    }
+
+    /** Serialises index updates within this JVM (file locks are held per JVM, not per thread). */
+    private static final Object JVM_LOCK = new Object();
+
+    /**
+     * Runs {@code update} holding the store's update lock: a JVM-wide monitor (threads) and an exclusive lock
+     * on {@value #LOCK_NAME} (other processes).
+     */
+    static <T> T locked(Path storeDir, Update<T> update) throws IOException {
+        synchronized (JVM_LOCK) {
+            try (FileChannel ch = FileChannel.open(storeDir.resolve(LOCK_NAME), StandardOpenOption.CREATE,
+                    StandardOpenOption.WRITE)) {
+                // Released when the channel closes.
+                ch.lock();
+                return update.run();
+            }
         }
     }
 

@@ -329,6 +329,27 @@ class LineStoreTest {
     }
 
     @Test
+    void concurrentCommitsOfDifferentSourcesAllReachTheIndex() throws Exception {
+        int sources = 8;
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(4);
+        try {
+            List<java.util.concurrent.Future<SourceInfo>> done = new ArrayList<>();
+            for (int i = 0; i < sources; i++) {
+                int k = i;
+                done.add(pool.submit(() -> ingest(dir, "src-" + k, plan(200, 100 + k, k % 2 == 0, 0), 64, 50)));
+            }
+            for (java.util.concurrent.Future<SourceInfo> f : done) {
+                assertEquals(200, f.get().lines());
+            }
+        } finally {
+            pool.shutdown();
+        }
+        LineStore store = LineStore.open(dir);
+        assertEquals(sources, store.sources().size());
+        assertEquals(200L * sources, store.totalLines());
+    }
+
+    @Test
     void emptySourceIsAllowed() throws IOException {
         try (LineStoreWriter w = LineStoreWriter.create(dir, "empty", META)) {
             w.commit(new IngestCounts(2, 0, 2, 0));
