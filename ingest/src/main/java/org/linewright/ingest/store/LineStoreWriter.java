@@ -48,6 +48,8 @@ public final class LineStoreWriter implements AutoCloseable {
     private static final long MERGE_HEAP_BYTES = 96L << 20;
     /** Heap per line of a {@link LineBatch} (numeric columns plus typical texts), for sizing slices. */
     private static final long BYTES_PER_LINE_ESTIMATE = 360;
+    /** Default most runs merged at once (bounds open files and the merge's heap). */
+    static final int DEFAULT_MERGE_FAN_IN = 128;
     /** Smallest slice per run, whatever the number of runs (keeps reads efficient). */
     private static final int MIN_MERGE_SLICE_ROWS = 1024;
 
@@ -56,6 +58,8 @@ public final class LineStoreWriter implements AutoCloseable {
     private final SourceMetadata metadata;
     private final Instant created;
     private final int runLines;
+    /** Most runs merged at once; more runs are merged in several passes. */
+    private final int mergeFanIn;
     private final Map<String, String> schemaMetadata;
     /** The file being streamed (final when no line came out of order, else the first run). */
     private ArrowLineFileWriter stream;
@@ -67,11 +71,12 @@ public final class LineStoreWriter implements AutoCloseable {
     private long linesWritten;
     private boolean done;
 
-    private LineStoreWriter(Path storeDir, String sourceName, SourceMetadata metadata, int runLines) {
+    private LineStoreWriter(Path storeDir, String sourceName, SourceMetadata metadata, int runLines, int mergeFanIn) {
         this.storeDir = storeDir;
         this.sourceName = sourceName;
         this.metadata = metadata;
         this.runLines = runLines;
+        this.mergeFanIn = mergeFanIn;
         this.created = Instant.now();
         Map<String, String> m = new LinkedHashMap<>();
         m.put(StoreColumns.KEY_STORE_FORMAT, StoreColumns.STORE_FORMAT_VERSION);
@@ -101,8 +106,17 @@ public final class LineStoreWriter implements AutoCloseable {
         if (runLines < 1) {
             throw new IllegalArgumentException("runLines must be positive: " + runLines);
         }
+        return create(storeDir, sourceName, metadata, runLines, DEFAULT_MERGE_FAN_IN);
+    }
+
+    /** As {@link #create(Path, String, SourceMetadata, int)} with the most runs merged at once (≥ 2). */
+    static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata, int runLines, int mergeFanIn)
+            throws IOException {
+        if (mergeFanIn < 2) {
+            throw new IllegalArgumentException("mergeFanIn must be at least 2: " + mergeFanIn);
+        }
         Files.createDirectories(storeDir);
-        return new LineStoreWriter(storeDir, sourceName, metadata, runLines);
+        return new LineStoreWriter(storeDir, sourceName, metadata, runLines, mergeFanIn);
     }
 
     /**
@@ -240,13 +254,45 @@ public final class LineStoreWriter implements AutoCloseable {
         gather = null;
         orderA = null;
         orderB = null;
-        List<ArrowLineFile> files = new ArrayList<>();
-        for (Path run : runs) {
-            files.add(ArrowLineFile.open(run));
+        // Intermediate passes while there are too many runs for one merge: each group of consecutive runs
+        // becomes one run, in place, so the runs stay in input order and ties stay stable.
+        LineBatch spillBatch = new LineBatch(SPILL_BATCH_LINES);
+        while (runs.size() > mergeFanIn) {
+            List<Path> pass = new ArrayList<>(runs);
+            for (int from = 0; from < pass.size(); from += mergeFanIn) {
+                List<Path> group = pass.subList(from, Math.min(pass.size(), from + mergeFanIn));
+                Path merged = group.size() == 1 ? group.get(0) : partialPath("run");
+                if (group.size() > 1) {
+                    // Listed at once so that an abort deletes it too.
+                    runs.add(merged);
+                    try (ArrowLineFileWriter w = new ArrowLineFileWriter(merged, schemaMetadata)) {
+                        mergeInto(group, w, spillBatch);
+                        w.finish(Map.of());
+                    }
+                    for (Path p : group) {
+                        Files.deleteIfExists(p);
+                    }
+                    runs.removeAll(group);
+                }
+                // Moved to the end: after the pass the list holds the pass's outputs in input order.
+                runs.remove(merged);
+                runs.add(merged);
+            }
         }
         ArrowLineFileWriter out = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
         stream = out;
-        LineBatch batch = new LineBatch(OUTPUT_BATCH_LINES);
+        mergeInto(runs, out, new LineBatch(OUTPUT_BATCH_LINES));
+        out.finish(footer);
+        deleteRuns();
+        return out;
+    }
+
+    /** k-way merges the sorted run files into {@code out} (ties in run order). */
+    private static void mergeInto(List<Path> runFiles, ArrowLineFileWriter out, LineBatch batch) throws IOException {
+        List<ArrowLineFile> files = new ArrayList<>();
+        for (Path run : runFiles) {
+            files.add(ArrowLineFile.open(run));
+        }
         // Each run's scanner holds a slice of its lines: the slices together stay within MERGE_HEAP_BYTES.
         int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS, MERGE_HEAP_BYTES / (files.size() * BYTES_PER_LINE_ESTIMATE));
         try (LineCursor cursor = new LineCursor(files, LineQuery.all(), sliceRows)) {
@@ -254,9 +300,6 @@ public final class LineStoreWriter implements AutoCloseable {
                 out.write(batch);
             }
         }
-        out.finish(footer);
-        deleteRuns();
-        return out;
     }
 
     /** Discards everything written so far; the store is left as it was. Idempotent. */

@@ -189,6 +189,29 @@ class LineStoreTest {
     }
 
     @Test
+    void manyRunsAreMergedInSeveralPassesStably() throws IOException {
+        // Runs of 37 lines, at most 3 merged at once: 2000 lines make 55 runs and four merge passes.
+        List<Planned> lines = plan(2000, 19, false, 25);
+        try (LineStoreWriter w = LineStoreWriter.create(dir, "passes", META, 37, 3)) {
+            LineBatch b = new LineBatch(50);
+            for (Planned p : lines) {
+                SyntheticLines.fillRow(b, b.size++, p.id, p.wavenumberCm1, p.molecule, p.iso);
+                if (b.isFull()) {
+                    w.write(b);
+                    b.clear();
+                }
+            }
+            w.write(b);
+            w.commit(new IngestCounts(2000, 2000, 0, 0));
+        }
+        assertEquals(expectedOrder(lines), readIds(LineStore.open(dir), LineQuery.all(), 128).stream().map(x -> x[0])
+                .collect(Collectors.toList()));
+        try (Stream<Path> files = Files.list(dir)) {
+            assertEquals(0, files.filter(p -> p.getFileName().toString().startsWith(".partial")).count());
+        }
+    }
+
+    @Test
     void sortedPrefixThenDisorderIsMergedInInputOrderForTies() throws IOException {
         List<Planned> lines = new ArrayList<>(plan(1000, 5, true, 30));
         lines.addAll(plan(1000, 6, false, 30));
