@@ -26,15 +26,15 @@ import org.linewright.ingest.InputException;
 import org.linewright.ingest.line.LineColumn;
 
 /**
- * The layout of one finished store file: schema and footer metadata, record-batch positions with their
+ * The layout of one finished store file: schema metadata, record-batch positions with their
  * row counts and wavenumber ranges, and where each column's buffers sit in a record batch. Reading the
  * columns themselves is done by {@link BlockReader}, column by column and row range by row range, so that a
  * projection reads only the bytes of the projected columns.
  */
 final class ArrowLineFile {
     final Path path;
-    final Map<String, String> schemaMetadata;
-    final Map<String, String> footerMetadata;
+    /** The schema metadata (from the footer's schema: provenance, counts, summary, batch index). */
+    final Map<String, String> metadata;
     final List<ArrowBlock> blocks;
     final int[] blockRows;
     final double[] blockMinCm1;
@@ -45,10 +45,9 @@ final class ArrowLineFile {
     /** Index of the column's field node; -1 when absent. */
     final EnumMap<LineColumn, Integer> fieldNode = new EnumMap<>(LineColumn.class);
 
-    private ArrowLineFile(Path path, Schema schema, Map<String, String> footer, List<ArrowBlock> blocks) {
+    private ArrowLineFile(Path path, Schema schema, List<ArrowBlock> blocks) {
         this.path = path;
-        this.schemaMetadata = schema.getCustomMetadata() == null ? Map.of() : Map.copyOf(schema.getCustomMetadata());
-        this.footerMetadata = footer == null ? Map.of() : Map.copyOf(footer);
+        this.metadata = schema.getCustomMetadata() == null ? Map.of() : Map.copyOf(schema.getCustomMetadata());
         this.blocks = List.copyOf(blocks);
         int buffer = 0;
         List<Field> fields = schema.getFields();
@@ -74,10 +73,10 @@ final class ArrowLineFile {
         blockRows = new int[n];
         blockMinCm1 = new double[n];
         blockMaxCm1 = new double[n];
-        String index = footerMetadata.get(StoreColumns.KEY_BATCHES);
+        String index = metadata.get(StoreColumns.KEY_BATCHES);
         String[] entries = index == null || index.isEmpty() ? new String[0] : index.split(";");
         if (entries.length != n) {
-            throw new InputException(path + ": footer lists " + entries.length + " batches but the file has " + n);
+            throw new InputException(path + ": metadata lists " + entries.length + " batches but the file has " + n);
         }
         int max = 0;
         for (int i = 0; i < n; i++) {
@@ -87,7 +86,7 @@ final class ArrowLineFile {
                 blockMinCm1[i] = Double.parseDouble(parts[1]);
                 blockMaxCm1[i] = Double.parseDouble(parts[2]);
             } catch (RuntimeException e) {
-                throw new InputException(path + ": footer metadata " + StoreColumns.KEY_BATCHES + ": \"" + entries[i]
+                throw new InputException(path + ": metadata " + StoreColumns.KEY_BATCHES + ": \"" + entries[i]
                         + "\" (expected rows, min and max wavenumber)", e);
             }
             max = Math.max(max, blockRows[i]);
@@ -102,7 +101,7 @@ final class ArrowLineFile {
              ArrowFileReader reader = new ArrowFileReader(ch, allocator)) {
             List<ArrowBlock> blocks = reader.getRecordBlocks();
             Schema schema = reader.getVectorSchemaRoot().getSchema();
-            return new ArrowLineFile(path, schema, reader.getMetaData(), blocks);
+            return new ArrowLineFile(path, schema, blocks);
         } catch (IOException | RuntimeException e) {
             if (e instanceof InputException) {
                 throw e;
@@ -145,7 +144,7 @@ final class ArrowLineFile {
             bodyStart = block.getOffset() + block.getMetadataLength();
             rows = (int) batch.length();
             if (rows != blockRows[b]) {
-                throw new InputException(path + ": block " + b + " has " + rows + " rows, footer says " + blockRows[b]);
+                throw new InputException(path + ": block " + b + " has " + rows + " rows, metadata says " + blockRows[b]);
             }
             return rows;
         }

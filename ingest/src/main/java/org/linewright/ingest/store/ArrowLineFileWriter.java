@@ -17,8 +17,8 @@ import org.linewright.ingest.line.LineBatch;
 
 /**
  * Writes one Arrow IPC file of lines whose wavenumbers never decrease, one record batch per
- * {@link #write(LineBatch)}, and records per-batch wavenumber ranges, the line count and the isotopologues
- * present in the footer metadata. Used for finished store files and for the sorted runs of the external sort.
+ * {@link #write(LineBatch)}, and adds per-batch wavenumber ranges, the line count and the isotopologues
+ * present to the schema metadata when the file ends (see {@link CompletedSchemaFileWriter}). Used for finished store files and for the sorted runs of the external sort.
  */
 final class ArrowLineFileWriter implements AutoCloseable {
     /** Isotopologue numbers below this bound are tracked in a bit set; larger ones in a tree set. */
@@ -29,8 +29,8 @@ final class ArrowLineFileWriter implements AutoCloseable {
     private final VectorSchemaRoot root;
     private final FileChannel channel;
     private final ArrowFileWriter writer;
-    /** Footer metadata; the Arrow writer keeps this map and writes it when the file ends. */
-    private final Map<String, String> footer = new LinkedHashMap<>();
+    /** Metadata completed at the end; the Arrow writer adds it to the footer's schema. */
+    private final Map<String, String> completion = new LinkedHashMap<>();
     private final StringBuilder batchIndex = new StringBuilder();
     private final BitSet isotopologueBits = new BitSet();
     private final TreeSet<Long> otherIsotopologues = new TreeSet<>();
@@ -47,7 +47,7 @@ final class ArrowLineFileWriter implements AutoCloseable {
         try {
             r = VectorSchemaRoot.create(StoreColumns.schema(schemaMetadata), a);
             ch = FileChannel.open(path, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
-            ArrowFileWriter w = new ArrowFileWriter(r, null, ch, footer);
+            ArrowFileWriter w = new CompletedSchemaFileWriter(r, ch, completion);
             w.start();
             this.allocator = a;
             this.root = r;
@@ -119,14 +119,14 @@ final class ArrowLineFileWriter implements AutoCloseable {
         batchIndex.append(n).append(' ').append(wn[0]).append(' ').append(wn[n - 1]);
     }
 
-    /** Ends the file with its footer (summary plus {@code extraFooter}), forces it to disk and closes it. */
-    void finish(Map<String, String> extraFooter) throws IOException {
-        footer.put(StoreColumns.KEY_LINES, Long.toString(lines));
-        footer.put(StoreColumns.KEY_WAVENUMBER_MIN, Double.toString(lines == 0 ? Double.NaN : minWavenumberCm1));
-        footer.put(StoreColumns.KEY_WAVENUMBER_MAX, Double.toString(lines == 0 ? Double.NaN : lastWavenumberCm1));
-        footer.put(StoreColumns.KEY_BATCHES, batchIndex.toString());
-        footer.put(StoreColumns.KEY_ISOTOPOLOGUES, isotopologueList());
-        footer.putAll(extraFooter);
+    /** Ends the file, its schema completed with the summary and {@code extra}, forces it to disk and closes it. */
+    void finish(Map<String, String> extra) throws IOException {
+        completion.put(StoreColumns.KEY_LINES, Long.toString(lines));
+        completion.put(StoreColumns.KEY_WAVENUMBER_MIN, Double.toString(lines == 0 ? Double.NaN : minWavenumberCm1));
+        completion.put(StoreColumns.KEY_WAVENUMBER_MAX, Double.toString(lines == 0 ? Double.NaN : lastWavenumberCm1));
+        completion.put(StoreColumns.KEY_BATCHES, batchIndex.toString());
+        completion.put(StoreColumns.KEY_ISOTOPOLOGUES, isotopologueList());
+        completion.putAll(extra);
         writer.end();
         channel.force(true);
         close();

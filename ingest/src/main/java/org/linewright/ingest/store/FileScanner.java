@@ -9,7 +9,7 @@ import org.linewright.ingest.line.TextColumn;
 
 /**
  * Walks the record batches of one store file in order, skipping those outside the query's wavenumber range
- * (per-batch ranges from the footer; binary search inside the batch), reading only the projected columns of
+ * (per-batch ranges from the file metadata; binary search inside the batch), reading only the projected columns of
  * the rows in range (in slices of bounded size), and dropping lines outside the species selection. Holds the
  * current slice's selected rows in {@link #buf} at {@code [pos, buf.size)}.
  */

@@ -20,7 +20,8 @@ import org.linewright.ingest.source.IsotopologueLookup;
  * <p>Layout: a directory with the index {@code linestore.properties} and one Arrow IPC file per source
  * ({@code lines-<name>-<hash>.arrow}), sorted by wavenumber, one field per
  * {@link org.linewright.ingest.line.LineColumn} with its unit in the field metadata; schema metadata holds
- * the provenance, footer metadata the counts and per-batch wavenumber ranges. Files named
+ * the provenance, the counts and per-batch wavenumber ranges (completed when the file ends, in the schema of
+ * the file's footer, which IPC file readers use). Files named
  * {@code .partial-...} are unfinished writes and are ignored.
  *
  * <p>The store is a snapshot taken at {@link #open}: later commits are seen by opening it again.
@@ -138,8 +139,8 @@ public final class LineStore {
 
     /** Reads a source's description from its file's metadata. */
     static SourceInfo describe(String name, ArrowLineFile file) {
-        Map<String, String> s = file.schemaMetadata;
-        Map<String, String> f = file.footerMetadata;
+        Map<String, String> s = file.metadata;
+        Map<String, String> f = file.metadata;
         String where = file.path.toString();
         if (!StoreColumns.STORE_FORMAT_VERSION.equals(s.get(StoreColumns.KEY_STORE_FORMAT))) {
             throw new InputException(where + ": schema metadata " + StoreColumns.KEY_STORE_FORMAT + ": \""
@@ -178,12 +179,12 @@ public final class LineStore {
                 Double.parseDouble(f.getOrDefault(StoreColumns.KEY_WAVENUMBER_MAX, "NaN")), isotopologues);
     }
 
-    private static long number(String where, Map<String, String> footer, String key) {
-        String v = footer.get(key);
+    private static long number(String where, Map<String, String> metadata, String key) {
+        String v = metadata.get(key);
         try {
             return Long.parseLong(v);
         } catch (NumberFormatException e) {
-            throw new InputException(where + ": footer metadata " + key + ": \"" + v + "\" (expected a whole number)");
+            throw new InputException(where + ": schema metadata " + key + ": \"" + v + "\" (expected a whole number)");
         }
     }
 }

@@ -205,11 +205,11 @@ public final class LineStoreWriter implements AutoCloseable {
     public SourceInfo commit(IngestCounts counts) throws IOException {
         checkOpen();
         Objects.requireNonNull(counts, "counts");
-        Map<String, String> footer = new LinkedHashMap<>();
-        footer.put(StoreColumns.KEY_RECORDS_READ, Long.toString(counts.recordsRead()));
-        footer.put(StoreColumns.KEY_LINES_KEPT, Long.toString(counts.linesKept()));
-        footer.put(StoreColumns.KEY_RECORDS_REJECTED, Long.toString(counts.recordsRejected()));
-        footer.put(StoreColumns.KEY_DUPLICATES, Long.toString(counts.duplicates()));
+        Map<String, String> completion = new LinkedHashMap<>();
+        completion.put(StoreColumns.KEY_RECORDS_READ, Long.toString(counts.recordsRead()));
+        completion.put(StoreColumns.KEY_LINES_KEPT, Long.toString(counts.linesKept()));
+        completion.put(StoreColumns.KEY_RECORDS_REJECTED, Long.toString(counts.recordsRejected()));
+        completion.put(StoreColumns.KEY_DUPLICATES, Long.toString(counts.duplicates()));
         ArrowLineFileWriter finished;
         try {
             if (runBuffer == null) {
@@ -217,9 +217,9 @@ public final class LineStoreWriter implements AutoCloseable {
                     stream = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
                 }
                 finished = stream;
-                finished.finish(footer);
+                finished.finish(completion);
             } else {
-                finished = mergeRuns(footer);
+                finished = mergeRuns(completion);
             }
             Path target = storeDir.resolve(fileName(sourceName));
             Files.move(finished.path(), target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
@@ -242,7 +242,7 @@ public final class LineStoreWriter implements AutoCloseable {
         }
     }
 
-    private ArrowLineFileWriter mergeRuns(Map<String, String> footer) throws IOException {
+    private ArrowLineFileWriter mergeRuns(Map<String, String> completion) throws IOException {
         if (stream != null) {
             // The lines streamed before the first out-of-order line form the first (oldest) run.
             stream.finish(Map.of());
@@ -282,7 +282,7 @@ public final class LineStoreWriter implements AutoCloseable {
         ArrowLineFileWriter out = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
         stream = out;
         mergeInto(runs, out, new LineBatch(OUTPUT_BATCH_LINES));
-        out.finish(footer);
+        out.finish(completion);
         deleteRuns();
         return out;
     }

@@ -41,7 +41,7 @@ final class StoreColumns {
     static final String KEY_SORT_ORDER = "linewright.sort_order";
     static final String SORT_ORDER_VALUE = "wavenumber_cm1 ascending, stable";
 
-    // Footer metadata (known when the file is finished).
+    // Schema metadata completed when the file is finished (in the footer's copy of the schema).
     static final String KEY_RECORDS_READ = "linewright.records_read";
     static final String KEY_LINES_KEPT = "linewright.lines_kept";
     static final String KEY_RECORDS_REJECTED = "linewright.records_rejected";
