@@ -203,9 +203,20 @@ public final class LineStoreWriter implements AutoCloseable {
      * @return the committed source as the store now lists it
      */
     public SourceInfo commit(IngestCounts counts) throws IOException {
+        return commit(counts, metadata.sourceSha256());
+    }
+
+    /**
+     * As {@link #commit(IngestCounts)}, with the source's SHA-256 known only now: a source is hashed while it
+     * is streamed, so its digest is complete only after its last line. The value replaces the one given at
+     * {@link #create} in the file's (footer) metadata and in the store index.
+     */
+    public SourceInfo commit(IngestCounts counts, String sourceSha256) throws IOException {
         checkOpen();
         Objects.requireNonNull(counts, "counts");
+        Objects.requireNonNull(sourceSha256, "sourceSha256");
         Map<String, String> completion = new LinkedHashMap<>();
+        completion.put(StoreColumns.KEY_SOURCE_SHA256, sourceSha256);
         completion.put(StoreColumns.KEY_RECORDS_READ, Long.toString(counts.recordsRead()));
         completion.put(StoreColumns.KEY_LINES_KEPT, Long.toString(counts.linesKept()));
         completion.put(StoreColumns.KEY_RECORDS_REJECTED, Long.toString(counts.recordsRejected()));
@@ -229,7 +240,7 @@ public final class LineStoreWriter implements AutoCloseable {
                 SourceInfo committed = LineStore.describe(sourceName, ArrowLineFile.open(target));
                 entries.put(sourceName, new StoreIndex.Entry(sourceName, target.getFileName().toString(),
                         committed.lines(), committed.minWavenumberCm1(), committed.maxWavenumberCm1(),
-                        metadata.sourceSha256(), metadata.readerFormat()));
+                        sourceSha256, metadata.readerFormat()));
                 StoreIndex.write(storeDir, entries);
                 return committed;
             });
