@@ -33,6 +33,29 @@ public final class TextColumn {
         append(bytes, 0, bytes.length);
     }
 
+    /**
+     * Appends {@code count} rows in one copy: row {@code fromRow} of a source laid out like this column
+     * ({@code offsets} giving row boundaries) whose bytes begin at {@code bytes[bytesFrom]}.
+     */
+    public void appendRows(byte[] bytes, int bytesFrom, int[] offsets, int fromRow, int count) {
+        ensureRows(rows + count);
+        int base = offsets[fromRow];
+        int length = offsets[fromRow + count] - base;
+        int start = this.offsets[rows];
+        ensureBytes(start + length);
+        System.arraycopy(bytes, bytesFrom, data, start, length);
+        int shift = start - base;
+        for (int i = 1; i <= count; i++) {
+            this.offsets[rows + i] = offsets[fromRow + i] + shift;
+        }
+        rows += count;
+    }
+
+    /** Appends rows {@code [fromRow, fromRow+count)} of another column in one copy. */
+    public void appendRows(TextColumn src, int fromRow, int count) {
+        appendRows(src.data, src.offsets[fromRow], src.offsets, fromRow, count);
+    }
+
     /** Appends an empty value. */
     public void appendEmpty() {
         ensureRows(rows + 1);

@@ -1,0 +1,92 @@
+package org.linewright.broadening.voigt;
+
+import java.util.Locale;
+
+/** The selectable line shapes: Voigt (Doppler and pressure broadening), Doppler only, Lorentz only. */
+public enum LineShapeKind implements LineShape {
+    /** Voigt profile, see {@link VoigtProfile}. */
+    VOIGT {
+        @Override
+        public double value(double detuningCm1, double dopplerHwhmCm1, double lorentzHwhmCm1) {
+            return VoigtProfile.value(detuningCm1, dopplerHwhmCm1, lorentzHwhmCm1);
+        }
+
+        @Override
+        public void addProfile(double[] gridCm1, int from, int to, double centerCm1, double dopplerHwhmCm1,
+                               double lorentzHwhmCm1, double strength, double baselineCm, double[] out) {
+            VoigtProfile.addProfile(gridCm1, from, to, centerCm1, dopplerHwhmCm1, lorentzHwhmCm1, strength, baselineCm, out);
+        }
+
+        @Override
+        public double hwhmCm1(double dopplerHwhmCm1, double lorentzHwhmCm1) {
+            return VoigtWidth.hwhmCm1(dopplerHwhmCm1, lorentzHwhmCm1);
+        }
+    },
+    /** Gaussian (Doppler) profile, see {@link DopplerProfile}; the Lorentz width is ignored. */
+    DOPPLER {
+        @Override
+        public double value(double detuningCm1, double dopplerHwhmCm1, double lorentzHwhmCm1) {
+            return DopplerProfile.value(detuningCm1, dopplerHwhmCm1);
+        }
+
+        @Override
+        public void addProfile(double[] gridCm1, int from, int to, double centerCm1, double dopplerHwhmCm1,
+                               double lorentzHwhmCm1, double strength, double baselineCm, double[] out) {
+            DopplerProfile.addProfile(gridCm1, from, to, centerCm1, dopplerHwhmCm1, strength, baselineCm, out);
+        }
+
+        @Override
+        public double hwhmCm1(double dopplerHwhmCm1, double lorentzHwhmCm1) {
+            return dopplerHwhmCm1;
+        }
+    },
+    /** Lorentz (pressure) profile, see {@link LorentzProfile}; the Doppler width is ignored. */
+    LORENTZ {
+        @Override
+        public double value(double detuningCm1, double dopplerHwhmCm1, double lorentzHwhmCm1) {
+            return LorentzProfile.value(detuningCm1, lorentzHwhmCm1);
+        }
+
+        @Override
+        public void addProfile(double[] gridCm1, int from, int to, double centerCm1, double dopplerHwhmCm1,
+                               double lorentzHwhmCm1, double strength, double baselineCm, double[] out) {
+            LorentzProfile.addProfile(gridCm1, from, to, centerCm1, lorentzHwhmCm1, strength, baselineCm, out);
+        }
+
+        @Override
+        public double hwhmCm1(double dopplerHwhmCm1, double lorentzHwhmCm1) {
+            return lorentzHwhmCm1;
+        }
+    };
+
+    /**
+     * Parses a shape name, case-insensitively ("voigt", "doppler", "lorentz"; "gauss"/"gaussian" and
+     * "lorentzian" are accepted as synonyms).
+     *
+     * @param name the name
+     * @return the kind
+     * @throws IllegalArgumentException naming the accepted values if {@code name} is unknown
+     */
+    public static LineShapeKind parse(String name) {
+        String n = name.trim().toLowerCase(Locale.ROOT);
+        switch (n) {
+            case "voigt":
+                return VOIGT;
+            case "doppler":
+            case "gauss":
+            case "gaussian":
+                return DOPPLER;
+            case "lorentz":
+            case "lorentzian":
+                return LORENTZ;
+            default:
+                throw new IllegalArgumentException(
+                        "unknown line shape '" + name + "': expected voigt, doppler or lorentz");
+        }
+    }
+
+    /** @return the lower-case name used in metadata ("voigt", "doppler", "lorentz") */
+    public String label() {
+        return name().toLowerCase(Locale.ROOT);
+    }
+}

@@ -1,0 +1,64 @@
+package org.linewright.broadening.wings;
+
+import java.util.Map;
+
+/**
+ * Policy giving the distance from the line centre beyond which a line's profile is not evaluated (a symmetric
+ * cutoff, cm⁻¹). Implementations are immutable and thread-safe; {@link #describe()} gives a flat string map for
+ * output metadata.
+ */
+public interface WingCutoff {
+
+    /** Conventional default cutoff distance, 25 cm⁻¹ (common practice for line-by-line cross sections). */
+    double DEFAULT_DISTANCE_CM1 = 25.0;
+
+    /**
+     * Cutoff distance for one line.
+     *
+     * @param dopplerHwhmCm1 the line's Doppler HWHM αD in cm⁻¹
+     * @param lorentzHwhmCm1 the line's Lorentz HWHM γL in cm⁻¹
+     * @param pressureAtm    total pressure in atm
+     * @return distance in cm⁻¹, positive; {@link Double#POSITIVE_INFINITY} for no cutoff
+     */
+    double distanceCm1(double dopplerHwhmCm1, double lorentzHwhmCm1, double pressureAtm);
+
+    /** @return metadata describing this policy (keys {@code wing.cutoff.rule} and rule parameters) */
+    Map<String, String> describe();
+
+    /** @return the default policy: a fixed 25 cm⁻¹ cutoff */
+    static WingCutoff defaultCutoff() {
+        return fixed(DEFAULT_DISTANCE_CM1);
+    }
+
+    /**
+     * @param distanceCm1 fixed cutoff distance, positive
+     * @return the policy
+     */
+    static WingCutoff fixed(double distanceCm1) {
+        return new FixedCutoff(distanceCm1);
+    }
+
+    /**
+     * @param multiple       cutoff as this multiple of the line's Voigt HWHM (Olivero–Longbothum), positive
+     * @param maxDistanceCm1 upper bound of the distance, positive (may be infinite)
+     * @return the policy
+     */
+    static WingCutoff hwhmMultiple(double multiple, double maxDistanceCm1) {
+        return new HwhmMultipleCutoff(multiple, maxDistanceCm1);
+    }
+
+    /**
+     * @param distancePerAtmCm1 distance per unit pressure k in cm⁻¹/atm, positive
+     * @param minDistanceCm1    lower bound, positive
+     * @param maxDistanceCm1    upper bound, at least the lower bound
+     * @return the policy d = min(max, max(min, k·p))
+     */
+    static WingCutoff pressureScaled(double distancePerAtmCm1, double minDistanceCm1, double maxDistanceCm1) {
+        return new PressureScaledCutoff(distancePerAtmCm1, minDistanceCm1, maxDistanceCm1);
+    }
+
+    /** @return the policy without cutoff (the whole grid) */
+    static WingCutoff none() {
+        return NoCutoff.INSTANCE;
+    }
+}

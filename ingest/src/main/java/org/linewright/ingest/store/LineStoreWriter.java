@@ -1,0 +1,434 @@
+package org.linewright.ingest.store;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.TreeMap;
+import java.util.UUID;
+import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
+import org.linewright.ingest.line.TextColumn;
+
+/**
+ * Writes the lines of one source into a line store as one Arrow IPC file sorted by wavenumber (stable for
+ * equal wavenumbers), with bounded memory whatever the number of lines.
+ *
+ * <p>Lines arriving in ascending order (the usual case) stream straight into the file. From the first line
+ * out of order on, lines are collected in runs of at most {@code runLines} lines, each sorted in memory and
+ * spilled to a temporary Arrow file; {@link #commit} then merges the runs (k-way, ties in input order).
+ *
+ * <p>Atomicity: everything is written under temporary names ({@code .partial-...}) in the store directory;
+ * {@link #commit} forces the finished file to disk, renames it over the source's file (replacing an earlier
+ * ingest of the same source name) and then updates the store index atomically. A crash or {@link #abort()}
+ * never leaves a file the store would list; the earlier file stays intact until the rename.
+ *
+ * <p>Use: {@code create}, {@code write} batches, {@code commit(counts)}; {@code close()} without commit
+ * aborts. Not thread-safe.
+ */
+public final class LineStoreWriter implements AutoCloseable {
+    /** Default maximum lines per sorted run (≈ 90 MB of heap for the run buffer). */
+    public static final int DEFAULT_RUN_LINES = 262_144;
+    /** Lines per record batch written by the merge. */
+    static final int OUTPUT_BATCH_LINES = 65_536;
+    /** Lines per record batch of the temporary runs (small, so that the merge reads them in small steps). */
+    static final int SPILL_BATCH_LINES = 8_192;
+    private static final String PARTIAL_PREFIX = ".partial-";
+    /** Heap the merge's per-run slices may use together. */
+    private static final long MERGE_HEAP_BYTES = 96L << 20;
+    /** Heap per line of a {@link LineBatch} (numeric columns plus typical texts), for sizing slices. */
+    private static final long BYTES_PER_LINE_ESTIMATE = 360;
+    /** Default most runs merged at once (bounds open files and the merge's heap). */
+    static final int DEFAULT_MERGE_FAN_IN = 128;
+    /** Smallest slice per run, whatever the number of runs (keeps reads efficient). */
+    private static final int MIN_MERGE_SLICE_ROWS = 1024;
+
+    private final Path storeDir;
+    private final String sourceName;
+    private final SourceMetadata metadata;
+    private final Instant created;
+    private final int runLines;
+    /** Most runs merged at once; more runs are merged in several passes. */
+    private final int mergeFanIn;
+    private final Map<String, String> schemaMetadata;
+    /** The file being streamed (final when no line came out of order, else the first run). */
+    private ArrowLineFileWriter stream;
+    private final List<Path> runs = new ArrayList<>();
+    private LineBatch runBuffer;
+    private int[] orderA;
+    private int[] orderB;
+    private LineBatch gather;
+    private long linesWritten;
+    private boolean done;
+
+    private LineStoreWriter(Path storeDir, String sourceName, SourceMetadata metadata, int runLines, int mergeFanIn) {
+        this.storeDir = storeDir;
+        this.sourceName = sourceName;
+        this.metadata = metadata;
+        this.runLines = runLines;
+        this.mergeFanIn = mergeFanIn;
+        this.created = Instant.now();
+        Map<String, String> m = new LinkedHashMap<>();
+        m.put(StoreColumns.KEY_STORE_FORMAT, StoreColumns.STORE_FORMAT_VERSION);
+        m.put(StoreColumns.KEY_SOURCE_NAME, sourceName);
+        m.put(StoreColumns.KEY_SOURCE_FILE, metadata.sourceFileName());
+        m.put(StoreColumns.KEY_SOURCE_SHA256, metadata.sourceSha256());
+        m.put(StoreColumns.KEY_READER_FORMAT, metadata.readerFormat());
+        m.put(StoreColumns.KEY_TOOL_VERSION, metadata.toolVersion());
+        m.put(StoreColumns.KEY_CREATED, created.toString());
+        m.put(StoreColumns.KEY_SORT_ORDER, StoreColumns.SORT_ORDER_VALUE);
+        metadata.creationParameters().forEach((k, v) -> m.put(StoreColumns.PARAM_PREFIX + k, v));
+        this.schemaMetadata = m;
+    }
+
+    /** Starts writing source {@code sourceName} into the store directory (created if missing). */
+    public static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata) throws IOException {
+        return create(storeDir, sourceName, metadata, DEFAULT_RUN_LINES);
+    }
+
+    /** As {@link #create(Path, String, SourceMetadata)} with the maximum lines per sorted run of the external sort. */
+    public static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata, int runLines)
+            throws IOException {
+        Objects.requireNonNull(metadata, "metadata");
+        if (sourceName == null || sourceName.isBlank()) {
+            throw new IllegalArgumentException("source name must not be blank");
+        }
+        if (runLines < 1) {
+            throw new IllegalArgumentException("runLines must be positive: " + runLines);
+        }
+        return create(storeDir, sourceName, metadata, runLines, DEFAULT_MERGE_FAN_IN);
+    }
+
+    /** As {@link #create(Path, String, SourceMetadata, int)} with the most runs merged at once (≥ 2). */
+    static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata, int runLines, int mergeFanIn)
+            throws IOException {
+        if (mergeFanIn < 2) {
+            throw new IllegalArgumentException("mergeFanIn must be at least 2: " + mergeFanIn);
+        }
+        Files.createDirectories(storeDir);
+        return new LineStoreWriter(storeDir, sourceName, metadata, runLines, mergeFanIn);
+    }
+
+    /**
+     * Adds the batch's lines (copied; the batch may be reused). Wavenumbers may come in any order but must
+     * be numbers.
+     *
+     * @throws IllegalArgumentException on a NaN wavenumber or a text column whose row count differs from the batch's
+     */
+    public void write(LineBatch batch) throws IOException {
+        checkOpen();
+        int n = batch.size;
+        if (n == 0) {
+            return;
+        }
+        double[] wn = batch.wavenumberCm1;
+        boolean ascending = true;
+        double previous = stream == null ? Double.NEGATIVE_INFINITY : stream.lastWavenumberCm1();
+        for (int i = 0; i < n; i++) {
+            double w = wn[i];
+            if (Double.isNaN(w)) {
+                throw new IllegalArgumentException("line without wavenumber (NaN) from source line " + batch.sourceLine[i]);
+            }
+            ascending &= w >= previous;
+            previous = w;
+        }
+        for (LineColumn c : StoreColumns.COLUMNS) {
+            if (c.kind() == LineColumn.Kind.TEXT && c.text(batch).rows() != n) {
+                throw new IllegalArgumentException("text column " + c.columnName() + " has " + c.text(batch).rows()
+                        + " rows but the batch has " + n);
+            }
+        }
+        if (runBuffer == null && ascending) {
+            if (stream == null) {
+                stream = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
+            }
+            stream.write(batch);
+        } else {
+            if (runBuffer == null) {
+                runBuffer = new LineBatch(runLines);
+                orderA = new int[runLines];
+                orderB = new int[runLines];
+                gather = new LineBatch(Math.min(runLines, SPILL_BATCH_LINES));
+            }
+            int from = 0;
+            while (from < n) {
+                int take = Math.min(n - from, runLines - runBuffer.size);
+                copyRows(batch, from, runBuffer, runBuffer.size, take);
+                runBuffer.size += take;
+                from += take;
+                if (runBuffer.isFull()) {
+                    spillRun();
+                }
+            }
+        }
+        linesWritten += n;
+    }
+
+    /** Sorts the run buffer (stable) and writes it as a temporary run file. */
+    private void spillRun() throws IOException {
+        int n = runBuffer.size;
+        if (n == 0) {
+            return;
+        }
+        int[] order = StableOrder.permutation(runBuffer.wavenumberCm1, n, orderA, orderB);
+        Path path = partialPath("run");
+        runs.add(path);
+        try (ArrowLineFileWriter run = new ArrowLineFileWriter(path, schemaMetadata)) {
+            for (int from = 0; from < n; from += gather.capacity()) {
+                int m = Math.min(gather.capacity(), n - from);
+                gather.clear();
+                gatherRows(runBuffer, order, from, gather, m);
+                gather.size = m;
+                run.write(gather);
+            }
+            run.finish(Map.of());
+        }
+        runBuffer.clear();
+    }
+
+    /**
+     * Finishes the file, makes it the store's file for this source (replacing an earlier one) and updates
+     * the index.
+     *
+     * @return the committed source as the store now lists it
+     */
+    public SourceInfo commit(IngestCounts counts) throws IOException {
+        return commit(counts, metadata.sourceSha256());
+    }
+
+    /**
+     * As {@link #commit(IngestCounts)}, with the source's SHA-256 known only now: a source is hashed while it
+     * is streamed, so its digest is complete only after its last line. The value replaces the one given at
+     * {@link #create} in the file's (footer) metadata and in the store index.
+     */
+    public SourceInfo commit(IngestCounts counts, String sourceSha256) throws IOException {
+        checkOpen();
+        Objects.requireNonNull(counts, "counts");
+        Objects.requireNonNull(sourceSha256, "sourceSha256");
+        Map<String, String> completion = new LinkedHashMap<>();
+        completion.put(StoreColumns.KEY_SOURCE_SHA256, sourceSha256);
+        completion.put(StoreColumns.KEY_RECORDS_READ, Long.toString(counts.recordsRead()));
+        completion.put(StoreColumns.KEY_LINES_KEPT, Long.toString(counts.linesKept()));
+        completion.put(StoreColumns.KEY_RECORDS_REJECTED, Long.toString(counts.recordsRejected()));
+        completion.put(StoreColumns.KEY_DUPLICATES, Long.toString(counts.duplicates()));
+        ArrowLineFileWriter finished;
+        try {
+            if (runBuffer == null) {
+                if (stream == null) {
+                    stream = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
+                }
+                finished = stream;
+                finished.finish(completion);
+            } else {
+                finished = mergeRuns(completion);
+            }
+            Path target = storeDir.resolve(fileName(sourceName));
+            Files.move(finished.path(), target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            StoreIndex.syncDirectory(storeDir);
+            SourceInfo info = StoreIndex.locked(storeDir, () -> {
+                TreeMap<String, StoreIndex.Entry> entries = StoreIndex.read(storeDir);
+                SourceInfo committed = LineStore.describe(sourceName, ArrowLineFile.open(target));
+                entries.put(sourceName, new StoreIndex.Entry(sourceName, target.getFileName().toString(),
+                        committed.lines(), committed.minWavenumberCm1(), committed.maxWavenumberCm1(),
+                        sourceSha256, metadata.readerFormat()));
+                StoreIndex.write(storeDir, entries);
+                return committed;
+            });
+            done = true;
+            return info;
+        } finally {
+            if (!done) {
+                abort();
+            }
+        }
+    }
+
+    private ArrowLineFileWriter mergeRuns(Map<String, String> completion) throws IOException {
+        if (stream != null) {
+            // The lines streamed before the first out-of-order line form the first (oldest) run.
+            stream.finish(Map.of());
+            runs.add(0, stream.path());
+            stream = null;
+        }
+        spillRun();
+        runBuffer = null;
+        gather = null;
+        orderA = null;
+        orderB = null;
+        // Intermediate passes while there are too many runs for one merge: each group of consecutive runs
+        // becomes one run, in place, so the runs stay in input order and ties stay stable.
+        LineBatch spillBatch = new LineBatch(SPILL_BATCH_LINES);
+        while (runs.size() > mergeFanIn) {
+            List<Path> pass = new ArrayList<>(runs);
+            for (int from = 0; from < pass.size(); from += mergeFanIn) {
+                List<Path> group = pass.subList(from, Math.min(pass.size(), from + mergeFanIn));
+                Path merged = group.size() == 1 ? group.get(0) : partialPath("run");
+                if (group.size() > 1) {
+                    // Listed at once so that an abort deletes it too.
+                    runs.add(merged);
+                    try (ArrowLineFileWriter w = new ArrowLineFileWriter(merged, schemaMetadata)) {
+                        mergeInto(group, w, spillBatch);
+                        w.finish(Map.of());
+                    }
+                    for (Path p : group) {
+                        Files.deleteIfExists(p);
+                    }
+                    runs.removeAll(group);
+                }
+                // Moved to the end: after the pass the list holds the pass's outputs in input order.
+                runs.remove(merged);
+                runs.add(merged);
+            }
+        }
+        ArrowLineFileWriter out = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
+        stream = out;
+        mergeInto(runs, out, new LineBatch(OUTPUT_BATCH_LINES));
+        out.finish(completion);
+        deleteRuns();
+        return out;
+    }
+
+    /** k-way merges the sorted run files into {@code out} (ties in run order). */
+    private static void mergeInto(List<Path> runFiles, ArrowLineFileWriter out, LineBatch batch) throws IOException {
+        List<ArrowLineFile> files = new ArrayList<>();
+        for (Path run : runFiles) {
+            files.add(ArrowLineFile.open(run));
+        }
+        // Each run's scanner holds a slice of its lines: the slices together stay within MERGE_HEAP_BYTES.
+        int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS, MERGE_HEAP_BYTES / (files.size() * BYTES_PER_LINE_ESTIMATE));
+        try (LineCursor cursor = new LineCursor(files, LineQuery.all(), sliceRows)) {
+            while (cursor.read(batch)) {
+                out.write(batch);
+            }
+        }
+    }
+
+    /** Discards everything written so far; the store is left as it was. Idempotent. */
+    public void abort() {
+        if (done) {
+            return;
+        }
+        done = true;
+        if (stream != null) {
+            stream.discard();
+            stream = null;
+        }
+        deleteRuns();
+        runBuffer = null;
+    }
+
+    /** Aborts unless committed. */
+    @Override
+    public void close() {
+        abort();
+    }
+
+    /** Lines accepted so far. */
+    public long linesWritten() {
+        return linesWritten;
+    }
+
+    private void deleteRuns() {
+        for (Path run : runs) {
+            try {
+                Files.deleteIfExists(run);
+            } catch (IOException ignored) {
+                // a leftover temporary file is never listed by the store
+            }
+        }
+        runs.clear();
+    }
+
+    private void checkOpen() {
+        if (done) {
+            throw new IllegalStateException("writer for source '" + sourceName + "' is already committed or aborted");
+        }
+    }
+
+    private Path partialPath(String kind) {
+        return storeDir.resolve(PARTIAL_PREFIX + kind + "-" + UUID.randomUUID() + ".arrow");
+    }
+
+    /**
+     * The store file name of a source: {@code lines-<name with unusual characters replaced>-<hash>.arrow},
+     * where the hash (8 hex digits of the SHA-256 of the name) keeps distinct names apart.
+     */
+    static String fileName(String sourceName) {
+        StringBuilder slug = new StringBuilder();
+        for (int i = 0; i < sourceName.length() && slug.length() < 64; i++) {
+            char c = sourceName.charAt(i);
+            slug.append((c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || (c >= '0' && c <= '9') || c == '-' || c == '_'
+                    || (c == '.' && i > 0) ? c : '_');
+        }
+        try {
+            byte[] digest = MessageDigest.getInstance("SHA-256").digest(sourceName.getBytes(StandardCharsets.UTF_8));
+            return "lines-" + slug + "-" + HexFormat.of().formatHex(digest, 0, 4) + ".arrow";
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
+        }
+    }
+
+    /** Copies rows {@code [from, from+n)} of every column of {@code src} to rows {@code [to, to+n)} of {@code dst}. */
+    static void copyRows(LineBatch src, int from, LineBatch dst, int to, int n) {
+        for (LineColumn c : StoreColumns.COLUMNS) {
+            switch (c.kind()) {
+                case INT -> System.arraycopy(c.ints(src), from, c.ints(dst), to, n);
+                case LONG -> System.arraycopy(c.longs(src), from, c.longs(dst), to, n);
+                case DOUBLE -> System.arraycopy(c.doubles(src), from, c.doubles(dst), to, n);
+                case TEXT -> {
+                    c.text(dst).appendRows(c.text(src), from, n);
+                }
+                default -> throw new AssertionError(c);
+            }
+        }
+    }
+
+    /** Copies rows {@code order[from..from+n)} of {@code src} to rows {@code [0, n)} of {@code dst}. */
+    private static void gatherRows(LineBatch src, int[] order, int from, LineBatch dst, int n) {
+        for (LineColumn c : StoreColumns.COLUMNS) {
+            switch (c.kind()) {
+                case INT -> {
+                    int[] s = c.ints(src);
+                    int[] d = c.ints(dst);
+                    for (int i = 0; i < n; i++) {
+                        d[i] = s[order[from + i]];
+                    }
+                }
+                case LONG -> {
+                    long[] s = c.longs(src);
+                    long[] d = c.longs(dst);
+                    for (int i = 0; i < n; i++) {
+                        d[i] = s[order[from + i]];
+                    }
+                }
+                case DOUBLE -> {
+                    double[] s = c.doubles(src);
+                    double[] d = c.doubles(dst);
+                    for (int i = 0; i < n; i++) {
+                        d[i] = s[order[from + i]];
+                    }
+                }
+                case TEXT -> {
+                    TextColumn s = c.text(src);
+                    TextColumn d = c.text(dst);
+                    for (int i = 0; i < n; i++) {
+                        int r = order[from + i];
+                        d.append(s.bytes(), s.start(r), s.length(r));
+                    }
+                }
+                default -> throw new AssertionError(c);
+            }
+        }
+    }
+
+}
