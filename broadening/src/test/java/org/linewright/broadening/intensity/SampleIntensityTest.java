@@ -9,6 +9,7 @@ import org.junit.jupiter.api.Test;
 import org.linewright.broadening.testsupport.HitranSamples;
 import org.linewright.broadening.testsupport.SampleIsotopologues;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.registry.MoleculeRegistry;
 
 /**
  * S(1000 K) of every CO record of {@code reference-data/hitran2020-samples/sample_CO.par} (HITRAN2020, Gordon et
@@ -41,5 +42,23 @@ class SampleIntensityTest {
                     "line " + b.sourceLine[i] + ": S(1000 K) from A / from S − 1 = " + rel);
         }
         assertEquals(5381, b.size, "records in sample_CO.par (samples' README)");
+    }
+
+    @Test
+    void coIntensityAt296KFromEinsteinAWithTheBuiltInRegistry() throws IOException {
+        // the same relation at 296 K with the registry's abundances and Q(296 K) instead of the README table:
+        // S from A must reproduce the records' S within the 1.0e-3 of their printed digits (class comment)
+        LineBatch b = HitranSamples.records("CO");
+        double[] s296 = b.intensityCmPerMolecule.clone();
+        for (int i = 0; i < b.size; i++) {
+            b.intensityCmPerMolecule[i] = Double.NaN;
+        }
+        double[] fromA = new double[b.size];
+        LineIntensity.atTemperature(b, 296.0, MoleculeRegistry.builtIn(), fromA);
+        for (int i = 0; i < b.size; i++) {
+            double rel = fromA[i] / s296[i] - 1.0;
+            assertTrue(Math.abs(rel) <= PRINTED_DIGITS_BOUND + 1e-9,
+                    "line " + b.sourceLine[i] + ": S(296 K) from A / S − 1 = " + rel);
+        }
     }
 }

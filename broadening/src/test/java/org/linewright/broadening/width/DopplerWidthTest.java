@@ -7,6 +7,7 @@ import org.junit.jupiter.api.Test;
 import org.linewright.broadening.testsupport.SampleIsotopologues;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.registry.MoleculeRegistry;
 
 class DopplerWidthTest {
 
@@ -21,6 +22,19 @@ class DopplerWidthTest {
         double alpha = DopplerWidth.hwhmCm1(2143.0, 296.0, 27.9949);
         // 3.581 is rounded to 4 digits: relative agreement within 0.5e-3/3.581 = 1.4e-4
         assertEquals(handbook(2143.0, 296.0, 27.9949), alpha, 1.5e-4 * alpha);
+    }
+
+    @Test
+    void coWithTheBuiltInRegistryMass() {
+        // the registry's 12C16O mass against the brief's M = 27.9949 g/mol in the handbook formula (common practice)
+        LineBatch b = new LineBatch(1);
+        b.size = 1;
+        b.moleculeId[0] = 5;
+        b.isotopologue[0] = 1;
+        b.wavenumberCm1[0] = 2143.0;
+        double[] out = new double[1];
+        DopplerWidth.hwhmCm1(b, 296.0, MoleculeRegistry.builtIn(), out);
+        assertEquals(handbook(2143.0, 296.0, 27.9949), out[0], 1.5e-4 * out[0]);
     }
 
     @Test
