@@ -1,5 +1,6 @@
 package org.linewright.broadening.intensity;
 
+import org.linewright.broadening.isotopologue.IsotopologueCache;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
@@ -31,8 +32,8 @@ import org.linewright.ingest.source.IsotopologueLookup;
  * them in linewright, shared with the readers); this class applies them to whole batches with the partition
  * sums and abundances of the registry.
  *
- * <p>Vectorised methods are allocation-free: they write into caller-supplied arrays of at least
- * {@code batch.size} elements and look up Q(T) once per run of rows with the same isotopologue.
+ * <p>The batch method is allocation-free: it writes into a caller-supplied array of at least
+ * {@code batch.size} elements and reads Q(T), Q(296 K) and abundances from an {@link IsotopologueCache}.
  */
 public final class LineIntensity {
     /** Reference temperature of the line model's intensities, in K. */
@@ -77,47 +78,42 @@ public final class LineIntensity {
 
     /**
      * S(T) for every row of a batch: from S(296 K) where the row has one (finite and positive), else from the
-     * Einstein A coefficient and g'. Rows with neither get NaN.
+     * Einstein A coefficient and g'. Rows with neither get NaN. Allocation-free.
      *
+     * @param isotopologues registry values at T (one cache per thread; reuse it batch after batch)
      * @param out receives S(T) for rows {@code 0 .. batch.size-1}
-     * @throws IllegalArgumentException for a non-positive temperature
-     * @throws InputException when the registry does not know a row's isotopologue
+     * @throws InputException when the registry has no partition sum for a row's isotopologue
      */
-    public static void atTemperature(LineBatch batch, double temperatureK, IsotopologueLookup lookup, double[] out) {
-        if (!(temperatureK > 0) || Double.isInfinite(temperatureK)) {
-            throw new IllegalArgumentException("temperature must be positive and finite: " + temperatureK + " K");
-        }
-        int lastMol = Integer.MIN_VALUE;
-        int lastIso = Integer.MIN_VALUE;
-        double qT = Double.NaN;
-        double ratio = Double.NaN;
-        double abundance = Double.NaN;
+    public static void atTemperature(LineBatch batch, IsotopologueCache isotopologues, double[] out) {
+        double temperatureK = isotopologues.temperatureK();
         for (int i = 0; i < batch.size; i++) {
             int mol = batch.moleculeId[i];
             int iso = batch.isotopologue[i];
-            if (mol != lastMol || iso != lastIso) {
-                qT = lookup.partitionSum(mol, iso, temperatureK);
-                double q296 = lookup.partitionSum(mol, iso, REFERENCE_TEMPERATURE_K);
-                if (!(qT > 0) || !(q296 > 0)) {
-                    throw new InputException("no partition sum for molecule " + mol + " isotopologue " + iso
-                            + " at " + temperatureK + " K (line " + batch.sourceLine[i]
-                            + "; expected the isotopologue and its partition sum in the registry)");
-                }
-                ratio = q296 / qT;
-                abundance = lookup.naturalAbundance(mol, iso);
-                lastMol = mol;
-                lastIso = iso;
+            double qT = isotopologues.partitionSum(mol, iso);
+            double q296 = isotopologues.partitionSum296(mol, iso);
+            if (!(qT > 0) || !(q296 > 0)) {
+                isotopologues.requirePartitionSums(mol, iso, batch.sourceLine[i]);
             }
             double s296 = batch.intensityCmPerMolecule[i];
             if (s296 > 0 && Double.isFinite(s296)) {
-                out[i] = scaledFromReference(s296, batch.wavenumberCm1[i], batch.lowerEnergyCm1[i], ratio,
+                out[i] = scaledFromReference(s296, batch.wavenumberCm1[i], batch.lowerEnergyCm1[i], q296 / qT,
                         temperatureK);
             } else if (batch.einsteinAS1[i] >= 0 && batch.upperDegeneracy[i] > 0) {
                 out[i] = fromEinsteinA(batch.einsteinAS1[i], batch.upperDegeneracy[i], batch.wavenumberCm1[i],
-                        batch.lowerEnergyCm1[i], abundance, qT, temperatureK);
+                        batch.lowerEnergyCm1[i], isotopologues.naturalAbundance(mol, iso), qT, temperatureK);
             } else {
                 out[i] = Double.NaN;
             }
         }
+    }
+
+    /**
+     * {@link #atTemperature(LineBatch, IsotopologueCache, double[])} with a new cache for this call (a few
+     * small arrays); loops over many batches should keep one {@link IsotopologueCache} instead.
+     *
+     * @throws IllegalArgumentException for a non-positive temperature
+     */
+    public static void atTemperature(LineBatch batch, double temperatureK, IsotopologueLookup lookup, double[] out) {
+        atTemperature(batch, new IsotopologueCache(lookup, temperatureK), out);
     }
 }

@@ -1,5 +1,6 @@
 package org.linewright.broadening.width;
 
+import org.linewright.broadening.isotopologue.IsotopologueCache;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.source.IsotopologueLookup;
@@ -34,30 +35,31 @@ public final class DopplerWidth {
     }
 
     /**
-     * α_D for every row of a batch (allocation-free; the mass is looked up once per run of rows of the same
-     * isotopologue).
+     * α_D for every row of a batch at the cache's temperature (allocation-free).
      *
+     * @param isotopologues registry values (one cache per thread; reuse it batch after batch)
      * @param out receives α_D in cm⁻¹ for rows {@code 0 .. batch.size-1}
      * @throws InputException when the registry has no mass for a row's isotopologue
      */
-    public static void hwhmCm1(LineBatch batch, double temperatureK, IsotopologueLookup lookup, double[] out) {
-        int lastMol = Integer.MIN_VALUE;
-        int lastIso = Integer.MIN_VALUE;
-        double factor = Double.NaN;
+    public static void hwhmCm1(LineBatch batch, IsotopologueCache isotopologues, double[] out) {
+        // α_D/ν = √(2ln2·k/m_u · T/M)/c: the T part once, the mass per row from the cache
+        double perMass = TWO_LN2_K_OVER_MU * isotopologues.temperatureK();
         for (int i = 0; i < batch.size; i++) {
-            int mol = batch.moleculeId[i];
-            int iso = batch.isotopologue[i];
-            if (mol != lastMol || iso != lastIso) {
-                double mass = lookup.massGPerMol(mol, iso);
-                if (!(mass > 0)) {
-                    throw new InputException("no mass for molecule " + mol + " isotopologue " + iso
-                            + " (line " + batch.sourceLine[i] + "; expected the isotopologue in the registry)");
-                }
-                factor = Math.sqrt(TWO_LN2_K_OVER_MU * temperatureK / mass) / PhysicalConstants.SPEED_OF_LIGHT_M_PER_S;
-                lastMol = mol;
-                lastIso = iso;
+            double mass = isotopologues.massGPerMol(batch.moleculeId[i], batch.isotopologue[i]);
+            if (!(mass > 0)) {
+                throw new InputException("no mass for molecule " + batch.moleculeId[i] + " isotopologue "
+                        + batch.isotopologue[i] + " (line " + batch.sourceLine[i]
+                        + "; expected the isotopologue in the registry)");
             }
-            out[i] = batch.wavenumberCm1[i] * factor;
+            out[i] = batch.wavenumberCm1[i] / PhysicalConstants.SPEED_OF_LIGHT_M_PER_S * Math.sqrt(perMass / mass);
         }
+    }
+
+    /**
+     * {@link #hwhmCm1(LineBatch, IsotopologueCache, double[])} with a new cache for this call; loops over many
+     * batches should keep one {@link IsotopologueCache} instead.
+     */
+    public static void hwhmCm1(LineBatch batch, double temperatureK, IsotopologueLookup lookup, double[] out) {
+        hwhmCm1(batch, new IsotopologueCache(lookup, temperatureK), out);
     }
 }
