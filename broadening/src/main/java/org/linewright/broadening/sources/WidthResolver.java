@@ -144,7 +144,7 @@ public final class WidthResolver {
         for (int i = 0; i < batch.size; i++) {
             int mol = batch.moleculeId[i];
             int iso = batch.isotopologue[i];
-            if (mol != lastMol || iso != lastIso) {
+            if (mol != lastMol) { // rules hold for every isotopologue of a molecule
                 BackgroundGas ruleGas = gas;
                 if (gas == BackgroundGas.SELF && rules.rule(mol, gas, BroadeningRule.Quantity.WIDTH) == null) {
                     // self-broadening of CO2, H2O or H2 is broadening by that gas: its rules apply
@@ -153,13 +153,15 @@ public final class WidthResolver {
                 }
                 widthRule = rules.rule(mol, ruleGas, BroadeningRule.Quantity.WIDTH);
                 exponentRule = rules.rule(mol, ruleGas, BroadeningRule.Quantity.EXPONENT);
+            }
+            if ((mol != lastMol || iso != lastIso) && !tables.isEmpty()) {
                 table = tables.get(tableKey(mol, iso, gas));
                 if (table == null) {
                     table = tables.get(tableKey(mol, 0, gas));
                 }
-                lastMol = mol;
-                lastIso = iso;
             }
+            lastMol = mol;
+            lastIso = iso;
             double w = Double.NaN;
             double e = Double.NaN;
             double d = Double.NaN;
