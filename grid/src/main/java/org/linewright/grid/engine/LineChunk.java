@@ -1,0 +1,33 @@
+package org.linewright.grid.engine;
+
+/**
+ * Lines ready for a cross-section engine at one (p, T): pressure-shifted centres, intensities S(T), Doppler and
+ * Lorentz half widths, in ascending order of centre. Primitive arrays, reused chunk after chunk; {@link #size}
+ * rows valid. Built from the line store by the cross-section calculator, consumed by every engine.
+ */
+public final class LineChunk {
+    /** Number of valid rows. */
+    public int size;
+    /** Line centre including the pressure shift, cm⁻¹. */
+    public final double[] centerCm1;
+    /** Line intensity S(T), cm⁻¹/(molecule·cm⁻²). */
+    public final double[] intensityCmPerMolecule;
+    /** Doppler HWHM αD, cm⁻¹. */
+    public final double[] dopplerHwhmCm1;
+    /** Lorentz HWHM γL at this pressure and temperature, cm⁻¹. */
+    public final double[] lorentzHwhmCm1;
+    /** Whether the line gets the sub-Lorentzian χ factor (CO2 broadened by CO2). */
+    public final boolean[] chiFactor;
+
+    public LineChunk(int capacity) {
+        centerCm1 = new double[capacity];
+        intensityCmPerMolecule = new double[capacity];
+        dopplerHwhmCm1 = new double[capacity];
+        lorentzHwhmCm1 = new double[capacity];
+        chiFactor = new boolean[capacity];
+    }
+
+    public int capacity() {
+        return centerCm1.length;
+    }
+}
