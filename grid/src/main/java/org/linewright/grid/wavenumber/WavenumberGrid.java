@@ -75,6 +75,18 @@ public final class WavenumberGrid {
         return new WavenumberGrid(Spacing.RESOLVING_POWER, fromCm1, toCm1, resolvingPower, p);
     }
 
+    /**
+     * The points {@code [fromIndex, toIndex)} of this grid as a grid of their own, bit for bit the same values (a
+     * table's wavenumber blocks are slices, so a block computed alone equals the same points of the whole grid).
+     */
+    public WavenumberGrid slice(int fromIndex, int toIndex) {
+        if (fromIndex < 0 || toIndex > pointsCm1.length || toIndex - fromIndex < 1) {
+            throw new IllegalArgumentException("slice [" + fromIndex + ", " + toIndex + ") of a grid of " + pointsCm1.length);
+        }
+        double[] p = java.util.Arrays.copyOfRange(pointsCm1, fromIndex, toIndex);
+        return new WavenumberGrid(spacing, p[0], p[p.length - 1], parameter, p);
+    }
+
     private static void checkRange(double fromCm1, double toCm1) {
         if (!Double.isFinite(fromCm1) || !Double.isFinite(toCm1) || fromCm1 < 0 || !(toCm1 > fromCm1)) {
             throw new InputException("wavenumber range: " + fromCm1 + " to " + toCm1
