@@ -1,0 +1,127 @@
+package org.linewright.grid.manifest;
+
+import java.io.BufferedInputStream;
+import java.io.BufferedOutputStream;
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.nio.channels.FileChannel;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.DirectoryStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Set;
+import org.linewright.grid.table.BlockResult;
+import org.linewright.ingest.InputException;
+
+/**
+ * The computed blocks of a table build, one file per block in {@code WORK/blocks/}, named by the block's input
+ * hash ({@code <hash>.blk}): a block whose inputs did not change is found again under the same name, whatever
+ * else changed. A file is written under a temporary name, forced to disk and renamed, so a file under its final
+ * name is always complete (an interrupted build resumes from the blocks it finished).
+ *
+ * <p>File layout (big-endian, {@link DataOutputStream}): the magic {@code LWBLK001}, the point count n, n float64
+ * σ values, lines used, lines below threshold, the error estimate, the number of named counts and each as
+ * (UTF name, long).
+ */
+public final class BlockStore {
+    private static final long MAGIC = 0x4C57424C4B303031L; // "LWBLK001"
+    private static final String SUFFIX = ".blk";
+
+    private final Path dir;
+
+    /** A block store in {@code workDir/blocks} (created when missing). */
+    public BlockStore(Path workDir) throws IOException {
+        this.dir = workDir.resolve("blocks");
+        Files.createDirectories(dir);
+    }
+
+    /** True when the block of this hash is complete on disk. */
+    public boolean has(String hash) {
+        return Files.isRegularFile(file(hash));
+    }
+
+    /** Saves a block atomically. */
+    public void save(String hash, BlockResult result) throws IOException {
+        Path tmp = Files.createTempFile(dir, ".partial-", SUFFIX);
+        try {
+            try (OutputStream os = Files.newOutputStream(tmp);
+                 DataOutputStream out = new DataOutputStream(new BufferedOutputStream(os, 1 << 16))) {
+                out.writeLong(MAGIC);
+                double[] s = result.sigmaCm2PerMolecule();
+                out.writeInt(s.length);
+                for (double v : s) {
+                    out.writeDouble(v);
+                }
+                out.writeLong(result.linesUsed());
+                out.writeLong(result.linesBelowThreshold());
+                out.writeDouble(result.estimatedRelativeError());
+                out.writeInt(result.counts().size());
+                for (Map.Entry<String, Long> e : result.counts().entrySet()) {
+                    out.writeUTF(e.getKey());
+                    out.writeLong(e.getValue());
+                }
+            }
+            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
+                ch.force(true);
+            }
+            try {
+                Files.move(tmp, file(hash), StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, file(hash), StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(tmp);
+        }
+    }
+
+    /** Loads a block. */
+    public BlockResult load(String hash) throws IOException {
+        Path f = file(hash);
+        try (InputStream is = Files.newInputStream(f);
+             DataInputStream in = new DataInputStream(new BufferedInputStream(is, 1 << 16))) {
+            if (in.readLong() != MAGIC) {
+                throw new InputException(f + ": not a block file of this version (delete the work folder to rebuild)");
+            }
+            double[] s = new double[in.readInt()];
+            for (int i = 0; i < s.length; i++) {
+                s[i] = in.readDouble();
+            }
+            long used = in.readLong();
+            long below = in.readLong();
+            double error = in.readDouble();
+            int n = in.readInt();
+            Map<String, Long> counts = new LinkedHashMap<>();
+            for (int i = 0; i < n; i++) {
+                counts.put(in.readUTF(), in.readLong());
+            }
+            return new BlockResult(s, used, below, counts, error);
+        }
+    }
+
+    /** Deletes block files (and leftover temporary files) whose hash is not in {@code keep}. */
+    public int prune(Set<String> keep) throws IOException {
+        int removed = 0;
+        try (DirectoryStream<Path> files = Files.newDirectoryStream(dir)) {
+            for (Path f : files) {
+                String name = f.getFileName().toString();
+                String hash = name.endsWith(SUFFIX) ? name.substring(0, name.length() - SUFFIX.length()) : null;
+                if (name.startsWith(".partial-") || hash != null && !keep.contains(hash)) {
+                    Files.deleteIfExists(f);
+                    removed++;
+                }
+            }
+        }
+        return removed;
+    }
+
+    private Path file(String hash) {
+        return dir.resolve(hash + SUFFIX);
+    }
+}
