@@ -99,7 +99,7 @@ public final class LinesCommand implements Callable<Integer> {
         LineListingRequest request = new LineListingRequest(low, high, moleculeId, isotopologue, strongest,
                 temperatureK, backgroundOptions.resolverOrNull());
         LineListing.Summary summary = LineListing.write(LineStore.open(store), request, registry,
-                ListingFormat.byName(format), out, System.out);
+                ListingFormat.byName(format), out, spec.commandLine().getOut());
         if (!root.globalOptions().quiet()) {
             PrintWriter err = spec.commandLine().getErr();
             err.printf(Locale.ROOT, "%d line(s) listed of %d in the selection%s%n", summary.linesListed(),

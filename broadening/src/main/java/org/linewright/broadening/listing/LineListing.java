@@ -1,9 +1,6 @@
 package org.linewright.broadening.listing;
 
-import java.io.BufferedWriter;
 import java.io.IOException;
-import java.io.OutputStream;
-import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -67,10 +64,10 @@ public final class LineListing {
      *
      * @param lookup isotopologue data (Q(T), abundances, masses) for the computed columns
      * @param outOrNull the file to write (atomically); null writes CSV or table output to {@code stdout}
-     * @param stdout where output goes when {@code outOrNull} is null
+     * @param stdout where output goes when {@code outOrNull} is null (flushed, not closed)
      */
     public static Summary write(LineStore store, LineListingRequest request, IsotopologueLookup lookup,
-                                ListingFormat format, Path outOrNull, OutputStream stdout) throws IOException {
+                                ListingFormat format, Path outOrNull, Writer stdout) throws IOException {
         if (format == ListingFormat.ARROW && outOrNull == null) {
             throw new InputException("format arrow writes a file: give the output file (--out FILE.arrow)");
         }
@@ -88,7 +85,7 @@ public final class LineListing {
         }
         try {
             Summary s;
-            try (OutputStream out = Files.newOutputStream(partial)) {
+            try (Writer out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8)) {
                 s = list(store, query, selected, computed, format, out, null);
             }
             Files.move(partial, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
@@ -203,15 +200,13 @@ public final class LineListing {
     }
 
     private static Summary list(LineStore store, LineQuery query, long[] selectedOrNull, Computed computed,
-                                ListingFormat format, OutputStream outOrNull, Path arrowTarget) throws IOException {
+                                ListingFormat format, Writer text, Path arrowTarget) throws IOException {
         LineBatch batch = new LineBatch(BATCH);
         LineBatch chosen = new LineBatch(BATCH);
         int[] rows = new int[BATCH];
         long seq = 0;
         int nextSelected = 0;
         long listed = 0;
-        Writer text = outOrNull == null ? null
-                : new BufferedWriter(new OutputStreamWriter(outOrNull, StandardCharsets.UTF_8), 1 << 16);
         try (LineCursor cursor = store.cursor(query);
              LineExportWriter arrow = arrowTarget == null ? null
                      : new LineExportWriter(arrowTarget, computed.arrowColumns(), computed.metadata())) {
