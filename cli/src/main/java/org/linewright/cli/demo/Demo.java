@@ -37,7 +37,7 @@ public final class Demo {
 
     /** The steps this build runs: stage the data, take the synthetic lines, draw the stick spectrum. */
     public static List<DemoStep> availableSteps() {
-        return List.of(new StageDataStep(), new IngestStep(), new StickSpectrumStep());
+        return List.of(new StageDataStep(), new IngestStep(), new StickSpectrumStep(), new TableStep());
     }
 
     /**
