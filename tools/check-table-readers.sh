@@ -51,10 +51,11 @@ if command -v h5dump >/dev/null 2>&1; then
 import subprocess, sys, re, struct, hashlib
 work = sys.argv[1]
 def data(name, fmt="%.17g"):
-    out = subprocess.run(["h5dump", "-d", name, "-m", fmt, "-y", "-w", "0", "-O", work + "/table.h5"],
+    out = subprocess.run(["h5dump", "-d", name, "-m", fmt, "-y", "-w", "0", work + "/table.h5"],
                          capture_output=True, text=True, check=True).stdout
-    body = out[out.index("DATA {") + 6: out.rindex("}")]
-    return [float(x) for x in re.split(r"[\s,]+", body.strip().rstrip("}").strip()) if x]
+    start = out.index("DATA {") + 6
+    body = out[start: out.index("}", start)]
+    return [float(x) for x in re.split(r"[\s,]+", body.strip()) if x]
 nu, p, t = data("/wavenumber_cm1"), data("/pressure_bar"), data("/temperature_K")
 s = data("/cross_section_cm2_per_molecule")
 attr = subprocess.run(["h5dump", "-a", "/sigma_sha256", work + "/table.h5"], capture_output=True, text=True, check=True).stdout
