@@ -9,8 +9,8 @@ import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
 import org.linewright.ingest.source.LineReader;
 import org.linewright.ingest.source.ReadOptions;
-import org.linewright.ingest.text.AsciiLineReader;
-import org.linewright.ingest.text.AsciiNumbers;
+import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.text.DecimalParser;
 import org.linewright.ingest.units.PhysicalConstants;
 
 /**
@@ -62,7 +62,7 @@ public final class CatalogReader implements LineReader {
     private static final int MIN_RECORD_LENGTH = 55;
     private static final int QUANTA_PER_STATE = 6;
 
-    private final AsciiLineReader lines;
+    private final ByteLineScanner lines;
     private final String fileName;
     private final ReadOptions options;
     private final boolean intensitiesIncludeAbundance;
@@ -89,7 +89,7 @@ public final class CatalogReader implements LineReader {
      *                                    abundance (then S is not multiplied by it)
      */
     public CatalogReader(InputStream in, String fileName, ReadOptions options, boolean intensitiesIncludeAbundance) {
-        this.lines = new AsciiLineReader(in);
+        this.lines = new ByteLineScanner(in);
         this.fileName = fileName;
         this.options = options;
         this.intensitiesIncludeAbundance = intensitiesIncludeAbundance;
@@ -99,7 +99,7 @@ public final class CatalogReader implements LineReader {
     public boolean read(LineBatch batch) throws IOException {
         batch.clear();
         while (!batch.isFull() && lines.next()) {
-            if (AsciiNumbers.isBlank(lines.buffer(), lines.lineStart(), lines.lineEnd())) {
+            if (lines.isBlank()) {
                 continue;
             }
             recordsRead++;
@@ -132,12 +132,12 @@ public final class CatalogReader implements LineReader {
             throw error(b, base, 32, 41, "ELO", "a non-negative energy in cm-1");
         }
         int gUpper = decodeDegeneracy(b, base);
-        long tag = AsciiNumbers.parseLong(b, base + 44, base + 51);
-        if (tag == AsciiNumbers.NOT_AN_INTEGER || tag == 0 || Math.abs(tag) > 9_999_999) {
+        long tag = DecimalParser.parseInt(b, base + 44, base + 51);
+        if (tag == DecimalParser.NOT_AN_INTEGER || tag == 0 || Math.abs(tag) > 9_999_999) {
             throw error(b, base, 45, 51, "TAG", "I7 species tag (negative: measured frequency)");
         }
-        long qnfmt = AsciiNumbers.parseLong(b, base + 51, base + 55);
-        if (qnfmt == AsciiNumbers.NOT_AN_INTEGER || qnfmt < 0) {
+        long qnfmt = DecimalParser.parseInt(b, base + 51, base + 55);
+        if (qnfmt == DecimalParser.NOT_AN_INTEGER || qnfmt < 0) {
             throw error(b, base, 52, 55, "QNFMT", "I4 quantum-number format code");
         }
         int perState = (int) (qnfmt % 10);
@@ -229,7 +229,7 @@ public final class CatalogReader implements LineReader {
     }
 
     private double number(byte[] b, int base, int firstColumn, int lastColumn, String field, String expected) {
-        double v = AsciiNumbers.parseDouble(b, base + firstColumn - 1, base + lastColumn);
+        double v = DecimalParser.parse(b, base + firstColumn - 1, base + lastColumn);
         if (Double.isNaN(v) || Double.isInfinite(v)) {
             throw error(b, base, firstColumn, lastColumn, field, expected);
         }
@@ -246,12 +246,12 @@ public final class CatalogReader implements LineReader {
         }
         int value;
         if (i < to && b[i] >= 'A' && b[i] <= 'Z') {
-            long rest = AsciiNumbers.parseLong(b, i + 1, to);
-            value = rest == AsciiNumbers.NOT_AN_INTEGER || rest < 0 || to - (i + 1) != 2
+            long rest = DecimalParser.parseInt(b, i + 1, to);
+            value = rest == DecimalParser.NOT_AN_INTEGER || rest < 0 || to - (i + 1) != 2
                     ? -1 : (b[i] - 'A' + 10) * 100 + (int) rest;
         } else {
-            long v = AsciiNumbers.parseLong(b, from, to);
-            value = v == AsciiNumbers.NOT_AN_INTEGER ? -1 : (int) v;
+            long v = DecimalParser.parseInt(b, from, to);
+            value = v == DecimalParser.NOT_AN_INTEGER ? -1 : (int) v;
         }
         if (value <= 0) {
             throw error(b, base, 42, 44, "GUP", "a positive I3 degeneracy (letter for the hundreds above 999)");

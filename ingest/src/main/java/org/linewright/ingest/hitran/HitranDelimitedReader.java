@@ -11,13 +11,13 @@ import java.util.Locale;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.TextColumn;
-import org.linewright.ingest.source.ByteLineScanner;
-import org.linewright.ingest.source.DecimalParser;
 import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
 import org.linewright.ingest.source.LineReader;
 import org.linewright.ingest.source.ReadOptions;
+import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * Reads comma- or tab-separated line-list exports whose first non-blank line names the parameters

@@ -4,14 +4,14 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import org.linewright.ingest.line.LineBatch;
-import org.linewright.ingest.source.ByteLineScanner;
-import org.linewright.ingest.source.DecimalParser;
 import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
 import org.linewright.ingest.source.LineReader;
 import org.linewright.ingest.source.ReadOptions;
+import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * Reads line lists in the 160-character fixed-column layout (2004 and later; see {@link HitranField}) into

@@ -2,6 +2,7 @@ package org.linewright.ingest.source;
 
 import java.nio.charset.StandardCharsets;
 import java.util.Locale;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * Recognises the format of a line list from its file name and its first non-blank lines.

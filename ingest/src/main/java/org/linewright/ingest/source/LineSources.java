@@ -6,6 +6,7 @@ import java.io.InputStream;
 import java.nio.file.Path;
 import org.linewright.ingest.hitran.HitranDelimitedReader;
 import org.linewright.ingest.hitran.HitranRecordReader;
+import org.linewright.ingest.text.ByteLineScanner;
 
 /**
  * Opens a line-list file of any supported format and compression: detects the compression by magic bytes
