@@ -8,8 +8,9 @@ import org.linewright.ingest.text.DecimalParser;
  * Recognises the format of a line list from its file name and its first non-blank lines.
  *
  * <ul>
- *   <li>{@link LineFormat#EXOMOL}: a name ending in {@code .states}, {@code .trans} or {@code .def} (before
- *       any compression suffix), or lines of whitespace-separated numbers starting with an integer id;</li>
+ *   <li>{@link LineFormat#EXOMOL}: a name ending in {@code .states}, {@code .trans}, {@code .def}, {@code .pf} or
+ *       {@code .broad} (before any compression suffix), or lines of whitespace-separated numbers starting with an
+ *       integer id;</li>
  *   <li>{@link LineFormat#HITRAN160}: 160-character lines with a molecule number, an isotopologue code and
  *       a wavenumber in their first 15 columns;</li>
  *   <li>{@link LineFormat#CATALOG}: lines of 55–81 characters whose frequency, error, log intensity,
@@ -27,14 +28,18 @@ public final class FormatDetector {
     private FormatDetector() {
     }
 
-    /** The format a file name alone announces ({@code .states}, {@code .trans}, {@code .def}), or null. */
+    /**
+     * The format a file name alone announces ({@code .states}, {@code .trans}, {@code .def}, {@code .pf},
+     * {@code .broad}, each optionally followed by a compression suffix), or null.
+     */
     public static LineFormat byFileName(String fileName) {
         String n = fileName.toLowerCase(Locale.ROOT);
         SourceInput.Compression c = SourceInput.Compression.bySuffix(n);
         if (c != SourceInput.Compression.NONE) {
             n = n.substring(0, n.lastIndexOf('.'));
         }
-        if (n.endsWith(".states") || n.endsWith(".trans") || n.endsWith(".def")) {
+        if (n.endsWith(".states") || n.endsWith(".trans") || n.endsWith(".def") || n.endsWith(".pf")
+                || n.endsWith(".broad")) {
             return LineFormat.EXOMOL;
         }
         return null;
