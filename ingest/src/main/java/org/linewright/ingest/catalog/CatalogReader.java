@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.io.InputStream;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.source.DuplicateCounter;
+import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
@@ -50,7 +52,7 @@ import org.linewright.ingest.units.PhysicalConstants;
  * ({@code A23} = 1023); a quantum number above 99 is written with a capital letter for the tens
  * ({@code A0} = 100, {@code B5} = 115) and one below −9 with a small letter ({@code a0} = −10, {@code b3} = −23).
  */
-public final class CatalogReader implements LineReader {
+public final class CatalogReader implements LineReader, DuplicateCounter {
     /** Temperature of the catalog's intensities, K. */
     public static final double CATALOG_TEMPERATURE_K = 300.0;
     private static final double HZ_PER_MHZ = 1e6;
@@ -78,6 +80,7 @@ public final class CatalogReader implements LineReader {
 
     private long recordsRead;
     private long recordsRejected;
+    private final DuplicateTracker duplicates = new DuplicateTracker();
 
     /** A reader for catalogs whose intensities exclude the natural abundance (the usual case). */
     public CatalogReader(InputStream in, String fileName, ReadOptions options) {
@@ -201,6 +204,7 @@ public final class CatalogReader implements LineReader {
         batch.referenceCodes.append(b, tagStart, tagEnd - tagStart);
         batch.lineMixingFlag.appendEmpty();
         batch.size++;
+        duplicates.offer(batch, row);
     }
 
     /** Registry ids, abundance and Q(296), Q(300) of a species tag, cached (a catalog file is usually one species). */
@@ -337,6 +341,12 @@ public final class CatalogReader implements LineReader {
     @Override
     public long recordsRejected() {
         return recordsRejected;
+    }
+
+    /** Kept lines identical in molecule, isotopologue, wavenumber and the four quanta texts to the line before. */
+    @Override
+    public long duplicatesSeen() {
+        return duplicates.duplicates();
     }
 
     @Override

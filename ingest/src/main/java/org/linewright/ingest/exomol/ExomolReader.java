@@ -10,6 +10,8 @@ import java.util.Map;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.source.DuplicateCounter;
+import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
@@ -46,7 +48,7 @@ import org.linewright.ingest.text.DecimalParser;
  * Memory: the states (about 50 bytes per state plus its label text, twice that while the arrays grow) and one input buffer; transitions are never
  * held beyond the current batch.
  */
-public final class ExomolReader implements LineReader {
+public final class ExomolReader implements LineReader, DuplicateCounter {
     private static final int MAX_TRANSITION_FIELDS = 4;
 
     private final ExomolFileSet files;
@@ -72,6 +74,7 @@ public final class ExomolReader implements LineReader {
     private final int[] end = new int[MAX_TRANSITION_FIELDS];
     private long recordsRead;
     private long recordsRejected;
+    private final DuplicateTracker duplicates = new DuplicateTracker();
 
     private ExomolReader(ExomolFileSet files, StreamOpener opener, ReadOptions options, IsotopologueLookup.Id id,
                          double abundance, double partitionSum296K, PartitionTable partitionTable,
@@ -313,6 +316,7 @@ public final class ExomolReader implements LineReader {
         batch.referenceCodes.appendEmpty();
         batch.lineMixingFlag.appendEmpty();
         batch.size++;
+        duplicates.offer(batch, row);
     }
 
     private int stateRow(byte[] b, int field, String name) {
@@ -338,6 +342,12 @@ public final class ExomolReader implements LineReader {
     @Override
     public long recordsRejected() {
         return recordsRejected;
+    }
+
+    /** Kept lines identical in molecule, isotopologue, wavenumber and the four quanta texts to the line before. */
+    @Override
+    public long duplicatesSeen() {
+        return duplicates.duplicates();
     }
 
     @Override

@@ -12,6 +12,7 @@ import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.TextColumn;
 import org.linewright.ingest.source.DuplicateCounter;
+import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
 import org.linewright.ingest.source.LineReader;
@@ -105,15 +106,9 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
     private final byte[] quantaScratch = new byte[2 * HitranQuanta.FIELD_WIDTH];
     private final double[] quanta = new double[3];
     private byte[] unescapeScratch = new byte[64];
-    private byte[] previousQuanta = new byte[64];
-    private int previousQuantaLength = -1;
-    private int cursor;
-    private int previousMolecule = -1;
-    private int previousIsotopologue = -1;
-    private long previousWavenumberBits;
+    private final DuplicateTracker duplicates = new DuplicateTracker();
     private long recordsRead;
     private long recordsRejected;
-    private long duplicates;
 
     /**
      * Reads the header row.
@@ -285,42 +280,8 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
         appendText(b.uncertaintyCodes, Parameter.IERR);
         appendText(b.referenceCodes, Parameter.IREF);
         appendText(b.lineMixingFlag, Parameter.LINE_MIXING_FLAG);
-        countDuplicate(b, row);
+        duplicates.offer(b, row);
         return null;
-    }
-
-    private void countDuplicate(LineBatch b, int row) {
-        int total = b.upperGlobalQuanta.length(row) + b.lowerGlobalQuanta.length(row)
-                + b.upperLocalQuanta.length(row) + b.lowerLocalQuanta.length(row) + 4;
-        if (previousQuanta.length < total) {
-            previousQuanta = Arrays.copyOf(previousQuanta, Math.max(total, 2 * previousQuanta.length));
-        }
-        long bits = Double.doubleToRawLongBits(b.wavenumberCm1[row]);
-        boolean same = b.moleculeId[row] == previousMolecule && b.isotopologue[row] == previousIsotopologue
-                && bits == previousWavenumberBits && total == previousQuantaLength;
-        cursor = 0;
-        same = compareAndKeep(b.upperGlobalQuanta, row, same);
-        same = compareAndKeep(b.lowerGlobalQuanta, row, same);
-        same = compareAndKeep(b.upperLocalQuanta, row, same);
-        same = compareAndKeep(b.lowerLocalQuanta, row, same);
-        if (same) {
-            duplicates++;
-        }
-        previousQuantaLength = total;
-        previousMolecule = b.moleculeId[row];
-        previousIsotopologue = b.isotopologue[row];
-        previousWavenumberBits = bits;
-    }
-
-    /** Compares one quanta text with the previous row's at {@link #cursor}, then keeps it there. */
-    private boolean compareAndKeep(TextColumn c, int row, boolean same) {
-        int len = c.length(row);
-        int from = c.start(row);
-        boolean equal = same && Arrays.equals(c.bytes(), from, from + len, previousQuanta, cursor, cursor + len);
-        System.arraycopy(c.bytes(), from, previousQuanta, cursor, len);
-        cursor += len;
-        previousQuanta[cursor++] = '\n'; // separates the four texts
-        return equal;
     }
 
     /** Splits the current line into fields; returns an error for an unterminated quote. */
@@ -523,7 +484,7 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
     /** Kept rows identical in molecule, isotopologue, wavenumber and the four quanta texts to the row before. */
     @Override
     public long duplicatesSeen() {
-        return duplicates;
+        return duplicates.duplicates();
     }
 
     @Override

@@ -214,6 +214,23 @@ class LineSourcesFormatsTest {
         }
     }
 
+    /** A repeated line is kept and counted alike by every reader ({@link DuplicateCounter}). */
+    @Test
+    void duplicatesAreCountedForCatalogsAndSets() throws Exception {
+        String[] catalogLines = CATALOG_CO.split("\n");
+        Path cat = write("dup.cat", "none", CATALOG_CO + catalogLines[2] + "\n");
+        try (OpenedSource s = LineSources.open(cat, null, STRICT)) {
+            assertEquals(4, readAll(s).size());
+            assertEquals(1, s.duplicatesSeen());
+        }
+        List<Path> set = writeSet("none");
+        Files.writeString(set.get(1), Files.readString(set.get(1)) + String.format(Locale.ROOT, "%12d %12d %10.4e%n", 4, 3, A[2]));
+        try (OpenedSource s = LineSources.open(set.get(1), null, STRICT)) {
+            assertEquals(4, readAll(s).size());
+            assertEquals(1, s.duplicatesSeen());
+        }
+    }
+
     @Test
     void stateLinesUnderAnotherNameAreRefusedWithTheNamingRule() throws IOException {
         Path p = write("levels.txt", "none", "           1     0.000000      1       0\n           2     3.845033      3       1\n");
