@@ -45,7 +45,7 @@ class LineSourcesFormatsTest {
             + "  230538.0000  0.0005 -4.1197 2    3.8450  5 -28001 101 2           1          \n"
             + "  345795.9899  0.0005 -3.6118 2   11.5350  7 -28001 101 3           2          \n";
     private static final ReadOptions STRICT = ReadOptions.strict(new CarbonMonoxideLookup());
-    private static final String[] SUFFIX = {"none", "", "gzip", ".gz", "bzip2", ".bz2", "xz", ".xz", "zstd", ".zst"};
+    private static final String[] SUFFIX = {"none", "", "gzip", ".gz", "bzip2", ".bz2", "xz", ".xz", "zstd", ".zst", "zip", ".zip"};
 
     @TempDir
     Path dir;
@@ -92,7 +92,7 @@ class LineSourcesFormatsTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"none", "gzip", "bzip2", "xz", "zstd"})
+    @ValueSource(strings = {"none", "gzip", "bzip2", "xz", "zstd", "zip"})
     void hitran160(String kind) throws Exception {
         List<String> sample = ReferenceSamples.lines(ReferenceSamples.hitran("sample_CO.par"));
         StringBuilder text = new StringBuilder();
@@ -118,7 +118,7 @@ class LineSourcesFormatsTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"none", "gzip", "bzip2", "xz", "zstd"})
+    @ValueSource(strings = {"none", "gzip", "bzip2", "xz", "zstd", "zip"})
     void delimited(String kind) throws Exception {
         StringBuilder text = new StringBuilder("molec_id,local_iso_id,nu,sw,a,gamma_air,n_air,elower\n");
         for (int k = 0; k < 3; k++) {
@@ -138,7 +138,7 @@ class LineSourcesFormatsTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"none", "gzip", "bzip2", "xz", "zstd"})
+    @ValueSource(strings = {"none", "gzip", "bzip2", "xz", "zstd", "zip"})
     void catalog(String kind) throws Exception {
         Path p = write("c028001.cat", kind, CATALOG_CO);
         try (OpenedSource s = LineSources.open(p, null, STRICT)) {
@@ -174,7 +174,7 @@ class LineSourcesFormatsTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"none", "gzip", "bzip2", "xz", "zstd"})
+    @ValueSource(strings = {"none", "gzip", "bzip2", "xz", "zstd", "zip"})
     void stateTransitionSetFromEachOfItsFiles(String kind) throws Exception {
         List<Path> files = writeSet(kind);
         List<OpenedSource.FileDigest> expected = new ArrayList<>();
