@@ -120,8 +120,13 @@ public final class ByteLineScanner implements Closeable {
 
     /** True when the current line holds only blanks (spaces, tabs, stray CRs) or nothing. */
     public boolean isBlank() {
-        for (int i = lineStart; i < lineEnd; i++) {
-            if (!isBlank(buffer[i])) {
+        return isBlank(buffer, lineStart, lineEnd);
+    }
+
+    /** True when {@code bytes[from, to)} holds only blanks (spaces, tabs, stray CRs) or nothing. */
+    public static boolean isBlank(byte[] bytes, int from, int to) {
+        for (int i = from; i < to; i++) {
+            if (!isBlank(bytes[i])) {
                 return false;
             }
         }
@@ -137,21 +142,30 @@ public final class ByteLineScanner implements Closeable {
      * @return the number of fields, or {@code start.length + 1} when the line holds more fields than fit
      */
     public int splitOnBlanks(int[] start, int[] end) {
-        byte[] b = buffer;
+        return splitOnBlanks(buffer, lineStart, lineEnd, start, end);
+    }
+
+    /**
+     * Splits {@code bytes[from, to)} into fields separated by runs of blanks (spaces, tabs, stray CRs), without
+     * allocating: field {@code k} is {@code bytes[start[k], end[k])}.
+     *
+     * @return the number of fields, or {@code start.length + 1} when there are more fields than fit
+     */
+    public static int splitOnBlanks(byte[] bytes, int from, int to, int[] start, int[] end) {
         int count = 0;
-        int i = lineStart;
+        int i = from;
         while (true) {
-            while (i < lineEnd && isBlank(b[i])) {
+            while (i < to && isBlank(bytes[i])) {
                 i++;
             }
-            if (i == lineEnd) {
+            if (i == to) {
                 return count;
             }
             if (count == start.length) {
                 return count + 1;
             }
             start[count] = i;
-            while (i < lineEnd && !isBlank(b[i])) {
+            while (i < to && !isBlank(bytes[i])) {
                 i++;
             }
             end[count] = i;
