@@ -1,6 +1,5 @@
 package org.linewright.ingest.catalog;
 
-import java.io.IOException;
 import java.io.InputStream;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
@@ -9,9 +8,8 @@ import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
-import org.linewright.ingest.source.LineReader;
 import org.linewright.ingest.source.ReadOptions;
-import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.source.RecordPerLineReader;
 import org.linewright.ingest.text.DecimalParser;
 import org.linewright.ingest.units.PhysicalConstants;
 
@@ -52,7 +50,7 @@ import org.linewright.ingest.units.PhysicalConstants;
  * ({@code A23} = 1023); a quantum number above 99 is written with a capital letter for the tens
  * ({@code A0} = 100, {@code B5} = 115) and one below −9 with a small letter ({@code a0} = −10, {@code b3} = −23).
  */
-public final class CatalogReader implements LineReader, DuplicateCounter {
+public final class CatalogReader extends RecordPerLineReader implements DuplicateCounter {
     /** Temperature of the catalog's intensities, K. */
     public static final double CATALOG_TEMPERATURE_K = 300.0;
     private static final double HZ_PER_MHZ = 1e6;
@@ -64,9 +62,6 @@ public final class CatalogReader implements LineReader, DuplicateCounter {
     private static final int MIN_RECORD_LENGTH = 55;
     private static final int QUANTA_PER_STATE = 6;
 
-    private final ByteLineScanner lines;
-    private final String fileName;
-    private final ReadOptions options;
     private final boolean intensitiesIncludeAbundance;
     private final byte[] upperQuanta = new byte[QUANTA_PER_STATE * 5];
     private final byte[] lowerQuanta = new byte[QUANTA_PER_STATE * 5];
@@ -78,8 +73,6 @@ public final class CatalogReader implements LineReader, DuplicateCounter {
     private double cachedQ296;
     private double cachedQ300;
 
-    private long recordsRead;
-    private long recordsRejected;
     private final DuplicateTracker duplicates = new DuplicateTracker();
 
     /** A reader for catalogs whose intensities exclude the natural abundance (the usual case). */
@@ -92,34 +85,12 @@ public final class CatalogReader implements LineReader, DuplicateCounter {
      *                                    abundance (then S is not multiplied by it)
      */
     public CatalogReader(InputStream in, String fileName, ReadOptions options, boolean intensitiesIncludeAbundance) {
-        this.lines = new ByteLineScanner(in);
-        this.fileName = fileName;
-        this.options = options;
+        super(in, fileName, options);
         this.intensitiesIncludeAbundance = intensitiesIncludeAbundance;
     }
 
     @Override
-    public boolean read(LineBatch batch) throws IOException {
-        batch.clear();
-        while (!batch.isFull() && lines.next()) {
-            if (lines.isBlank()) {
-                continue;
-            }
-            recordsRead++;
-            try {
-                parse(batch);
-            } catch (LineFormatException e) {
-                if (!options.lenient()) {
-                    throw e;
-                }
-                recordsRejected++;
-                options.rejects().reject(fileName, lines.lineNumber(), lines.lineText(), e.reason());
-            }
-        }
-        return batch.size > 0;
-    }
-
-    private void parse(LineBatch batch) {
+    protected LineFormatException parseRecord(LineBatch batch, int row) {
         byte[] b = lines.buffer();
         int base = lines.lineStart();
         int length = lines.lineEnd() - base;
@@ -171,7 +142,6 @@ public final class CatalogReader implements LineReader, DuplicateCounter {
         int lowerCount = decodeQuanta(b, base, 68, perState, length);
         int lowerJ = decoded[0];
         int lowerLength = writeQuanta(lowerCount, lowerQuanta);
-        int row = batch.size;
         batch.upperLocalQuanta.append(upperQuanta, 0, upperLength);
         batch.lowerLocalQuanta.append(lowerQuanta, 0, lowerLength);
 
@@ -203,8 +173,8 @@ public final class CatalogReader implements LineReader, DuplicateCounter {
         }
         batch.referenceCodes.append(b, tagStart, tagEnd - tagStart);
         batch.lineMixingFlag.appendEmpty();
-        batch.size++;
         duplicates.offer(batch, row);
+        return null;
     }
 
     /** Registry ids, abundance and Q(296), Q(300) of a species tag, cached (a catalog file is usually one species). */
@@ -333,16 +303,6 @@ public final class CatalogReader implements LineReader, DuplicateCounter {
         return new LineFormatException(fileName, lines.lineNumber(), firstColumn, lastColumn, field, text, expected);
     }
 
-    @Override
-    public long recordsRead() {
-        return recordsRead;
-    }
-
-    @Override
-    public long recordsRejected() {
-        return recordsRejected;
-    }
-
     /** Kept lines identical in molecule, isotopologue, wavenumber and the four quanta texts to the line before. */
     @Override
     public long duplicatesSeen() {
@@ -352,10 +312,5 @@ public final class CatalogReader implements LineReader, DuplicateCounter {
     @Override
     public LineFormat format() {
         return LineFormat.CATALOG;
-    }
-
-    @Override
-    public void close() throws IOException {
-        lines.close();
     }
 }

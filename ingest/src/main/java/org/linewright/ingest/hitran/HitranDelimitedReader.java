@@ -15,9 +15,8 @@ import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
-import org.linewright.ingest.source.LineReader;
 import org.linewright.ingest.source.ReadOptions;
-import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.source.RecordPerLineReader;
 import org.linewright.ingest.text.DecimalParser;
 
 /**
@@ -36,7 +35,7 @@ import org.linewright.ingest.text.DecimalParser;
  * are read as 10, 11, 12. Validation and duplicate counting follow {@link HitranRecordReader}; J', J'', K'
  * are read from the local quanta when they keep their 15-character width.
  */
-public final class HitranDelimitedReader implements LineReader, DuplicateCounter {
+public final class HitranDelimitedReader extends RecordPerLineReader implements DuplicateCounter {
     /** The parameter columns this reader knows, by header name (matched without regard to case). */
     public enum Parameter {
         MOLEC_ID("molec_id", true), LOCAL_ISO_ID("local_iso_id", true), NU("nu", true), SW("sw", true),
@@ -90,10 +89,6 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
         }
     }
 
-    private final InputStream in;
-    private final ByteLineScanner lines;
-    private final String fileName;
-    private final ReadOptions options;
     private final byte delimiter;
     private final String[] headerNames;
     private final int[] columnOf = new int[Parameter.values().length];
@@ -107,8 +102,6 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
     private final double[] quanta = new double[3];
     private byte[] unescapeScratch = new byte[64];
     private final DuplicateTracker duplicates = new DuplicateTracker();
-    private long recordsRead;
-    private long recordsRejected;
 
     /**
      * Reads the header row.
@@ -117,10 +110,7 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
      * @throws LineFormatException when there is no header or a required column is missing
      */
     public HitranDelimitedReader(InputStream in, String fileName, ReadOptions options) throws IOException {
-        this.in = in;
-        this.lines = new ByteLineScanner(in);
-        this.fileName = fileName;
-        this.options = options;
+        super(in, fileName, options);
         boolean found;
         while ((found = lines.next()) && lines.isBlank()) {
             // skip blank lines before the header
@@ -184,27 +174,7 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
     }
 
     @Override
-    public boolean read(LineBatch batch) throws IOException {
-        batch.clear();
-        while (!batch.isFull() && lines.next()) {
-            if (lines.isBlank()) {
-                continue;
-            }
-            recordsRead++;
-            LineFormatException bad = parseRow(batch, batch.size);
-            if (bad == null) {
-                batch.size++;
-            } else if (options.lenient()) {
-                recordsRejected++;
-                options.rejects().reject(fileName, lines.lineNumber(), lines.lineText(), bad.reason());
-            } else {
-                throw bad;
-            }
-        }
-        return batch.size > 0;
-    }
-
-    private LineFormatException parseRow(LineBatch b, int row) {
+    protected LineFormatException parseRecord(LineBatch b, int row) {
         LineFormatException bad = tokenize();
         if (bad != null) {
             return bad;
@@ -471,16 +441,6 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
         return new String(lines.buffer(), fieldStart[f], rawLength(f), StandardCharsets.UTF_8);
     }
 
-    @Override
-    public long recordsRead() {
-        return recordsRead;
-    }
-
-    @Override
-    public long recordsRejected() {
-        return recordsRejected;
-    }
-
     /** Kept rows identical in molecule, isotopologue, wavenumber and the four quanta texts to the row before. */
     @Override
     public long duplicatesSeen() {
@@ -490,10 +450,5 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
     @Override
     public LineFormat format() {
         return LineFormat.HITRAN_DELIMITED;
-    }
-
-    @Override
-    public void close() throws IOException {
-        in.close();
     }
 }
