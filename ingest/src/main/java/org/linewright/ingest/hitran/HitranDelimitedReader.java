@@ -322,14 +322,8 @@ public final class HitranDelimitedReader extends RecordPerLineReader implements 
     /** True when the field is empty, blank or "#" (a missing value). */
     private boolean missing(int f) {
         byte[] buf = lines.buffer();
-        int s = fieldStart[f];
-        int e = fieldEnd[f];
-        while (s < e && buf[s] == ' ') {
-            s++;
-        }
-        while (e > s && buf[e - 1] == ' ') {
-            e--;
-        }
+        int s = DecimalParser.skipSpaces(buf, fieldStart[f], fieldEnd[f]);
+        int e = DecimalParser.trimSpaces(buf, s, fieldEnd[f]);
         return s == e || (e - s == 1 && buf[s] == '#');
     }
 
@@ -372,14 +366,8 @@ public final class HitranDelimitedReader extends RecordPerLineReader implements 
     private int isotopologue() {
         int f = columnOf[Parameter.LOCAL_ISO_ID.ordinal()];
         byte[] buf = lines.buffer();
-        int s = fieldStart[f];
-        int e = fieldEnd[f];
-        while (s < e && buf[s] == ' ') {
-            s++;
-        }
-        while (e > s && buf[e - 1] == ' ') {
-            e--;
-        }
+        int s = DecimalParser.skipSpaces(buf, fieldStart[f], fieldEnd[f]);
+        int e = DecimalParser.trimSpaces(buf, s, fieldEnd[f]);
         if (e - s == 1) {
             int code = HitranRecordReader.isotopologueCode(buf[s]);
             if (code > 0) {

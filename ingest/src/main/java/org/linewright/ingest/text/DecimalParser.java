@@ -83,14 +83,8 @@ public final class DecimalParser {
      *         is blank or not a number (callers report it; a literal {@code NaN} also gives NaN)
      */
     public static double parse(byte[] bytes, int from, int to) {
-        int i = from;
-        int end = to;
-        while (i < end && bytes[i] == ' ') {
-            i++;
-        }
-        while (end > i && bytes[end - 1] == ' ') {
-            end--;
-        }
+        int i = skipSpaces(bytes, from, to);
+        int end = trimSpaces(bytes, i, to);
         if (i == end) {
             return Double.NaN;
         }
@@ -212,14 +206,8 @@ public final class DecimalParser {
      * @return the value, or {@link #NOT_AN_INTEGER} when the text is blank, not an integer or longer than 18 digits
      */
     public static long parseInt(byte[] bytes, int from, int to) {
-        int i = from;
-        int end = to;
-        while (i < end && bytes[i] == ' ') {
-            i++;
-        }
-        while (end > i && bytes[end - 1] == ' ') {
-            end--;
-        }
+        int i = skipSpaces(bytes, from, to);
+        int end = trimSpaces(bytes, i, to);
         if (i == end) {
             return NOT_AN_INTEGER;
         }
@@ -240,6 +228,24 @@ public final class DecimalParser {
             value = value * 10 + (c - '0');
         }
         return negative ? -value : value;
+    }
+
+    /** The first index of {@code bytes[from, to)} that is not a space, or {@code to} when there is none. */
+    public static int skipSpaces(byte[] bytes, int from, int to) {
+        int i = from;
+        while (i < to && bytes[i] == ' ') {
+            i++;
+        }
+        return i;
+    }
+
+    /** The end of {@code bytes[from, to)} without its trailing spaces ({@code from} when all are spaces). */
+    public static int trimSpaces(byte[] bytes, int from, int to) {
+        int end = to;
+        while (end > from && bytes[end - 1] == ' ') {
+            end--;
+        }
+        return end;
     }
 
     private static double slow(byte[] bytes, int from, int to) {
