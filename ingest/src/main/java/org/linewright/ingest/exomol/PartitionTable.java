@@ -4,8 +4,8 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.util.Arrays;
 import org.linewright.ingest.source.LineFormatException;
-import org.linewright.ingest.text.AsciiLineReader;
-import org.linewright.ingest.text.AsciiNumbers;
+import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * A tabulated total internal partition sum Q(T), as in the two-column {@code .pf} file of a state/transition
@@ -76,31 +76,30 @@ public final class PartitionTable {
         double[] t = new double[4096];
         double[] q = new double[4096];
         int n = 0;
-        try (AsciiLineReader lines = new AsciiLineReader(in)) {
+        try (ByteLineScanner lines = new ByteLineScanner(in)) {
             int[] start = new int[3];
             int[] end = new int[3];
             while (lines.next()) {
                 byte[] b = lines.buffer();
-                int count = Tokens.split(b, lines.lineStart(), lines.lineEnd(), start, end);
+                int count = lines.splitOnBlanks(start, end);
                 if (count == 0 || b[start[0]] == '#') {
                     continue;
                 }
-                int base = lines.lineStart();
                 if (count < 2) {
                     throw new LineFormatException(fileName, lines.lineNumber(), 0, 0, "Q", lines.lineText(),
                             "two fields: temperature in K and partition sum");
                 }
-                double temperature = AsciiNumbers.parseDouble(b, start[0], end[0]);
-                double value = AsciiNumbers.parseDouble(b, start[1], end[1]);
+                double temperature = DecimalParser.parse(b, start[0], end[0]);
+                double value = DecimalParser.parse(b, start[1], end[1]);
                 if (!(temperature >= 0) || Double.isInfinite(temperature)) {
-                    throw Tokens.error(fileName, lines, base, start[0], end[0], "temperature",
+                    throw LineFormatException.atField(fileName, lines, start[0], end[0], "temperature",
                             "a non-negative number in K");
                 }
                 if (!(value > 0) || Double.isInfinite(value)) {
-                    throw Tokens.error(fileName, lines, base, start[1], end[1], "Q", "a positive number");
+                    throw LineFormatException.atField(fileName, lines, start[1], end[1], "Q", "a positive number");
                 }
                 if (n > 0 && temperature <= t[n - 1]) {
-                    throw Tokens.error(fileName, lines, base, start[0], end[0], "temperature",
+                    throw LineFormatException.atField(fileName, lines, start[0], end[0], "temperature",
                             "a temperature above the previous row's " + t[n - 1] + " K");
                 }
                 if (n == t.length) {
