@@ -10,6 +10,7 @@ import java.util.Map;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.partition.PartitionTable;
 import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.IsotopologueLookup;
@@ -149,11 +150,12 @@ public final class ExomolReader implements LineReader, DuplicateCounter {
             try (InputStream in = opener.open(files.partitionFunction())) {
                 pf = PartitionTable.read(in, pfName);
             }
-            q296 = pf.valueAt(LineBatch.REFERENCE_TEMPERATURE_K);
-            if (Double.isNaN(q296)) {
+            if (!(pf.minTemperatureK() <= LineBatch.REFERENCE_TEMPERATURE_K
+                    && LineBatch.REFERENCE_TEMPERATURE_K <= pf.maxTemperatureK())) {
                 throw LineFormatException.ofFile(pfName, "partition function does not cover 296 K (table spans "
                         + pf.minTemperatureK() + "-" + pf.maxTemperatureK() + " K)", null);
             }
+            q296 = pf.value(LineBatch.REFERENCE_TEMPERATURE_K);
         } else {
             q296 = lookup.partitionSum(id.moleculeId(), id.isotopologue(), LineBatch.REFERENCE_TEMPERATURE_K);
             if (!(q296 > 0)) {
