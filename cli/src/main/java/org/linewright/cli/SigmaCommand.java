@@ -207,7 +207,7 @@ public final class SigmaCommand implements Callable<Integer> {
         w.printf(Locale.ROOT, "sum of S(T) used: %.6e cm/molecule; wing loss beyond the cutoff: %.3e%n",
                 r.sumIntensityCmPerMolecule(), r.wingLossFraction());
         for (String line : r.widthSources().report()) {
-            w.println("widths " + line);
+            w.println("width sources, " + line);
         }
         for (String warning : r.warnings()) {
             w.println("warning: " + warning);

@@ -302,8 +302,9 @@ public final class CrossSectionCalculator {
         final Sum droppedIntensity = new Sum();
         final Sum usedIntensity = new Sum();
         final Sum lostIntensity = new Sum();
-        /** Smallest αD / local grid spacing of the lines centred on the grid, and that line's αD and spacing. */
+        /** Smallest HWHM / local grid spacing of the lines centred on the grid, and that line's widths and spacing. */
         double worstResolution = Double.POSITIVE_INFINITY;
+        double worstHwhmCm1 = Double.NaN;
         double worstDopplerCm1 = Double.NaN;
         double worstSpacingCm1 = Double.NaN;
 
@@ -407,11 +408,15 @@ public final class CrossSectionCalculator {
                 usedIntensity.add(sT);
                 WingKernel k = chiLine ? kernel : kernelNoChi;
                 lostIntensity.add(sT * k.lostFraction(effectiveShape(aD, gL), aD, gL));
-                if (shape != LineShapeKind.LORENTZ && nu >= gridFirstCm1 && nu <= gridLastCm1) {
+                if (nu >= gridFirstCm1 && nu <= gridLastCm1) {
+                    // resolution is judged on the line's full half width (Voigt: Olivero–Longbothum), which is αD
+                    // at low pressure: a pressure-broadened line is resolved even when αD is below the step
+                    double hwhm = effectiveShape(aD, gL).hwhmCm1(aD, gL);
                     double spacing = uniform ? spacingParameter : nu / spacingParameter;
-                    double ratio = aD / spacing;
+                    double ratio = hwhm / spacing;
                     if (ratio < worstResolution) {
                         worstResolution = ratio;
+                        worstHwhmCm1 = hwhm;
                         worstDopplerCm1 = aD;
                         worstSpacingCm1 = spacing;
                     }
@@ -441,14 +446,18 @@ public final class CrossSectionCalculator {
                         + " cm-1 (sigma is zero everywhere)");
             }
             if (worstResolution < 1.0) {
-                warnings.add(String.format(Locale.ROOT, "grid spacing %.6g cm-1 is coarser than the narrowest Doppler "
-                        + "HWHM %.6g cm-1 of the lines on the grid: those lines are under-resolved (use a step of "
-                        + "at most %.3g cm-1)", worstSpacingCm1, worstDopplerCm1, worstDopplerCm1));
+                warnings.add(String.format(Locale.ROOT, "grid spacing %.6g cm-1 is coarser than the narrowest line "
+                        + "half width %.6g cm-1 (Doppler HWHM %.6g cm-1) of the lines on the grid: those lines are "
+                        + "under-resolved (use a step of at most %.3g cm-1)", worstSpacingCm1, worstHwhmCm1,
+                        worstDopplerCm1, worstHwhmCm1));
             }
             if (linesWithoutWidth > 0) {
                 warnings.add(linesWithoutWidth + " lines have zero Doppler and Lorentz width and were left out");
             }
-            warnings.addAll(tally.warnings());
+            for (String w : tally.warnings()) {
+                // the tally words its lines for printing; the result's warnings carry no prefix
+                warnings.add(w.startsWith("warning: ") ? w.substring("warning: ".length()) : w);
+            }
             Map<String, String> m = new LinkedHashMap<>();
             m.put("tool_version", ToolVersion.get());
             m.put("engine", engine.id());

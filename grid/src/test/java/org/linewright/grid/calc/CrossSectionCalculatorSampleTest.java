@@ -100,6 +100,8 @@ class CrossSectionCalculatorSampleTest {
         assertEquals(0.0, r.droppedIntensityFraction());
         assertEquals("exact", r.metadata().get("engine"));
         assertEquals("296.0", r.metadata().get("temperature_k"));
+        // 0.01 cm-1 resolves lines of half width ≈ 0.05 cm-1: no resolution warning
+        assertTrue(r.warnings().stream().noneMatch(w -> w.contains("coarser")), r.warnings().toString());
     }
 
     @Test
@@ -127,8 +129,8 @@ class CrossSectionCalculatorSampleTest {
         assertEquals(belowCount, r.linesBelowThreshold());
         assertEquals(recs.length - belowCount, r.linesUsed());
         assertEquals(below / total, r.droppedIntensityFraction(), 1e-12);
-        // a 0.5 cm-1 step cannot resolve Doppler widths of ~0.003 cm-1: warned
-        assertTrue(r.warnings().stream().anyMatch(w -> w.contains("coarser than the narrowest Doppler")),
+        // a 0.5 cm-1 step cannot resolve lines of half width ~0.05 cm-1 (1 atm of air): warned
+        assertTrue(r.warnings().stream().anyMatch(w -> w.contains("coarser than the narrowest line half width")),
                 r.warnings().toString());
     }
 
