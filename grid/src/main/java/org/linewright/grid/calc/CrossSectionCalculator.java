@@ -332,8 +332,8 @@ public final class CrossSectionCalculator {
             // the query range is closed; [low, high) is enforced per line
             this.queryMaxCm1 = Math.min(highCm1, gridLastCm1 + reach);
             this.isotopologues = new IsotopologueCache(lookup, request.temperatureK());
-            this.resolver = shape == LineShapeKind.DOPPLER ? null : request.widths().newResolver(composition);
-            this.widths = resolver == null ? null : resolver.newResult(CHUNK_LINES);
+            this.resolver = request.widths().newResolver(composition);
+            this.widths = resolver.newResult(CHUNK_LINES);
         }
 
         /** Physics for the batch just read; writes the lines that reach σ into {@code s}; returns their count. */
@@ -364,13 +364,13 @@ public final class CrossSectionCalculator {
             } else {
                 DopplerWidth.hwhmCm1(b, isotopologues, doppler);
             }
-            if (resolver == null) {
+            resolver.resolve(b, widths);
+            PressureBroadening.shiftCm1(widths, pressureAtm, shift);
+            if (shape == LineShapeKind.DOPPLER) {
+                // Doppler only: no pressure broadening, but the pressure shift still moves the centre
                 Arrays.fill(lorentz, 0, n, 0.0);
-                Arrays.fill(shift, 0, n, 0.0);
             } else {
-                resolver.resolve(b, widths);
                 PressureBroadening.lorentzHwhmCm1(widths, pressureAtm, request.temperatureK(), lorentz);
-                PressureBroadening.shiftCm1(widths, pressureAtm, shift);
             }
             int m = 0;
             for (int i = 0; i < n; i++) {
@@ -435,7 +435,7 @@ public final class CrossSectionCalculator {
         }
 
         CrossSectionResult result(double[] sigma, CrossSectionEngine engine, double seconds) {
-            WidthSourceTally tally = resolver == null ? new WidthSourceTally() : resolver.tally();
+            WidthSourceTally tally = resolver.tally();
             double total = totalIntensity.value();
             double droppedFraction = total > 0 ? droppedIntensity.value() / total : 0.0;
             double used = usedIntensity.value();

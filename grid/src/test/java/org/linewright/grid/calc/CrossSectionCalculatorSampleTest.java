@@ -189,4 +189,85 @@ class CrossSectionCalculatorSampleTest {
             }
         }
     }
+
+    /** {ν, S, γ_air, δ_air, molecule, isotopologue} of every record (160-character columns 1–2, 3, 4–15, 16–25, 36–40, 60–67). */
+    private static double[][] fullRecords(Path sample) throws IOException {
+        return Files.readAllLines(sample, StandardCharsets.US_ASCII).stream()
+                .filter(l -> l.length() >= 160)
+                .map(l -> new double[] {Double.parseDouble(l.substring(3, 15).trim()),
+                    Double.parseDouble(l.substring(15, 25).trim()), Double.parseDouble(l.substring(35, 40).trim()),
+                    Double.parseDouble(l.substring(59, 67).trim()), Double.parseDouble(l.substring(0, 2).trim()),
+                    Double.parseDouble(l.substring(2, 3).trim())})
+                .toArray(double[][]::new);
+    }
+
+    /** The strongest record of the sample with 2000 ≤ ν < 2200. */
+    private static double[] strongestNear2100(double[][] recs) {
+        double[] best = null;
+        for (double[] r : recs) {
+            if (r[0] >= 2000 && r[0] < 2200 && (best == null || r[1] > best[1])) {
+                best = r;
+            }
+        }
+        return best;
+    }
+
+    @Test
+    void lorentzShapeMatchesAnIndependentSumOverTheRecords() throws IOException {
+        double[][] recs = fullRecords(coSample);
+        double[] line = strongestNear2100(recs);
+        double p = 0.8;
+        double centre = line[0] + line[3] * p;
+        // 41 points centred on the strongest line's shifted centre
+        WavenumberGrid grid = WavenumberGrid.uniform(centre - 0.2, centre + 0.2, 0.01);
+        CrossSectionRequest req = new CrossSectionRequest(296.0, p, Composition.air(), grid, WingTreatment.defaults(),
+                LineShapeKind.LORENTZ, 0.0, LineSelection.ALL, WidthOptions.DEFAULTS);
+        CrossSectionResult r;
+        try (ExactEngine engine = new ExactEngine(2, WingTreatment.defaults())) {
+            r = new CrossSectionCalculator(List.of(coStore), MoleculeRegistry.builtIn())
+                    .compute(req, engine, ProgressListener.NONE);
+        }
+        // σ(ν) = Σ S·γ/(π((ν − ν0)² + γ²)) over records with |ν − ν0| ≤ 25, γ = p·γ_air (T = 296 K),
+        // ν0 = ν + p·δ_air: the Lorentz profile and the line-list conventions of the 160-character format
+        // (Rothman et al. 1998, JQSRT 60, 665, appendix), summed here in long-double-free plain Java
+        double[] points = grid.pointsCm1();
+        for (int j = 0; j < points.length; j++) {
+            double expected = 0;
+            for (double[] rec : recs) {
+                double nu0 = rec[0] + rec[3] * p;
+                double d = points[j] - nu0;
+                double gamma = rec[2] * p;
+                if (Math.abs(d) <= 25) {
+                    expected += rec[1] * gamma / (Math.PI * (d * d + gamma * gamma));
+                }
+            }
+            assertEquals(expected, r.sigmaCm2PerMolecule()[j], 1e-11 * expected, "point " + points[j]);
+        }
+    }
+
+    @Test
+    void dopplerShapePeakHasTheHandbookDopplerWidth() throws IOException {
+        double[][] recs = fullRecords(coSample);
+        double[] line = strongestNear2100(recs);
+        assertEquals(1.0, line[5], "the strongest CO line is of 12C16O");
+        double p = 1.0;
+        double t = 296.0;
+        double centre = line[0] + line[3] * p;
+        WavenumberGrid grid = WavenumberGrid.uniform(centre - 0.01, centre + 0.01, 0.0005);
+        CrossSectionRequest req = new CrossSectionRequest(t, p, Composition.air(), grid, WingTreatment.defaults(),
+                LineShapeKind.DOPPLER, 0.0, LineSelection.ALL, WidthOptions.DEFAULTS);
+        CrossSectionResult r;
+        try (ExactEngine engine = new ExactEngine(1, WingTreatment.defaults())) {
+            r = new CrossSectionCalculator(List.of(coStore), MoleculeRegistry.builtIn())
+                    .compute(req, engine, ProgressListener.NONE);
+        }
+        // αD = 3.581e-7·ν·sqrt(T/M) (handbook form of the Doppler HWHM, common practice), M(12C16O) = 27.9949 g/mol
+        // (from memory); Gaussian peak S·sqrt(ln2/π)/αD. The handbook constant has 4 digits: 1e-3 tolerance.
+        double alphaD = 3.581e-7 * line[0] * Math.sqrt(t / 27.9949);
+        double peak = line[1] * Math.sqrt(Math.log(2) / Math.PI) / alphaD;
+        assertEquals(peak, r.sigmaCm2PerMolecule()[20], 1e-3 * peak);
+        // the other lines lie > 1 cm-1 away: hundreds of Doppler widths, nothing of them reaches these points
+        assertEquals(0.0, r.sigmaCm2PerMolecule()[0] - line[1] * Math.sqrt(Math.log(2) / Math.PI) / alphaD
+                * Math.exp(-Math.log(2) * Math.pow(0.01 / alphaD, 2)), 1e-3 * peak);
+    }
 }
