@@ -62,9 +62,9 @@ import org.linewright.ingest.store.LineStore;
  * Kept lines fill a reused {@link LineChunk} passed to {@link CrossSectionEngine#accumulate}. Lines reach σ only
  * within their cutoff of the shifted centre (the engines apply the {@link WingKernel}).
  *
- * <p>Not thread-safe (one computation at a time per calculator is the expected use; the stores may be shared).
- * All arithmetic on accumulated statistics is compensated (Neumaier), and the order of lines is fixed by the
- * stores, so results do not depend on timing.
+ * <p>Concurrent {@code compute} calls are safe when the lookup is (each call opens its own cursors and scratch
+ * arrays); an engine serves one computation at a time. Statistics are accumulated with compensated (Neumaier)
+ * sums, and the order of lines is fixed by the stores, so results do not depend on timing.
  */
 public final class CrossSectionCalculator {
     /** Lines per batch read from a store and per chunk handed to the engine. */
