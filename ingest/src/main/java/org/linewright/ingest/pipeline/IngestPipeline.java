@@ -92,7 +92,7 @@ public final class IngestPipeline {
                 long read = opened.reader().recordsRead();
                 long rejected = opened.reader().recordsRejected();
                 long duplicates = Math.max(0, opened.duplicatesSeen());
-                String sha256 = opened.sha256Hex().get();
+                String sha256 = digests(opened);
                 SourceInfo info = writer.commit(new IngestCounts(read, read - rejected, rejected, duplicates), sha256);
                 IngestReport.Source report = new IngestReport.Source(source, name, opened.format().id(),
                         opened.compression(), sha256, read, read - rejected, rejected, duplicates,
@@ -101,6 +101,25 @@ public final class IngestPipeline {
                 return report;
             }
         }
+    }
+
+    /**
+     * The SHA-256 of a single-file source, or {@code name=sha256} pairs separated by {@code ;} for a multi-file
+     * source (a state/transition set), every file named.
+     */
+    private static String digests(OpenedSource opened) {
+        List<OpenedSource.FileDigest> files = opened.files().get();
+        if (files.size() == 1) {
+            return files.get(0).sha256Hex();
+        }
+        StringBuilder sb = new StringBuilder();
+        for (OpenedSource.FileDigest d : files) {
+            if (sb.length() > 0) {
+                sb.append(';');
+            }
+            sb.append(d.fileName()).append('=').append(d.sha256Hex());
+        }
+        return sb.toString();
     }
 
     private static OpenedSource open(Path source, IngestOptions options, ReadOptions readOptions) throws IOException {
