@@ -123,6 +123,9 @@ public final class BuildCommand implements Callable<Integer> {
             }
             out.printf(Locale.ROOT, "engine %s, estimated relative error %.3g; %.2f s%n", plan.profile().engine(),
                     report.estimatedRelativeError(), report.seconds());
+            for (String w : report.warnings()) {
+                out.println("warning: " + w);
+            }
             out.printf(Locale.ROOT, "table %s (sha256 %s)%n", report.table(), report.written().fileSha256());
             if (plot != null) {
                 out.printf(Locale.ROOT, "plot %s%n", plot);

@@ -28,7 +28,7 @@ import org.linewright.ingest.InputException;
  *
  * <p>File layout (big-endian, {@link DataOutputStream}): the magic {@code LWBLK001}, the point count n, n float64
  * σ values, lines used, lines below threshold, the error estimate, the number of named counts and each as
- * (UTF name, long).
+ * (UTF name, long), the number of warnings and each as UTF text.
  */
 public final class BlockStore {
     private static final long MAGIC = 0x4C57424C4B303031L; // "LWBLK001"
@@ -67,6 +67,10 @@ public final class BlockStore {
                     out.writeUTF(e.getKey());
                     out.writeLong(e.getValue());
                 }
+                out.writeInt(result.warnings().size());
+                for (String w : result.warnings()) {
+                    out.writeUTF(w);
+                }
             }
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
                 ch.force(true);
@@ -101,7 +105,12 @@ public final class BlockStore {
             for (int i = 0; i < n; i++) {
                 counts.put(in.readUTF(), in.readLong());
             }
-            return new BlockResult(s, used, below, counts, error);
+            int nw = in.readInt();
+            java.util.List<String> warnings = new java.util.ArrayList<>();
+            for (int i = 0; i < nw; i++) {
+                warnings.add(in.readUTF());
+            }
+            return new BlockResult(s, used, below, counts, error, warnings);
         }
     }
 

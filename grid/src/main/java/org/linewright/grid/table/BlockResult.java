@@ -11,10 +11,12 @@ import java.util.TreeMap;
  * @param linesBelowThreshold     lines skipped by the intensity threshold
  * @param counts                  further counts by name (e.g. width sources per gas: {@code width.H2.line})
  * @param estimatedRelativeError  the engine's error estimate for this block
+ * @param warnings                things the user should know (default widths, under-resolved lines ...)
  */
 public record BlockResult(double[] sigmaCm2PerMolecule, long linesUsed, long linesBelowThreshold,
-                          Map<String, Long> counts, double estimatedRelativeError) {
+                          Map<String, Long> counts, double estimatedRelativeError, java.util.List<String> warnings) {
     public BlockResult {
         counts = java.util.Collections.unmodifiableMap(new TreeMap<>(counts));
+        warnings = java.util.List.copyOf(warnings);
     }
 }

@@ -17,15 +17,17 @@ import java.util.Map;
  * @param linesUsed         lines used, summed over the cells computed or reused
  * @param counts            named counts summed over the cells (width sources per gas ...)
  * @param estimatedRelativeError the largest engine error estimate of the cells
+ * @param warnings          the calculator's warnings, each once
  * @param written           the file and σ checksums (null for a dry run)
  * @param ingested          raw line lists ingested into the cache by this build
  * @param seconds           wall time
  */
 public record BuildReport(Path table, boolean dryRun, int cells, int computed, int reused, List<String> pending,
                           long linesInStores, long linesUsed, Map<String, Long> counts,
-                          double estimatedRelativeError, TableWriter.Written written, int ingested, double seconds) {
+                          double estimatedRelativeError, List<String> warnings, TableWriter.Written written, int ingested, double seconds) {
     public BuildReport {
         pending = List.copyOf(pending);
         counts = Map.copyOf(counts);
+        warnings = List.copyOf(warnings);
     }
 }

@@ -43,8 +43,12 @@ import org.linewright.ingest.store.SourceMetadata;
  * change are recomputed; after an interruption the build resumes with the cells not yet saved.
  */
 public final class TableBuilder {
-    /** Extra reach per atm of pressure beyond the cutoff, cm⁻¹/atm: covers pressure shifts (|δ| ≲ 0.05 cm⁻¹/atm). */
-    public static final double SHIFT_MARGIN_CM1_PER_ATM = 0.05;
+    /**
+     * Extra reach per atm of pressure beyond the cutoff, cm⁻¹/atm: lines pushed into a block by their pressure
+     * shift. The same margin the cross-section calculator reads beyond its cutoff (measured shifts are below
+     * 0.1 cm⁻¹/atm, from memory), so a table cell sees the lines a single cross section of the whole grid sees.
+     */
+    public static final double SHIFT_MARGIN_CM1_PER_ATM = 1.0;
 
     private TableBuilder() {
     }
@@ -141,13 +145,14 @@ public final class TableBuilder {
             listener.planned(cells, pending.size(), pendingPoints);
             if (dryRun) {
                 return new BuildReport(plan.outputTable(), true, cells, pending.size(), cells - pending.size(),
-                        pending, linesInStores, 0, Map.of(), 0, null, loaded.ingested(),
+                        pending, linesInStores, 0, Map.of(), 0, List.of(), null, loaded.ingested(),
                         (System.nanoTime() - t0) * 1e-9);
             }
             manifest.write(work);
             long linesUsed = 0;
             double maxError = 0;
             Map<String, Long> counts = new TreeMap<>();
+            java.util.Set<String> warnings = new java.util.LinkedHashSet<>();
             double[] pressuresAtm = plan.pressuresAtm();
             for (int p = 0; p < np; p++) {
                 for (int t = 0; t < nt; t++) {
@@ -170,6 +175,7 @@ public final class TableBuilder {
                         maxError = Math.max(maxError, r.estimatedRelativeError());
                         r.counts().forEach((k, v) -> counts.merge(k, v, Long::sum));
                         counts.merge("lines_below_threshold", r.linesBelowThreshold(), Long::sum);
+                        warnings.addAll(r.warnings());
                     }
                 }
             }
@@ -187,6 +193,10 @@ public final class TableBuilder {
             counts.forEach((k, v) -> metadata.put("count." + k, Long.toString(v)));
             metadata.put("estimated_relative_error", Double.toString(maxError));
             metadata.put("build_cells", Integer.toString(cells));
+            int w = 0;
+            for (String text : warnings) {
+                metadata.put("warning." + (++w), text);
+            }
             final BlockStore store = blocks;
             int gridSize = plan.grid().size();
             SigmaSource sigma = (p, t) -> {
@@ -211,7 +221,7 @@ public final class TableBuilder {
             }
             blocks.prune(keep);
             return new BuildReport(plan.outputTable(), false, cells, pending.size(), cells - pending.size(), pending,
-                    linesInStores, linesUsed, counts, maxError, written, loaded.ingested(),
+                    linesInStores, linesUsed, counts, maxError, List.copyOf(warnings), written, loaded.ingested(),
                     (System.nanoTime() - t0) * 1e-9);
         }
     }

@@ -108,7 +108,7 @@ class IncrementalBuildTest {
         BuildReport dry = TableBuilder.build(PlanReader.read(incremental), calculator(-1), 1, true, BuildListener.NONE);
         BuildReport second = build(incremental, -1);
 
-        // Blocks whose reach (block range +- cutoff + 0.05 cm-1/atm x highest pressure) holds a changed centre
+        // Blocks whose reach (block range +- cutoff + 1 cm-1/atm x highest pressure) holds a changed centre
         double reach = CUTOFF_CM1 + TableBuilder.SHIFT_MARGIN_CM1_PER_ATM * TablePlan.barToAtm(1.0);
         int reached = 0;
         for (int b = 0; b < blocks; b++) {

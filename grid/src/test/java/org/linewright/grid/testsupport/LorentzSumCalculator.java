@@ -64,7 +64,7 @@ public final class LorentzSumCalculator implements BlockCalculator {
             }
         }
         computed++;
-        return new BlockResult(sigma, used, 0, Map.of("width.air.line", used), 0.0);
+        return new BlockResult(sigma, used, 0, Map.of("width.air.line", used), 0.0, List.of());
     }
 
     @Override
