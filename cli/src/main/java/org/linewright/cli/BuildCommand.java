@@ -42,6 +42,8 @@ import picocli.CommandLine.Spec;
 public final class BuildCommand implements Callable<Integer> {
     /** How many pending cells a dry run lists before summarising the rest. */
     private static final int DRY_RUN_LISTED = 20;
+    /** How many distinct calculator warnings the summary prints. */
+    private static final int WARNINGS_SHOWN = 3;
 
     @Spec
     private CommandSpec spec;
@@ -123,7 +125,13 @@ public final class BuildCommand implements Callable<Integer> {
             }
             out.printf(Locale.ROOT, "engine %s, estimated relative error %.3g; %.2f s%n", plan.profile().engine(),
                     report.estimatedRelativeError(), report.seconds());
+            int shownWarnings = 0;
             for (String w : report.warnings()) {
+                if (shownWarnings++ == WARNINGS_SHOWN) {
+                    out.printf(Locale.ROOT, "  ... and %d more warning(s) in the table metadata (warning.N)%n",
+                            report.warnings().size() - WARNINGS_SHOWN);
+                    break;
+                }
                 out.println("warning: " + w);
             }
             out.printf(Locale.ROOT, "table %s (sha256 %s)%n", report.table(), report.written().fileSha256());

@@ -7,16 +7,13 @@ import java.io.DataOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
-import java.nio.channels.FileChannel;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Set;
+import org.linewright.grid.table.AtomicFile;
 import org.linewright.grid.table.BlockResult;
 import org.linewright.ingest.InputException;
 
@@ -49,7 +46,7 @@ public final class BlockStore {
 
     /** Saves a block atomically. */
     public void save(String hash, BlockResult result) throws IOException {
-        Path tmp = Files.createTempFile(dir, ".partial-", SUFFIX);
+        Path tmp = AtomicFile.temporaryFor(file(hash));
         try {
             try (OutputStream os = Files.newOutputStream(tmp);
                  DataOutputStream out = new DataOutputStream(new BufferedOutputStream(os, 1 << 16))) {
@@ -72,14 +69,7 @@ public final class BlockStore {
                     out.writeUTF(w);
                 }
             }
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
-                ch.force(true);
-            }
-            try {
-                Files.move(tmp, file(hash), StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, file(hash), StandardCopyOption.REPLACE_EXISTING);
-            }
+            AtomicFile.commit(tmp, file(hash));
         } finally {
             Files.deleteIfExists(tmp);
         }
@@ -121,7 +111,7 @@ public final class BlockStore {
             for (Path f : files) {
                 String name = f.getFileName().toString();
                 String hash = name.endsWith(SUFFIX) ? name.substring(0, name.length() - SUFFIX.length()) : null;
-                if (name.startsWith(".partial-") || hash != null && !keep.contains(hash)) {
+                if (name.startsWith(AtomicFile.PARTIAL) || hash != null && !keep.contains(hash)) {
                     Files.deleteIfExists(f);
                     removed++;
                 }

@@ -3,14 +3,13 @@ package org.linewright.grid.manifest;
 import java.io.IOException;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Properties;
 import java.util.TreeMap;
+import org.linewright.grid.table.AtomicFile;
 import org.linewright.ingest.InputException;
 
 /**
@@ -75,7 +74,7 @@ public final class BuildManifest {
     /** Writes the manifest atomically into {@code workDir}. */
     public void write(Path workDir) throws IOException {
         Files.createDirectories(workDir);
-        Path tmp = Files.createTempFile(workDir, ".partial-manifest-", ".properties");
+        Path tmp = AtomicFile.temporaryFor(workDir.resolve(FILE_NAME));
         try {
             try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
                 w.write("# linewright table build manifest: cell.P.T.B = input hash of (pressure P, temperature T, block B),\n");
@@ -84,12 +83,7 @@ public final class BuildManifest {
                     w.write(escape(e.getKey()) + "=" + escape(e.getValue()) + "\n");
                 }
             }
-            try {
-                Files.move(tmp, workDir.resolve(FILE_NAME), StandardCopyOption.ATOMIC_MOVE,
-                        StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, workDir.resolve(FILE_NAME), StandardCopyOption.REPLACE_EXISTING);
-            }
+            AtomicFile.commit(tmp, workDir.resolve(FILE_NAME));
         } finally {
             Files.deleteIfExists(tmp);
         }

@@ -6,13 +6,9 @@ import io.jhdf.api.WritableDataset;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.channels.Channels;
-import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -77,26 +73,24 @@ public final class TableWriter {
         metadata.put("sigma_precision", content.precision().id());
         metadata.putAll(content.metadata());
         metadata.put(KEY_SIGMA_SHA256, sigmaSha256);
-        Path tmp = Files.createTempFile(dir, "." + file.getFileName() + ".partial-", "");
+        Path tmp = AtomicFile.temporaryFor(file);
         try {
             if (format == TableFormat.ARROW) {
                 writeArrow(tmp, content, metadata);
             } else {
+                Files.delete(tmp); // jHDF creates its file itself
                 writeHdf5(tmp, content, metadata);
             }
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
-                ch.force(true);
-            }
-            move(tmp, file);
+            AtomicFile.commit(tmp, file);
         } finally {
             Files.deleteIfExists(tmp);
         }
         String fileSha256 = SourceMetadata.sha256(file);
         Path sidecar = sidecar(file);
-        Path tmpSidecar = Files.createTempFile(dir, "." + sidecar.getFileName() + ".partial-", "");
+        Path tmpSidecar = AtomicFile.temporaryFor(sidecar);
         try {
             Files.writeString(tmpSidecar, fileSha256 + "  " + file.getFileName() + "\n", StandardCharsets.UTF_8);
-            move(tmpSidecar, sidecar);
+            AtomicFile.commit(tmpSidecar, sidecar);
         } finally {
             Files.deleteIfExists(tmpSidecar);
         }
@@ -112,14 +106,6 @@ public final class TableWriter {
         if (s.length != content.wavenumberCm1().length) {
             throw new IllegalArgumentException("σ row of " + s.length + " values for a grid of "
                     + content.wavenumberCm1().length);
-        }
-    }
-
-    private static void move(Path from, Path to) throws IOException {
-        try {
-            Files.move(from, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-        } catch (AtomicMoveNotSupportedException e) {
-            Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
         }
     }
 
