@@ -24,7 +24,7 @@ class DemoTest {
     void demoWritesReportsAndStickPlot(@TempDir Path out) throws IOException {
         Assumptions.assumeTrue(Files.isRegularFile(SHIPPED.resolve("plan.toml")), "shipped demo folder not found");
         DemoReport report = new Demo(SHIPPED, out, Demo.availableSteps(), true).run(Demo.StepListener.NONE);
-        assertEquals(3, report.steps().size());
+        assertEquals(4, report.steps().size());
         String text = Files.readString(out.resolve("report.txt"));
         String html = Files.readString(out.resolve("report.html"));
         assertTrue(text.contains("INVENTED"), text);
@@ -32,10 +32,21 @@ class DemoTest {
         // the plan's parameters are reported (values written in demo/plan.toml)
         assertTrue(text.contains("grid.temperatures_K") && text.contains("[500.0, 800.0, 1100.0]"), text);
         // 804 CO lines (2 isotopologues x 2 bands x (101 R + 100 P)) and 161 CO2 lines (81 R + 80 P)
-        assertTrue(text.contains("12C16O: 402 lines") && text.contains("12C16O2: 161 lines"), text);
+        // 804 + 161 = 965 lines in the store
+        assertTrue(text.contains("965 lines"), text);
         assertTrue(Files.isRegularFile(out.resolve("data/synthetic-co.par.bz2")));
         var image = ImageIO.read(out.resolve(StickSpectrumStep.PLOT_FILE).toFile());
         assertEquals(1200, image.getWidth());
+        // the table step: the table named in demo/plan.toml, with the plan's axes, its checksum and its plot
+        var table = org.linewright.grid.table.CrossSectionTable.open(out.resolve("tables/synthetic-subneptune.arrow"));
+        assertEquals(java.util.List.of(1e-3, 1e-1, 10.0),
+                java.util.Arrays.stream(table.pressureBar()).boxed().toList());
+        assertEquals(java.util.List.of(500.0, 800.0, 1100.0),
+                java.util.Arrays.stream(table.temperatureK()).boxed().toList());
+        assertEquals(table.metadata().get("sigma_sha256"), table.sigmaSha256());
+        assertTrue(Files.isRegularFile(out.resolve("tables/synthetic-subneptune.arrow.sha256")));
+        assertTrue(ImageIO.read(out.resolve(TableStep.PLOT).toFile()).getWidth() > 0);
+        assertTrue(html.contains("plots/cross-sections.png"), html);
     }
 
     @Test
