@@ -1,13 +1,17 @@
 package org.linewright.cli;
 
+import java.util.ArrayList;
+import java.util.List;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.sources.UserConstants;
-import org.linewright.broadening.sources.WidthResolver;
+import org.linewright.broadening.sources.WidthOptions;
+import org.linewright.broadening.sources.WidthSource;
+import org.linewright.ingest.InputException;
 import picocli.CommandLine.Option;
 
 /**
  * The background gas and how line widths are found for it: a picocli mixin shared by the commands that
- * broaden lines.
+ * broaden lines ({@code lines}, {@code sigma}).
  */
 public final class BackgroundOptions {
     @Option(names = "--background", paramLabel = "GAS=X,...",
@@ -17,8 +21,7 @@ public final class BackgroundOptions {
 
     @Option(names = "--width-sources", paramLabel = "ORDER",
             description = "Order in which width sources are tried for each line and gas, comma-separated from: "
-                    + "line, rule, table, user, air-proxy, default (default: ${DEFAULT-VALUE}).",
-            defaultValue = "line,rule,table,user,air-proxy,default")
+                    + "line, rule, table, user, air-proxy, default (default: line,rule,table,user,air-proxy,default).")
     String order;
 
     @Option(names = "--no-default-widths",
@@ -35,19 +38,36 @@ public final class BackgroundOptions {
         return background == null ? null : Composition.parse(background);
     }
 
-    /** A width-resolver builder for the background, or null when no background was given. */
-    public WidthResolver.Builder resolverOrNull() {
-        Composition composition = compositionOrNull();
-        if (composition == null) {
-            return null;
+    /** The composition; a one-line error naming the option when it was not given. */
+    public Composition requiredComposition() {
+        Composition c = compositionOrNull();
+        if (c == null) {
+            throw new InputException("--background is required (e.g. --background air=1 or H2=0.85,He=0.15)");
         }
-        WidthResolver.Builder b = WidthResolver.builder(composition).order(order);
+        return c;
+    }
+
+    /** How widths are found: source order, defaults allowed or not, user constants. */
+    public WidthOptions widthOptions() {
+        WidthOptions w = WidthOptions.DEFAULTS;
+        if (order != null) {
+            List<WidthSource> sources = new ArrayList<>();
+            for (String label : order.split(",")) {
+                WidthSource source = WidthSource.byLabel(label.strip());
+                if (source == null) {
+                    throw new InputException("--width-sources: '" + label.strip()
+                            + "' (expected line, rule, table, user, air-proxy or default)");
+                }
+                sources.add(source);
+            }
+            w = w.withOrder(sources);
+        }
         if (forbidDefaults) {
-            b.forbidDefaults();
+            w = w.withDefaultsForbidden();
         }
         if (constants != null) {
-            b.userConstants(UserConstants.parse(constants));
+            w = w.withUserConstants(UserConstants.parse(constants));
         }
-        return b;
+        return w;
     }
 }

@@ -97,7 +97,7 @@ public final class LinesCommand implements Callable<Integer> {
         int moleculeId = molecule == null ? 0 : registry.molecule(molecule).id();
         double temperatureK = temperature == null ? Double.NaN : QuantityParser.parseTemperature(temperature).kelvin();
         LineListingRequest request = new LineListingRequest(low, high, moleculeId, isotopologue, strongest,
-                temperatureK, backgroundOptions.resolverOrNull());
+                temperatureK, backgroundOptions.compositionOrNull(), backgroundOptions.widthOptions());
         LineListing.Summary summary = LineListing.write(LineStore.open(store), request, registry,
                 ListingFormat.byName(format), out, spec.commandLine().getOut());
         if (!root.globalOptions().quiet()) {

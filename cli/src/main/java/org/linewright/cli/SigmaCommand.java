@@ -20,7 +20,7 @@ import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.calc.CrossSectionRequest;
 import org.linewright.grid.calc.CrossSectionResult;
 import org.linewright.grid.calc.LineSelection;
-import org.linewright.grid.calc.WidthOptions;
+import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.EngineFactory;
 import org.linewright.grid.output.CrossSectionFiles;
@@ -80,10 +80,8 @@ public final class SigmaCommand implements Callable<Integer> {
             description = "Total pressure: Pa, hPa, kPa, mbar, bar, atm or Torr; a bare number is bar.")
     private Pressure pressure;
 
-    @Option(names = "--background", required = true, paramLabel = "GAS=X,...",
-            description = "Background gas mole fractions summing to 1, e.g. air=1 or H2=0.85,He=0.15 "
-                    + "(gases: air, H2, He, CO2, N2, O2, H2O, self).")
-    private String background;
+    @Mixin
+    private BackgroundOptions backgroundOptions;
 
     @Option(names = "--between", arity = "2", required = true, paramLabel = "LOW HIGH",
             description = "Spectral range of the grid (in --unit; bare numbers are cm-1 by default).")
@@ -131,10 +129,6 @@ public final class SigmaCommand implements Callable<Integer> {
     @Option(names = "--isotopologue", paramLabel = "N", description = "Only this isotopologue of --molecule (local number).")
     private Integer isotopologue;
 
-    @Option(names = "--no-default-widths",
-            description = "Fail when a line has no width for a background gas from the line list, rules, tables "
-                    + "or user constants, instead of using the last-resort defaults.")
-    private boolean noDefaultWidths;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: the number of processors).")
     private Integer threads;
@@ -156,7 +150,7 @@ public final class SigmaCommand implements Callable<Integer> {
         boolean quiet = root.globalOptions().quiet();
         CrossSectionFormat fileFormat = format == null ? CrossSectionFormat.fromExtension(out)
                 : CrossSectionFormat.parse(format);
-        Composition composition = Composition.parse(background);
+        Composition composition = backgroundOptions.requiredComposition();
         LineShapeKind lineShape = parseShape(shape);
         if (!(cutoffCm1 > 0)) {
             throw new InputException("--cutoff: " + cutoffCm1 + " (expected a positive distance in cm-1)");
@@ -173,7 +167,7 @@ public final class SigmaCommand implements Callable<Integer> {
             opened.add(LineStore.open(dir));
         }
         WingTreatment wings = WingTreatment.defaults().withCutoff(WingCutoff.fixed(cutoffCm1));
-        WidthOptions widths = noDefaultWidths ? WidthOptions.DEFAULTS.withDefaultsForbidden() : WidthOptions.DEFAULTS;
+        WidthOptions widths = backgroundOptions.widthOptions();
         CrossSectionRequest request = new CrossSectionRequest(temperature.kelvin(), pressure.atm(), composition, grid,
                 wings, lineShape, threshold, selection, widths);
         CrossSectionResult result;

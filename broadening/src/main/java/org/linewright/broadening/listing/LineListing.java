@@ -356,7 +356,7 @@ public final class LineListing {
         Computed(LineListingRequest request, IsotopologueLookup lookup) {
             this.request = request;
             this.cache = Double.isNaN(request.temperatureK()) ? null : new IsotopologueCache(lookup, request.temperatureK());
-            this.resolver = request.widthsOrNull() == null ? null : request.widthsOrNull().build();
+            this.resolver = request.backgroundOrNull() == null ? null : request.widths().newResolver(request.backgroundOrNull());
             this.widths = resolver == null ? null : resolver.newResult(BATCH);
             this.gases = resolver == null ? new BackgroundGas[0] : resolver.composition().presentGases();
         }

@@ -1,6 +1,7 @@
 package org.linewright.broadening.listing;
 
-import org.linewright.broadening.sources.WidthResolver;
+import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.sources.WidthOptions;
 
 /**
  * Which lines {@link LineListing} lists and what it adds to them.
@@ -12,12 +13,13 @@ import org.linewright.broadening.sources.WidthResolver;
  * @param strongest list only the N strongest lines (by S(T) when a temperature is given, else by S(296 K)),
  *                  still in wavenumber order; 0 lists every selected line
  * @param temperatureK adds the intensity at this temperature; NaN for none
- * @param widthsOrNull adds the widths every line gets in this background (a resolver builder carrying the
- *                     composition, source order and constants); null for none
+ * @param backgroundOrNull adds the widths every line gets in this background; null for none
+ * @param widths how the widths are found (source order, constants, rules)
  */
 public record LineListingRequest(double lowCm1, double highCm1, int moleculeId, int isotopologue, int strongest,
-                                 double temperatureK, WidthResolver.Builder widthsOrNull) {
+                                 double temperatureK, Composition backgroundOrNull, WidthOptions widths) {
     public LineListingRequest {
+        widths = widths == null ? WidthOptions.DEFAULTS : widths;
         if (!(lowCm1 <= highCm1)) {
             throw new org.linewright.ingest.InputException("wavenumber range: " + lowCm1 + " to " + highCm1
                     + " cm-1 (expected low <= high)");
@@ -32,6 +34,7 @@ public record LineListingRequest(double lowCm1, double highCm1, int moleculeId, 
 
     /** Every line of the store, nothing added. */
     public static LineListingRequest all() {
-        return new LineListingRequest(Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, 0, 0, 0, Double.NaN, null);
+        return new LineListingRequest(Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, 0, 0, 0, Double.NaN, null,
+                WidthOptions.DEFAULTS);
     }
 }

@@ -94,7 +94,7 @@ class LineListingTest {
         // PH3 J=1-0 at 266.9445 GHz (1.123 mm; common practice) = 8.9043 cm-1; molecule 28.
         double cm1 = 266.9445e9 / 2.99792458e10;
         StringWriter out = new StringWriter();
-        LineListingRequest r = new LineListingRequest(cm1 - 0.01, cm1 + 0.01, 28, 0, 0, Double.NaN, null);
+        LineListingRequest r = new LineListingRequest(cm1 - 0.01, cm1 + 0.01, 28, 0, 0, Double.NaN, null, null);
         LineListing.Summary s = LineListing.write(store, r, REGISTRY, ListingFormat.CSV, null, out);
         assertTrue(s.linesListed() >= 1, "no PH3 line near " + cm1);
         boolean found = false;
@@ -118,7 +118,7 @@ class LineListingTest {
         all.sort((a, b) -> Double.compare(b, a));
         StringWriter out = new StringWriter();
         LineListing.write(store, new LineListingRequest(Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, 5, 0, 10,
-                Double.NaN, null), REGISTRY, ListingFormat.CSV, null, out);
+                Double.NaN, null, null), REGISTRY, ListingFormat.CSV, null, out);
         String[] rows = out.toString().split("\n");
         assertEquals(11, rows.length);
         List<Double> listed = new ArrayList<>();

@@ -49,7 +49,11 @@ public final class IngestStep implements DemoStep {
         }
         LineStore store = LineStore.open(storeDir);
         for (Isotopologue iso : storedIsotopologues(store, registry)) {
-            addLineSet(context, store, iso);
+            DemoContext.LineSet set = lineSet(store, iso);
+            context.addLineSet(set);
+            double[] nu = set.wavenumberCm1();
+            details.add(String.format(Locale.ROOT, "%s: %d lines, %.2f-%.2f cm-1", set.label(), nu.length, nu[0],
+                    nu[nu.length - 1]));
         }
         details.add(String.format(Locale.ROOT, "store %s: %d lines", STORE_DIR, store.totalLines()));
         return new StepOutcome(details, List.of(storeDir));
@@ -73,7 +77,7 @@ public final class IngestStep implements DemoStep {
         return found;
     }
 
-    private static void addLineSet(DemoContext context, LineStore store, Isotopologue iso) throws IOException {
+    private static DemoContext.LineSet lineSet(LineStore store, Isotopologue iso) throws IOException {
         List<double[]> chunks = new ArrayList<>();
         int total = 0;
         LineBatch batch = new LineBatch(4096);
@@ -99,6 +103,6 @@ public final class IngestStep implements DemoStep {
                 s[k] = pairs[i + 1];
             }
         }
-        context.addLineSet(new DemoContext.LineSet(iso.isotopeFormula().replace("-", ""), nu, s));
+        return new DemoContext.LineSet(iso.isotopeFormula().replace("-", ""), nu, s);
     }
 }

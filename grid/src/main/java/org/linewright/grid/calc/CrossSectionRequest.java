@@ -1,5 +1,6 @@
 package org.linewright.grid.calc;
 
+import org.linewright.broadening.sources.WidthOptions;
 import java.util.Objects;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.voigt.LineShapeKind;

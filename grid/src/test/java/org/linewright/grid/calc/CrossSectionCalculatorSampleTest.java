@@ -1,5 +1,6 @@
 package org.linewright.grid.calc;
 
+import org.linewright.broadening.sources.WidthOptions;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 

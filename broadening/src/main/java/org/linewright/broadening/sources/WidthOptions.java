@@ -1,13 +1,10 @@
-package org.linewright.grid.calc;
+package org.linewright.broadening.sources;
 
 import java.util.List;
 import java.util.Map;
 import org.linewright.broadening.background.BackgroundGas;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.rules.RuleSet;
-import org.linewright.broadening.sources.GasParameters;
-import org.linewright.broadening.sources.WidthResolver;
-import org.linewright.broadening.sources.WidthSource;
 import org.linewright.ingest.exomol.BroadeningTable;
 
 /**
