@@ -14,7 +14,7 @@ import org.linewright.grid.calc.CrossSectionRequest;
 import org.linewright.grid.calc.CrossSectionResult;
 import org.linewright.grid.calc.LineSelection;
 import org.linewright.grid.calc.ProgressListener;
-import org.linewright.grid.calc.WidthOptions;
+import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.EngineFactory;
 import org.linewright.grid.plan.TablePlan;
