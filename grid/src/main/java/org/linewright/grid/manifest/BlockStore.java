@@ -20,15 +20,16 @@ import org.linewright.ingest.InputException;
 /**
  * The computed blocks of a table build, one file per block in {@code WORK/blocks/}, named by the block's input
  * hash ({@code <hash>.blk}): a block whose inputs did not change is found again under the same name, whatever
- * else changed. A file is written under a temporary name, forced to disk and renamed, so a file under its final
- * name is always complete (an interrupted build resumes from the blocks it finished).
+ * else changed. A file is written under a temporary name and renamed, so a file under its final name is complete
+ * when the build process stops (an interrupted build resumes from the blocks it finished); block files are not
+ * forced to disk one by one, so after an operating-system crash a damaged block is reported when loaded.
  *
- * <p>File layout (big-endian, {@link DataOutputStream}): the magic {@code LWBLK001}, the point count n, n float64
- * σ values, lines used, lines below threshold, the error estimate, the number of named counts and each as
- * (UTF name, long), the number of warnings and each as UTF text.
+ * <p>File layout (big-endian, {@link DataOutputStream}): the magic {@code LWBLK002}, the point count n, lines used,
+ * lines below threshold, the error estimate, the number of named counts and each as (UTF name, long), the number
+ * of warnings and each as UTF text, then n float64 σ values (so the counts can be read without σ).
  */
 public final class BlockStore {
-    private static final long MAGIC = 0x4C57424C4B303031L; // "LWBLK001"
+    private static final long MAGIC = 0x4C57424C4B303032L; // "LWBLK002"
     private static final String SUFFIX = ".blk";
 
     private final Path dir;
@@ -53,9 +54,6 @@ public final class BlockStore {
                 out.writeLong(MAGIC);
                 double[] s = result.sigmaCm2PerMolecule();
                 out.writeInt(s.length);
-                for (double v : s) {
-                    out.writeDouble(v);
-                }
                 out.writeLong(result.linesUsed());
                 out.writeLong(result.linesBelowThreshold());
                 out.writeDouble(result.estimatedRelativeError());
@@ -68,8 +66,13 @@ public final class BlockStore {
                 for (String w : result.warnings()) {
                     out.writeUTF(w);
                 }
+                java.nio.ByteBuffer bytes = java.nio.ByteBuffer.allocate(8 * s.length); // big-endian, as DataOutput
+                bytes.asDoubleBuffer().put(s);
+                out.write(bytes.array());
             }
-            AtomicFile.commit(tmp, file(hash));
+            // No fsync per block (it would cost more than computing a small block): a stopped build keeps every
+            // renamed block; after an operating-system crash a damaged block is reported by load().
+            AtomicFile.commitWithoutSync(tmp, file(hash));
         } finally {
             Files.deleteIfExists(tmp);
         }
@@ -77,16 +80,22 @@ public final class BlockStore {
 
     /** Loads a block. */
     public BlockResult load(String hash) throws IOException {
+        return read(hash, true);
+    }
+
+    /** Loads a block's counts without its σ (an empty array stands in for it). */
+    public BlockResult loadSummary(String hash) throws IOException {
+        return read(hash, false);
+    }
+
+    private BlockResult read(String hash, boolean withSigma) throws IOException {
         Path f = file(hash);
         try (InputStream is = Files.newInputStream(f);
-             DataInputStream in = new DataInputStream(new BufferedInputStream(is, 1 << 16))) {
+             DataInputStream in = new DataInputStream(new BufferedInputStream(is, withSigma ? 1 << 16 : 4096))) {
             if (in.readLong() != MAGIC) {
                 throw new InputException(f + ": not a block file of this version (delete the work folder to rebuild)");
             }
-            double[] s = new double[in.readInt()];
-            for (int i = 0; i < s.length; i++) {
-                s[i] = in.readDouble();
-            }
+            int points = in.readInt();
             long used = in.readLong();
             long below = in.readLong();
             double error = in.readDouble();
@@ -99,6 +108,14 @@ public final class BlockStore {
             java.util.List<String> warnings = new java.util.ArrayList<>();
             for (int i = 0; i < nw; i++) {
                 warnings.add(in.readUTF());
+            }
+            double[] s = new double[withSigma ? points : 0];
+            if (withSigma) {
+                byte[] bytes = in.readNBytes(8 * points);
+                if (bytes.length != 8 * points) {
+                    throw new InputException(f + ": truncated block file (delete it to recompute the block)");
+                }
+                java.nio.ByteBuffer.wrap(bytes).asDoubleBuffer().get(s);
             }
             return new BlockResult(s, used, below, counts, error, warnings);
         }

@@ -42,6 +42,18 @@ public final class AtomicFile {
         try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
             ch.force(true);
         }
+        rename(tmp, target);
+    }
+
+    /**
+     * Renames {@code tmp} over {@code target} without forcing it to disk first: complete under its final name if the
+     * process stops (the case a resumed build must survive), possibly not after an operating-system crash.
+     */
+    public static void commitWithoutSync(Path tmp, Path target) throws IOException {
+        rename(tmp, target);
+    }
+
+    private static void rename(Path tmp, Path target) throws IOException {
         try {
             Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
         } catch (AtomicMoveNotSupportedException e) {

@@ -160,7 +160,7 @@ public final class TableBuilder {
                         String h = cellHash[p][t][b];
                         BlockResult r;
                         if (blocks.has(h)) {
-                            r = blocks.load(h);
+                            r = blocks.loadSummary(h);
                         } else {
                             r = calculator.compute(layout.slice(b), pressuresAtm[p], plan.temperaturesK()[t],
                                     layout.lineMinCm1(b), layout.lineMaxCm1(b));

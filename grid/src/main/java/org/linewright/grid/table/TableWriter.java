@@ -4,7 +4,11 @@ import io.jhdf.HdfFile;
 import io.jhdf.WritableHdfFile;
 import io.jhdf.api.WritableDataset;
 import java.io.IOException;
-import java.io.OutputStream;
+import java.io.BufferedOutputStream;
+import java.security.DigestOutputStream;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
 import java.nio.channels.Channels;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -37,6 +41,8 @@ import org.linewright.ingest.store.SourceMetadata;
 public final class TableWriter {
     /** Prefix of linewright's keys in Arrow schema metadata. */
     public static final String ARROW_KEY_PREFIX = "linewright.";
+    /** Tables up to this many bytes of σ (as float64) are held in memory between the checksum and write passes. */
+    static final long CACHE_BYTES = 256L << 20;
     /** Metadata key of σ's checksum. */
     public static final String KEY_SIGMA_SHA256 = "sigma_sha256";
 
@@ -58,34 +64,46 @@ public final class TableWriter {
         TableFormat format = TableFormat.of(file);
         Path dir = file.toAbsolutePath().getParent();
         Files.createDirectories(dir);
-        // First pass: σ's checksum, so it can be part of metadata written before σ itself.
+        // First pass: σ's checksum, so it can be part of metadata written before σ itself. Rows are kept for the
+        // second pass when the whole table fits in CACHE_BYTES (else they are asked for again).
+        int np = content.pressureBar().length;
+        int nt = content.temperatureK().length;
+        boolean cache = (long) np * nt * content.wavenumberCm1().length * Double.BYTES <= CACHE_BYTES;
+        double[][][] rows = cache ? new double[np][nt][] : null;
         SigmaDigest digest = new SigmaDigest(content.precision());
-        for (int p = 0; p < content.pressureBar().length; p++) {
-            for (int t = 0; t < content.temperatureK().length; t++) {
+        for (int p = 0; p < np; p++) {
+            for (int t = 0; t < nt; t++) {
                 double[] s = content.sigma().sigma(p, t);
                 check(content, s);
                 digest.update(s);
+                if (cache) {
+                    rows[p][t] = s;
+                }
             }
         }
         String sigmaSha256 = digest.hex();
+        SigmaSource sigma = cache ? (p, t) -> rows[p][t] : content.sigma();
+        content = new TableContent(content.wavenumberCm1(), content.pressureBar(), content.temperatureK(), sigma,
+                content.precision(), content.metadata());
         Map<String, String> metadata = new LinkedHashMap<>();
         metadata.put("table_format", TableFormat.FORMAT_VERSION);
         metadata.put("sigma_precision", content.precision().id());
         metadata.putAll(content.metadata());
         metadata.put(KEY_SIGMA_SHA256, sigmaSha256);
         Path tmp = AtomicFile.temporaryFor(file);
+        String fileSha256;
         try {
             if (format == TableFormat.ARROW) {
-                writeArrow(tmp, content, metadata);
+                fileSha256 = writeArrow(tmp, content, metadata);
             } else {
                 Files.delete(tmp); // jHDF creates its file itself
                 writeHdf5(tmp, content, metadata);
+                fileSha256 = SourceMetadata.sha256(tmp);
             }
             AtomicFile.commit(tmp, file);
         } finally {
             Files.deleteIfExists(tmp);
         }
-        String fileSha256 = SourceMetadata.sha256(file);
         Path sidecar = sidecar(file);
         Path tmpSidecar = AtomicFile.temporaryFor(sidecar);
         try {
@@ -113,7 +131,8 @@ public final class TableWriter {
         return new Field(name, new FieldType(false, type, null, Map.of("unit", unit)), null);
     }
 
-    private static void writeArrow(Path tmp, TableContent content, Map<String, String> metadata) throws IOException {
+    /** Writes the Arrow file and returns the SHA-256 of its bytes, computed as they are written. */
+    private static String writeArrow(Path tmp, TableContent content, Map<String, String> metadata) throws IOException {
         ArrowType f64 = new ArrowType.FloatingPoint(FloatingPointPrecision.DOUBLE);
         ArrowType sigmaType = content.precision() == TablePlan.Precision.FLOAT32
                 ? new ArrowType.FloatingPoint(FloatingPointPrecision.SINGLE) : f64;
@@ -128,7 +147,8 @@ public final class TableWriter {
         int n = nu.length;
         try (BufferAllocator allocator = new RootAllocator();
              VectorSchemaRoot root = VectorSchemaRoot.create(schema, allocator);
-             OutputStream out = Files.newOutputStream(tmp);
+             DigestOutputStream out = new DigestOutputStream(new BufferedOutputStream(Files.newOutputStream(tmp), 1 << 20),
+                     sha256());
              ArrowFileWriter writer = new ArrowFileWriter(root, null, Channels.newChannel(out))) {
             writer.start();
             Float8Vector pv = (Float8Vector) root.getVector(0);
@@ -163,6 +183,16 @@ public final class TableWriter {
                 }
             }
             writer.end();
+            out.flush();
+            return HexFormat.of().formatHex(out.getMessageDigest().digest());
+        }
+    }
+
+    private static MessageDigest sha256() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
         }
     }
 
