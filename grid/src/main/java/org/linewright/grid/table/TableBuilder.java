@@ -22,6 +22,7 @@ import org.linewright.grid.manifest.BuildManifest;
 import org.linewright.grid.manifest.LineReachHasher;
 import org.linewright.grid.plan.LineCache;
 import org.linewright.grid.plan.TablePlan;
+import org.linewright.ingest.InputException;
 import org.linewright.ingest.ToolVersion;
 import org.linewright.ingest.partition.PartitionSums;
 import org.linewright.ingest.partition.TableSpec;
@@ -154,13 +155,20 @@ public final class TableBuilder {
             Map<String, Long> counts = new TreeMap<>();
             java.util.Set<String> warnings = new java.util.LinkedHashSet<>();
             double[] pressuresAtm = plan.pressuresAtm();
+            int gridSize = plan.grid().size();
+            // A table that fits in memory is assembled while its blocks are read for their counts (one read each)
+            boolean inMemory = (long) np * nt * gridSize * Double.BYTES <= TableWriter.CACHE_BYTES;
+            double[][][] rows = inMemory ? new double[np][nt][] : null;
             for (int p = 0; p < np; p++) {
                 for (int t = 0; t < nt; t++) {
+                    if (inMemory) {
+                        rows[p][t] = new double[gridSize];
+                    }
                     for (int b = 0; b < nb; b++) {
                         String h = cellHash[p][t][b];
                         BlockResult r;
                         if (blocks.has(h)) {
-                            r = blocks.loadSummary(h);
+                            r = inMemory ? blocks.load(h) : blocks.loadSummary(h);
                         } else {
                             r = calculator.compute(layout.slice(b), pressuresAtm[p], plan.temperaturesK()[t],
                                     layout.lineMinCm1(b), layout.lineMaxCm1(b));
@@ -170,6 +178,15 @@ public final class TableBuilder {
                             }
                             blocks.save(h, r);
                             listener.computed(p, t, b, r.sigmaCm2PerMolecule().length);
+                        }
+                        if (inMemory) {
+                            double[] s = r.sigmaCm2PerMolecule();
+                            if (s.length != layout.toIndex(b) - layout.fromIndex(b)) {
+                                throw new InputException(work + ": block file of cell " + BuildManifest.cellKey(p, t, b)
+                                        + " holds " + s.length + " points (expected "
+                                        + (layout.toIndex(b) - layout.fromIndex(b)) + "; delete the work folder)");
+                            }
+                            System.arraycopy(s, 0, rows[p][t], layout.fromIndex(b), s.length);
                         }
                         linesUsed += r.linesUsed();
                         maxError = Math.max(maxError, r.estimatedRelativeError());
@@ -198,8 +215,7 @@ public final class TableBuilder {
                 metadata.put("warning." + (++w), text);
             }
             final BlockStore store = blocks;
-            int gridSize = plan.grid().size();
-            SigmaSource sigma = (p, t) -> {
+            SigmaSource sigma = inMemory ? (p, t) -> rows[p][t] : (p, t) -> {
                 double[] row = new double[gridSize];
                 for (int b = 0; b < nb; b++) {
                     double[] s = store.load(cellHash[p][t][b]).sigmaCm2PerMolecule();

@@ -42,7 +42,7 @@ public final class TableWriter {
     /** Prefix of linewright's keys in Arrow schema metadata. */
     public static final String ARROW_KEY_PREFIX = "linewright.";
     /** Tables up to this many bytes of σ (as float64) are held in memory between the checksum and write passes. */
-    static final long CACHE_BYTES = 256L << 20;
+    public static final long CACHE_BYTES = 256L << 20;
     /** Metadata key of σ's checksum. */
     public static final String KEY_SIGMA_SHA256 = "sigma_sha256";
 

@@ -89,7 +89,8 @@ class TableRebuildBenchmarkTest {
         BuildReport scratch = build(plan);
 
         Path co = plan.resolveSibling("sample_CO.par");
-        List<String> records = new ArrayList<>(Files.readAllLines(co, StandardCharsets.US_ASCII));
+        List<String> original = Files.readAllLines(co, StandardCharsets.US_ASCII);
+        List<String> records = new ArrayList<>(original);
         int change = records.size() / 100;
         List<Integer> order = new ArrayList<>();
         for (int i = 0; i < records.size(); i++) {
@@ -106,15 +107,25 @@ class TableRebuildBenchmarkTest {
             }
         }
         assertEquals(change, done);
-        Files.write(co, records, StandardCharsets.US_ASCII);
-        BuildReport rebuild = build(plan);
-
-        double speedup = scratch.seconds() / rebuild.seconds();
+        // Three 1 % rebuilds (changed, back to the original, changed again: each recomputes the same blocks, as
+        // the previous build pruned the others); the median is reported, the machine being shared and noisy.
+        double[] seconds = new double[3];
+        int computed = 0;
+        for (int k = 0; k < seconds.length; k++) {
+            Files.write(co, k % 2 == 0 ? records : original, StandardCharsets.US_ASCII);
+            BuildReport rebuild = build(plan);
+            seconds[k] = rebuild.seconds();
+            computed = rebuild.computed();
+            assertTrue(rebuild.computed() < scratch.computed() / 10, "few blocks recomputed: " + rebuild.computed());
+        }
+        double median = java.util.Arrays.stream(seconds).sorted().toArray()[1];
+        double speedup = scratch.seconds() / median;
         System.out.printf(Locale.ROOT, "table rebuild benchmark: %d cells; from scratch %.2f s (%d computed); after a "
-                        + "1%% change (%d CO lines) %.2f s (%d computed, %d reused): %.1fx faster; %d cores, Java %s%n",
-                scratch.cells(), scratch.seconds(), scratch.computed(), change, rebuild.seconds(), rebuild.computed(),
-                rebuild.reused(), speedup, Runtime.getRuntime().availableProcessors(), System.getProperty("java.version"));
-        assertTrue(rebuild.computed() < scratch.computed() / 10, "few blocks recomputed: " + rebuild.computed());
+                        + "1%% change (%d CO lines, %d cells computed) %.2f / %.2f / %.2f s, median %.2f s: %.1fx faster; "
+                        + "%d cores, Java %s%n",
+                scratch.cells(), scratch.seconds(), scratch.computed(), change, computed, seconds[0], seconds[1],
+                seconds[2], median, speedup, Runtime.getRuntime().availableProcessors(),
+                System.getProperty("java.version"));
         assertTrue(speedup >= 10, "rebuild " + speedup + "x faster (target 10x)");
     }
 
