@@ -38,11 +38,12 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * the fourth power of the steps; that keeps the number of slices small under this engine's strict criterion (the
  * relative error wherever σ ≥ 10⁻⁶·max σ, which reaches deep into Gaussian wings).
  *
- * <p><b>Steps from the tolerance.</b> The tolerance ε is shared in four equal parts: Doppler axis, Lorentz axis,
- * position, and (resolving-power grids only) the interpolation onto the output points. The log steps are the
- * largest whose error, measured by {@link FastErrorModel} on the Voigt profile at the family's worst width ratio, is
- * within ε/4; the internal step is the output step divided by the smallest integer m (at most
- * {@value #MAX_OVERSAMPLING}) whose position error for the family's narrowest widths is within ε/4.
+ * <p><b>Steps from the tolerance ε.</b> All errors are measured by {@link FastErrorModel} on the Voigt profile.
+ * First the internal step: the output step divided by the smallest integer m (at most {@value #MAX_OVERSAMPLING})
+ * whose position error e_ν for each family's narrowest widths is within ε/4 (on resolving-power grids the output
+ * interpolation costs e_ν again). The width axes share B = 0.8·(ε − position error) − round-off allowance: the
+ * Doppler log step is the largest whose error at the family's most Gaussian width ratio is within B/2, the Lorentz
+ * log step the largest whose error at the most Lorentzian ratio is within B minus the Doppler axis's actual error.
  * {@link #estimatedRelativeError()} is the sum of the measured errors at the chosen steps plus a round-off allowance
  * (64·2⁻⁵²·log₂L/10⁻⁶); it can exceed ε only when m is capped (lines much narrower than the grid spacing).
  *
@@ -88,10 +89,13 @@ public final class FastEngine implements CrossSectionEngine {
     static final int MAX_SLICES = 20_000;
     /** Largest FFT length accepted. */
     static final int MAX_FFT_LENGTH = 1 << 29;
+
     /** Bounds of the log-width steps searched. */
     static final double MIN_LOG_STEP = 1e-3;
     static final double MAX_LOG_STEP = 2.0;
 
+    /** Round-off allowance 64·2⁻⁵²·log₂L/10⁻⁶ at the largest L accepted. */
+    private static final double ROUND_OFF_ALLOWANCE = 64 * 0x1.0p-52 * 29 / FastErrorModel.DEPTH;
     private static final int BOTH = 0;
     private static final int DOPPLER_ONLY = 1;
     private static final int LORENTZ_ONLY = 2;
@@ -213,16 +217,16 @@ public final class FastEngine implements CrossSectionEngine {
             plan.put("fast.lines", "0");
             return;
         }
-        double share = tolerance / 4;
-        Family[] families = planFamilies(share);
+        Family[] families = gatherFamilies();
 
-        // internal uniform grid
+        // internal uniform grid: the position error gets a quarter of the tolerance (twice on resolving-power grids,
+        // where the output interpolation costs the same again)
         boolean uniform = grid.spacing() == WavenumberGrid.Spacing.UNIFORM;
         double[] points = grid.pointsCm1();
         int n = points.length;
         double outputStep = uniform ? grid.stepCm1()
                 : (n >= 2 ? points[1] - points[0] : points[0] / grid.resolvingPower());
-        int m = chooseOversampling(families, outputStep, share);
+        int m = chooseOversampling(families, outputStep, tolerance / 4);
         double h = outputStep / m;
         double positionError = 0;
         for (Family f : families) {
@@ -230,6 +234,10 @@ public final class FastEngine implements CrossSectionEngine {
                 positionError = Math.max(positionError, FastErrorModel.positionError(h, f.alphaMin, f.gammaMin));
             }
         }
+        double positionTotal = uniform ? positionError : 2 * positionError;
+        // the width axes share what is left, with a margin of 20 % for the sampled maxima and round-off
+        // (at least a tenth of the tolerance, should the position error alone exceed it: m capped)
+        planAxes(families, Math.max(0.1 * tolerance, 0.8 * (tolerance - positionTotal) - ROUND_OFF_ALLOWANCE));
         double origin = uniform ? points[0] : points[0] - 2 * h;
         long internalPoints = uniform ? (long) (n - 1) * m + 1
                 : (long) Math.ceil((points[n - 1] - points[0]) / h) + 5;
@@ -274,7 +282,7 @@ public final class FastEngine implements CrossSectionEngine {
                     + " points refined " + m + " times, wing reach " + reach + " steps; at most " + MAX_FFT_LENGTH
                     + "; use a cutoff, a smaller range or the exact engine)");
         }
-        int fftLength = smoothEvenLength((int) needed);
+        int fftLength = fftLength((int) needed);
         int offset = (int) reach + 4;
 
         // distribution weights, line by line
@@ -315,7 +323,7 @@ public final class FastEngine implements CrossSectionEngine {
             }
         }
         double roundOff = 64 * Math.ulp(1.0) * (Math.log(fftLength) / Math.log(2)) / FastErrorModel.DEPTH;
-        estimate = widthError + (uniform ? positionError : 2 * positionError) + roundOff;
+        estimate = widthError + positionTotal + roundOff;
 
         plan.put("fast.lines", Integer.toString(count));
         plan.put("fast.oversampling", Integer.toString(m));
@@ -336,7 +344,7 @@ public final class FastEngine implements CrossSectionEngine {
         plan.put("fast.estimated_relative_error", String.format(Locale.ROOT, "%.3e", estimate));
     }
 
-    private Family[] planFamilies(double share) {
+    private Family[] gatherFamilies() {
         Family[] families = new Family[3];
         for (int i = 0; i < count; i++) {
             int kind = familyOf(dopplerCm1[i], lorentzCm1[i]);
@@ -351,6 +359,11 @@ public final class FastEngine implements CrossSectionEngine {
             f.gammaMin = Math.min(f.gammaMin, lorentzCm1[i]);
             f.gammaMax = Math.max(f.gammaMax, lorentzCm1[i]);
         }
+        return families;
+    }
+
+    /** Chooses each family's width axes: the Doppler axis gets half the budget, the Lorentz axis the rest. */
+    private static void planAxes(Family[] families, double budget) {
         for (int kind = 0; kind < 3; kind++) {
             Family f = families[kind];
             if (f == null) {
@@ -361,7 +374,7 @@ public final class FastEngine implements CrossSectionEngine {
             } else {
                 // worst case for the Doppler axis: the most Gaussian line, smallest γL/αD
                 double ratio = f.gammaMin / f.alphaMax;
-                double step = FastErrorModel.largestStep(s -> FastErrorModel.dopplerAxisError(s, ratio), share,
+                double step = FastErrorModel.largestStep(s -> FastErrorModel.dopplerAxisError(s, ratio), budget / 2,
                         MIN_LOG_STEP, MAX_LOG_STEP);
                 f.doppler = WidthAxis.geometric(f.alphaMin, f.alphaMax, step, 2);
                 f.dopplerError = f.doppler.stencilSize() == 1 ? 0
@@ -372,14 +385,14 @@ public final class FastEngine implements CrossSectionEngine {
             } else {
                 // worst case for the Lorentz axis: the most Lorentzian line, smallest αD/γL
                 double ratio = f.alphaMin / f.gammaMax;
-                double step = FastErrorModel.largestStep(s -> FastErrorModel.lorentzAxisError(s, ratio), share,
-                        MIN_LOG_STEP, MAX_LOG_STEP);
+                double lorentzBudget = budget - f.dopplerError;
+                double step = FastErrorModel.largestStep(s -> FastErrorModel.lorentzAxisError(s, ratio),
+                        lorentzBudget, MIN_LOG_STEP, MAX_LOG_STEP);
                 f.lorentz = WidthAxis.geometric(f.gammaMin, f.gammaMax, step, 1);
                 f.lorentzError = f.lorentz.stencilSize() == 1 ? 0
                         : FastErrorModel.lorentzAxisError(f.lorentz.logStep(), ratio);
             }
         }
-        return families;
     }
 
     private static int familyOf(double alpha, double gamma) {
@@ -620,19 +633,12 @@ public final class FastEngine implements CrossSectionEngine {
         return spectrum;
     }
 
-    /** Smallest even n ≥ {@code needed} of the form 2^a·3^b·5^c (fast FFT lengths). */
-    static int smoothEvenLength(int needed) {
-        long best = Long.MAX_VALUE;
-        for (long p2 = 2; p2 < 2L * needed + 2; p2 *= 2) {
-            for (long p3 = p2; p3 < 2L * needed + 2; p3 *= 3) {
-                for (long p5 = p3; p5 < 2L * needed + 2; p5 *= 5) {
-                    if (p5 >= needed && p5 < best) {
-                        best = p5;
-                    }
-                }
-            }
-        }
-        return (int) best;
+    /**
+     * Smallest power of two ≥ {@code needed}: the library's split-radix path for powers of two is several times
+     * faster than its mixed-radix path, which outweighs the padding (less than a factor 2 in memory).
+     */
+    static int fftLength(int needed) {
+        return Integer.highestOneBit(Math.max(2, needed - 1)) << 1;
     }
 
     private void describeStatic(Map<String, String> m) {
