@@ -605,17 +605,7 @@ public final class FastEngine implements CrossSectionEngine {
                     }
                 }
             }
-            // the slice's kernel: its profile at multiples of h, cut and de-pedestalled as the exact engine does
-            int reach = s.reach;
-            Arrays.fill(profile, 0, reach + 1, 0.0);
-            wingKernel.addLine(LineShapeKind.VOIGT, offsetsCm1, 0, reach + 1, 0.0, s.dopplerCm1, s.lorentzCm1, 1.0,
-                    profile);
-            Arrays.fill(kernel, 0.0);
-            kernel[0] = profile[0];
-            for (int r = 1; r <= reach; r++) {
-                kernel[r] = profile[r];
-                kernel[length - r] = profile[r];
-            }
+            sampleKernel(wingKernel, s.dopplerCm1, s.lorentzCm1, offsetsCm1, s.reach, profile, kernel);
             fft.realForward(lines);
             fft.realForward(kernel);
             // packed real-FFT layout: [Re0, Re(L/2), Re1, Im1, Re2, Im2, ...]
@@ -631,6 +621,33 @@ public final class FastEngine implements CrossSectionEngine {
             }
         }
         return spectrum;
+    }
+
+    /**
+     * A slice's convolution kernel: the profile at the offsets r·h, r = 0 … reach, cut and de-pedestalled exactly as
+     * the exact engine treats a line ({@link WingKernel#addLine}), laid out circularly (r at index r, −r at
+     * L − r) and zero elsewhere.
+     *
+     * @param wings          the wing treatment at this (p, T)
+     * @param dopplerCm1     the slice's αD
+     * @param lorentzCm1     the slice's γL
+     * @param offsetsCm1     r·h for r = 0 … at least {@code reach}
+     * @param reach          largest offset index kept, below L/2
+     * @param profileScratch scratch of length ≥ reach + 1
+     * @param kernelOut      receives the kernel, length L
+     */
+    static void sampleKernel(WingKernel wings, double dopplerCm1, double lorentzCm1, double[] offsetsCm1, int reach,
+                             double[] profileScratch, double[] kernelOut) {
+        int length = kernelOut.length;
+        Arrays.fill(profileScratch, 0, reach + 1, 0.0);
+        wings.addLine(LineShapeKind.VOIGT, offsetsCm1, 0, reach + 1, 0.0, dopplerCm1, lorentzCm1, 1.0,
+                profileScratch);
+        Arrays.fill(kernelOut, 0.0);
+        kernelOut[0] = profileScratch[0];
+        for (int r = 1; r <= reach; r++) {
+            kernelOut[r] = profileScratch[r];
+            kernelOut[length - r] = profileScratch[r];
+        }
     }
 
     /**
