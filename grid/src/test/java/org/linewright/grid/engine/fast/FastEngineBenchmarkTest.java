@@ -31,6 +31,14 @@ class FastEngineBenchmarkTest {
     private static final int LINES = 1_000_000;
     private static final int CHUNK = 65_536;
 
+    /**
+     * Runs the benchmark outside Surefire, so the heap limit can be chosen: {@code java -Xmx2g -cp
+     * <test classpath> org.linewright.grid.engine.fast.FastEngineBenchmarkTest}.
+     */
+    public static void main(String[] args) {
+        new FastEngineBenchmarkTest().millionLinesOnMillionPoints();
+    }
+
     @Test
     void millionLinesOnMillionPoints() {
         WavenumberGrid grid = WavenumberGrid.uniform(1000, 3000, 0.002);
