@@ -62,6 +62,10 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * distance, so wings are untruncated and nothing wraps around. The Perrin–Hartmann χ factor is refused
  * ({@link InputException}).
  *
+ * <p>Negative values (FFT round-off where no line reaches, a blurred cutoff edge; all far below 10⁻⁶·max σ) are
+ * added as zero, since a cross section is never negative; where no line reaches, σ is round-off (about 10⁻¹⁶ of the
+ * largest line peak) rather than exactly zero.
+ *
  * <p><b>Lines.</b> Families by width kind, each with its own axes: both widths positive; γL = 0 (pure Doppler, an
  * exact Lorentz node at 0); αD = 0 (pure Lorentz). Lines with S = 0 are skipped.
  *
@@ -300,9 +304,11 @@ public final class FastEngine implements CrossSectionEngine {
         }
         new DoubleFFT_1D(fftLength).realInverse(total, true);
 
+        // values below zero can only be FFT round-off or the blurred cutoff edge, far below the criterion's
+        // 10⁻⁶·max σ: a cross section is never negative, so they are added as zero
         if (uniform) {
             for (int k = 0; k < n; k++) {
-                sigmaCm2PerMolecule[k] += total[offset + k * m];
+                sigmaCm2PerMolecule[k] += Math.max(0.0, total[offset + k * m]);
             }
         } else {
             double[] w = new double[4];
@@ -311,8 +317,8 @@ public final class FastEngine implements CrossSectionEngine {
                 int k0 = (int) Math.floor(pos);
                 LagrangeWeights.uniform(pos - k0, w, 0);
                 int base = offset + k0 - 1;
-                sigmaCm2PerMolecule[k] += w[0] * total[base] + w[1] * total[base + 1] + w[2] * total[base + 2]
-                        + w[3] * total[base + 3];
+                sigmaCm2PerMolecule[k] += Math.max(0.0, w[0] * total[base] + w[1] * total[base + 1]
+                        + w[2] * total[base + 2] + w[3] * total[base + 3]);
             }
         }
 
