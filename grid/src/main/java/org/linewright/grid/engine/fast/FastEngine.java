@@ -59,15 +59,17 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * its four position nodes, so at points within 2h of a line's cutoff distance the truncation step is blurred (no
  * such points without a cutoff, and only a kink with pedestal removal); (2) for a width-dependent cutoff
  * (multiple of the HWHM) d is the slice's, not the line's. Without a cutoff the kernel spans every line-to-point
- * distance, so wings are untruncated and nothing wraps around. The Perrin–Hartmann χ factor is refused
- * ({@link InputException}).
+ * distance, so wings are untruncated and nothing wraps around. A χ factor (Perrin–Hartmann) is applied, like the
+ * exact engine, to the lines the chunk flags ({@link LineChunk#chiFactor}) when the treatment asks for one: those
+ * lines form families of their own whose kernels carry χ (it depends on the detuning only, so it is exact in the
+ * sampled kernel).
  *
  * <p>Negative values (FFT round-off where no line reaches, a blurred cutoff edge; all far below 10⁻⁶·max σ) are
  * added as zero, since a cross section is never negative; where no line reaches, σ is round-off (about 10⁻¹⁶ of the
  * largest line peak) rather than exactly zero.
  *
  * <p><b>Lines.</b> Families by width kind, each with its own axes: both widths positive; γL = 0 (pure Doppler, an
- * exact Lorentz node at 0); αD = 0 (pure Lorentz). Lines with S = 0 are skipped.
+ * exact Lorentz node at 0); αD = 0 (pure Lorentz); each split again by the χ flag. Lines with S = 0 are skipped.
  *
  * <p><b>Threads and determinism.</b> The non-empty slices are split into {@value #BLOCKS} fixed contiguous blocks;
  * each block sums its slices' spectra in slice order, and the blocks are summed in block order, so σ is bitwise the
@@ -104,6 +106,8 @@ public final class FastEngine implements CrossSectionEngine {
     private static final int DOPPLER_ONLY = 1;
     private static final int LORENTZ_ONLY = 2;
     private static final String[] FAMILY_NAMES = {"voigt", "doppler", "lorentz"};
+    /** Families: three width kinds, each without and with the χ factor. */
+    private static final int FAMILIES = 6;
 
     private final int threads;
     private final WingTreatment wings;
@@ -112,19 +116,22 @@ public final class FastEngine implements CrossSectionEngine {
 
     private WavenumberGrid grid;
     private WingKernel wingKernel;
+    /** The same treatment without χ, for lines not flagged for it; {@code wingKernel} itself when χ is off. */
+    private WingKernel plainKernel;
     private double[] centerCm1 = new double[0];
     private double[] strength = new double[0];
     private double[] dopplerCm1 = new double[0];
     private double[] lorentzCm1 = new double[0];
+    private boolean[] chi = new boolean[0];
     private int count;
     private double estimate;
     private final Map<String, String> plan = new LinkedHashMap<>();
 
     /**
      * @param threads   worker threads, at least 1
-     * @param wings     wing treatment (cutoff and pedestal honoured; a χ factor is refused)
+     * @param wings     wing treatment (cutoff, pedestal and χ factor as in the exact engine)
      * @param tolerance relative tolerance where σ ≥ 10⁻⁶·max σ, in (0, 0.1]
-     * @throws InputException for a χ factor or a tolerance out of range
+     * @throws InputException for a tolerance out of range
      */
     public FastEngine(int threads, WingTreatment wings, double tolerance) {
         if (threads < 1) {
@@ -132,10 +139,6 @@ public final class FastEngine implements CrossSectionEngine {
         }
         if (!(tolerance > 0 && tolerance <= 0.1)) {
             throw new InputException("fast engine tolerance: " + tolerance + " (expected a number in (0, 0.1])");
-        }
-        if (wings.chiFactor() != ChiFactorKind.NONE) {
-            throw new InputException("fast engine: wing factor " + wings.chiFactor().label()
-                    + " is not supported (expected none; use the exact engine for a chi factor)");
         }
         this.threads = threads;
         this.wings = wings;
@@ -153,6 +156,8 @@ public final class FastEngine implements CrossSectionEngine {
     public void begin(WavenumberGrid newGrid, double pressureAtm, double temperatureK) {
         this.grid = newGrid;
         this.wingKernel = wings.atConditions(pressureAtm, temperatureK);
+        this.plainKernel = wings.chiFactor() == ChiFactorKind.NONE ? wingKernel
+                : wings.withChiFactor(ChiFactorKind.NONE).atConditions(pressureAtm, temperatureK);
         this.count = 0;
         this.estimate = 0;
         plan.clear();
@@ -181,6 +186,7 @@ public final class FastEngine implements CrossSectionEngine {
             strength[count] = s;
             dopplerCm1[count] = a;
             lorentzCm1[count] = g;
+            chi[count] = chunk.chiFactor[i] && wingKernel != plainKernel;
             count++;
         }
     }
@@ -194,6 +200,7 @@ public final class FastEngine implements CrossSectionEngine {
         strength = Arrays.copyOf(strength, capacity);
         dopplerCm1 = Arrays.copyOf(dopplerCm1, capacity);
         lorentzCm1 = Arrays.copyOf(lorentzCm1, capacity);
+        chi = Arrays.copyOf(chi, capacity);
     }
 
     /** Widths and axes of one family of lines. */
@@ -205,6 +212,8 @@ public final class FastEngine implements CrossSectionEngine {
         int lines;
         WidthAxis doppler;
         WidthAxis lorentz;
+        /** Cutoff, pedestal and (for the χ families) χ factor of this family's lines. */
+        WingKernel kernel;
         double dopplerError;
         double lorentzError;
         int firstSlice;
@@ -339,7 +348,7 @@ public final class FastEngine implements CrossSectionEngine {
         for (int fi = 0; fi < families.length; fi++) {
             Family f = families[fi];
             if (f != null) {
-                String key = "fast.family." + FAMILY_NAMES[fi];
+                String key = "fast.family." + FAMILY_NAMES[fi % 3] + (fi >= 3 ? "-chi" : "");
                 plan.put(key + ".lines", Integer.toString(f.lines));
                 plan.put(key + ".doppler_nodes", Integer.toString(f.doppler.size()));
                 plan.put(key + ".doppler_log_step", Double.toString(f.doppler.logStep()));
@@ -351,12 +360,13 @@ public final class FastEngine implements CrossSectionEngine {
     }
 
     private Family[] gatherFamilies() {
-        Family[] families = new Family[3];
+        Family[] families = new Family[FAMILIES];
         for (int i = 0; i < count; i++) {
-            int kind = familyOf(dopplerCm1[i], lorentzCm1[i]);
+            int kind = familyOf(i);
             Family f = families[kind];
             if (f == null) {
                 f = new Family();
+                f.kernel = kind >= 3 ? wingKernel : plainKernel;
                 families[kind] = f;
             }
             f.lines++;
@@ -370,11 +380,12 @@ public final class FastEngine implements CrossSectionEngine {
 
     /** Chooses each family's width axes: the Doppler axis gets half the budget, the Lorentz axis the rest. */
     private static void planAxes(Family[] families, double budget) {
-        for (int kind = 0; kind < 3; kind++) {
-            Family f = families[kind];
+        for (int family = 0; family < FAMILIES; family++) {
+            Family f = families[family];
             if (f == null) {
                 continue;
             }
+            int kind = family % 3;
             if (kind == LORENTZ_ONLY) {
                 f.doppler = WidthAxis.exact(0.0);
             } else {
@@ -401,8 +412,10 @@ public final class FastEngine implements CrossSectionEngine {
         }
     }
 
-    private static int familyOf(double alpha, double gamma) {
-        return gamma == 0 ? DOPPLER_ONLY : (alpha == 0 ? LORENTZ_ONLY : BOTH);
+    /** Width kind (both, Doppler only, Lorentz only), plus 3 for lines with the χ factor. */
+    private int familyOf(int line) {
+        int kind = lorentzCm1[line] == 0 ? DOPPLER_ONLY : (dopplerCm1[line] == 0 ? LORENTZ_ONLY : BOTH);
+        return chi[line] ? kind + 3 : kind;
     }
 
     /** Smallest m ≤ {@link #MAX_OVERSAMPLING} whose position error is within the share for every family. */
@@ -443,8 +456,8 @@ public final class FastEngine implements CrossSectionEngine {
         double[] gw = new double[4 * count];
         double[] lw = new double[4 * count];
         int keys = 0;
-        int[] familyKeyBase = new int[3];
-        for (int kind = 0; kind < 3; kind++) {
+        int[] familyKeyBase = new int[FAMILIES];
+        for (int kind = 0; kind < FAMILIES; kind++) {
             familyKeyBase[kind] = keys;
             if (families[kind] != null) {
                 keys += families[kind].doppler.size() * families[kind].lorentz.size();
@@ -465,7 +478,7 @@ public final class FastEngine implements CrossSectionEngine {
                 pw[4 * i + j] *= strength[i];
             }
             firstPoint[i] = k0 - 1 + offset;
-            int kind = familyOf(dopplerCm1[i], lorentzCm1[i]);
+            int kind = familyOf(i);
             Family f = families[kind];
             int jg = f.doppler.stencil(dopplerCm1[i], gw, 4 * i);
             int jl = f.lorentz.stencil(lorentzCm1[i], lw, 4 * i);
@@ -611,7 +624,7 @@ public final class FastEngine implements CrossSectionEngine {
                     }
                 }
             }
-            sampleKernel(wingKernel, s.dopplerCm1, s.lorentzCm1, offsetsCm1, s.reach, profile, kernel);
+            sampleKernel(f.kernel, s.dopplerCm1, s.lorentzCm1, offsetsCm1, s.reach, profile, kernel);
             fft.realForward(lines);
             fft.realForward(kernel);
             // packed real-FFT layout: [Re0, Re(L/2), Re1, Im1, Re2, Im2, ...]

@@ -2,7 +2,6 @@ package org.linewright.grid.engine.fast;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Random;
@@ -15,7 +14,6 @@ import org.linewright.broadening.wings.WingKernel;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.engine.LineChunk;
 import org.linewright.grid.wavenumber.WavenumberGrid;
-import org.linewright.ingest.InputException;
 
 /**
  * The fast engine against a direct summation of the closed-form Voigt profile ({@link VoigtProfile}, itself
@@ -82,6 +80,7 @@ class FastEngineAccuracyTest {
         System.arraycopy(chunk.intensityCmPerMolecule, from, p.intensityCmPerMolecule, 0, p.size);
         System.arraycopy(chunk.dopplerHwhmCm1, from, p.dopplerHwhmCm1, 0, p.size);
         System.arraycopy(chunk.lorentzHwhmCm1, from, p.lorentzHwhmCm1, 0, p.size);
+        System.arraycopy(chunk.chiFactor, from, p.chiFactor, 0, p.size);
         return p;
     }
 
@@ -225,10 +224,32 @@ class FastEngineAccuracyTest {
     }
 
     @Test
-    void chiFactorIsRefused() {
-        WingTreatment chi = WingTreatment.defaults().withChiFactor(ChiFactorKind.PERRIN_HARTMANN_CO2);
-        InputException e = assertThrows(InputException.class, () -> new FastEngine(1, chi, TOLERANCE));
-        assertTrue(e.getMessage().contains("perrin-hartmann-co2"), e.getMessage());
+    void chiFactorOnFlaggedLinesOnly() {
+        // CO2-broadened-by-CO2 lines carry the Perrin–Hartmann χ factor, the others not: the reference sums the
+        // flagged lines with the χ kernel and the rest without, as the exact engine does
+        WingTreatment wings = WingTreatment.defaults().withCutoff(WingCutoff.fixed(40.0)).withPedestalRemoval(true)
+                .withChiFactor(ChiFactorKind.PERRIN_HARTMANN_CO2);
+        WavenumberGrid grid = WavenumberGrid.uniform(2300, 2340, 0.01);
+        LineChunk chunk = lines(13, 80, 2300, 2340, 0.002, 0.003, 0.05, 0.1);
+        for (int i = 0; i < chunk.size; i++) {
+            chunk.chiFactor[i] = i % 3 != 0;
+        }
+        double[] estimate = new double[1];
+        double[] f = fast(grid, chunk, wings, 2, estimate);
+        WingKernel withChi = wings.atConditions(1.0, 296.0);
+        WingKernel without = wings.withChiFactor(ChiFactorKind.NONE).atConditions(1.0, 296.0);
+        double[] d = new double[grid.size()];
+        for (int i = 0; i < chunk.size; i++) {
+            (chunk.chiFactor[i] ? withChi : without).addLine(LineShapeKind.VOIGT, grid.pointsCm1(), 0, grid.size(),
+                    chunk.centerCm1[i], chunk.dopplerHwhmCm1[i], chunk.lorentzHwhmCm1[i],
+                    chunk.intensityCmPerMolecule[i], d);
+        }
+        double observed = maxRelativeError(f, d, null);
+        assertTrue(observed <= TOLERANCE, "observed " + observed);
+        assertTrue(observed <= estimate[0], "observed " + observed + " > estimate " + estimate[0]);
+        // and χ did act: far from the lines it lowers σ against the plain treatment
+        double[] plain = fast(grid, chunk, wings.withChiFactor(ChiFactorKind.NONE), 1, null);
+        assertTrue(maxRelativeError(f, plain, null) > 0.01);
     }
 
     static LineChunk merge(LineChunk... parts) {
