@@ -686,7 +686,7 @@ public final class FastEngine implements CrossSectionEngine {
         m.put("fast.kernel", "per-slice Voigt sampled and truncated as in the exact engine (cutoff and pedestal at "
                 + "the slice's node widths)");
         m.put("fast.cutoff_edge", "within 2 internal steps of a line's cutoff distance the truncation is spread over "
-                + "the line's position stencil");
+                + "the line's position stencil; a width-dependent cutoff is taken at the slice's node widths");
         m.putAll(wings.describe());
     }
 
