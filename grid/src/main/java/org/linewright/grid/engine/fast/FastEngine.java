@@ -32,11 +32,12 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * its node widths; the slices are summed. The convolutions are products of FFTs (JTransforms), the slices summed in
  * the frequency domain, so one inverse transform gives σ. Cost O(lines·64 + slices·L·log L), L the FFT length.
  *
- * <p><b>Weights.</b> Where the paper uses two-point weights per axis, this engine uses four-point Lagrange weights
- * ({@link LagrangeWeights}) on all three axes: in position, in αD² (Gaussians convolve by adding variances) and in
- * γL (Lorentzians convolve by adding widths). They reproduce the first four moments exactly, so the error falls as
- * the fourth power of the steps; that keeps the number of slices small under this engine's strict criterion (the
- * relative error wherever σ ≥ 10⁻⁶·max σ, which reaches deep into Gaussian wings).
+ * <p><b>Weights.</b> Where the paper uses two-point weights per axis, this engine uses Lagrange weights
+ * ({@link LagrangeWeights}): four points in αD² (Gaussians convolve by adding variances) and in γL (Lorentzians
+ * convolve by adding widths), six points in position. They reproduce the first four (six) moments exactly, so the
+ * errors fall as the fourth power of the log-width steps and the sixth power of the internal step; that keeps the
+ * number of slices and the grid refinement small under this engine's strict criterion (the relative error wherever
+ * σ ≥ 10⁻⁶·max σ, which reaches deep into Gaussian wings).
  *
  * <p><b>Steps from the tolerance ε.</b> All errors are measured by {@link FastErrorModel} on the Voigt profile.
  * First the internal step: the output step divided by the smallest integer m (at most {@value #MAX_OVERSAMPLING})
@@ -49,14 +50,14 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  *
  * <p><b>Grids.</b> Uniform grids: the internal grid is the output grid refined m times, and σ is read at every
  * m-th point. Resolving-power grids: a uniform internal grid of step (ν₁ − ν₀)/m (the finest output spacing) over
- * the whole range, and σ at the output points by four-point Lagrange interpolation (its error is the same position
- * error, hence the fourth share).
+ * the whole range, and σ at the output points by six-point Lagrange interpolation (its error is the same position
+ * error, counted twice).
  *
  * <p><b>Wings.</b> Each slice's kernel is the profile sampled in real space at multiples of h and truncated exactly
  * as the exact engine truncates a line ({@link WingKernel#addLine}: |Δν| ≤ d, pedestal V(d) subtracted when asked),
  * with d taken at the slice's node widths; its FFT is taken numerically. So the result equals the exact engine's
  * truncated lines to within the tolerance, with two documented differences: (1) a line's cutoff edge is spread over
- * its four position nodes, so at points within 2h of a line's cutoff distance the truncation step is blurred (no
+ * its six position nodes, so at points within 3h of a line's cutoff distance the truncation step is blurred (no
  * such points without a cutoff, and only a kink with pedestal removal); (2) for a width-dependent cutoff
  * (multiple of the HWHM) d is the slice's, not the line's. Without a cutoff the kernel spans every line-to-point
  * distance, so wings are untruncated and nothing wraps around. A χ factor (Perrin–Hartmann) is applied, like the
@@ -102,6 +103,9 @@ public final class FastEngine implements CrossSectionEngine {
 
     /** Round-off allowance 64·2⁻⁵²·log₂L/10⁻⁶ at the largest L accepted. */
     private static final double ROUND_OFF_ALLOWANCE = 64 * 0x1.0p-52 * 29 / FastErrorModel.DEPTH;
+    /** Points of the position stencil, and how many of them lie below the line's lower neighbour. */
+    private static final int P = FastErrorModel.POSITION_POINTS;
+    private static final int SHIFT = P / 2 - 1;
     private static final int BOTH = 0;
     private static final int DOPPLER_ONLY = 1;
     private static final int LORENTZ_ONLY = 2;
@@ -251,9 +255,10 @@ public final class FastEngine implements CrossSectionEngine {
         // the width axes share what is left, with a margin of 20 % for the sampled maxima and round-off
         // (at least a tenth of the tolerance, should the position error alone exceed it: m capped)
         planAxes(families, Math.max(0.1 * tolerance, 0.8 * (tolerance - positionTotal) - ROUND_OFF_ALLOWANCE));
-        double origin = uniform ? points[0] : points[0] - 2 * h;
+        // resolving-power grids: a margin of 3 internal points each side for the output interpolation stencil
+        double origin = uniform ? points[0] : points[0] - 3 * h;
         long internalPoints = uniform ? (long) (n - 1) * m + 1
-                : (long) Math.ceil((points[n - 1] - points[0]) / h) + 5;
+                : (long) Math.ceil((points[n - 1] - points[0]) / h) + 7;
 
         // kernel half-length K: the cutoff, or every line-to-point distance without one
         double lineMin = Double.POSITIVE_INFINITY;
@@ -320,14 +325,17 @@ public final class FastEngine implements CrossSectionEngine {
                 sigmaCm2PerMolecule[k] += Math.max(0.0, total[offset + k * m]);
             }
         } else {
-            double[] w = new double[4];
+            double[] w = new double[P];
             for (int k = 0; k < n; k++) {
                 double pos = (points[k] - origin) / h;
                 int k0 = (int) Math.floor(pos);
-                LagrangeWeights.uniform(pos - k0, w, 0);
-                int base = offset + k0 - 1;
-                sigmaCm2PerMolecule[k] += Math.max(0.0, w[0] * total[base] + w[1] * total[base + 1]
-                        + w[2] * total[base + 2] + w[3] * total[base + 3]);
+                LagrangeWeights.centred(P, pos - k0, w, 0);
+                int base = offset + k0 - SHIFT;
+                double value = 0;
+                for (int j = 0; j < P; j++) {
+                    value += w[j] * total[base + j];
+                }
+                sigmaCm2PerMolecule[k] += Math.max(0.0, value);
             }
         }
 
@@ -452,7 +460,7 @@ public final class FastEngine implements CrossSectionEngine {
     private Distribution distribute(Family[] families, double origin, double h, int offset, int fftLength) {
         int[] firstPoint = new int[count];
         int[] key = new int[count];
-        double[] pw = new double[4 * count];
+        double[] pw = new double[P * count];
         double[] gw = new double[4 * count];
         double[] lw = new double[4 * count];
         int keys = 0;
@@ -468,16 +476,16 @@ public final class FastEngine implements CrossSectionEngine {
             double pos = (centerCm1[i] - origin) / h;
             double floor = Math.floor(pos);
             // lines whose stencil leaves the FFT buffer lie farther than the kernel reach from every point
-            if (floor - 1 + offset < 0 || floor + 2 + offset >= fftLength) {
+            if (floor - SHIFT + offset < 0 || floor - SHIFT + P - 1 + offset >= fftLength) {
                 key[i] = -1;
                 continue;
             }
             int k0 = (int) floor;
-            LagrangeWeights.uniform(pos - floor, pw, 4 * i);
-            for (int j = 0; j < 4; j++) {
-                pw[4 * i + j] *= strength[i];
+            LagrangeWeights.centred(P, pos - floor, pw, P * i);
+            for (int j = 0; j < P; j++) {
+                pw[P * i + j] *= strength[i];
             }
-            firstPoint[i] = k0 - 1 + offset;
+            firstPoint[i] = k0 - SHIFT + offset;
             int kind = familyOf(i);
             Family f = families[kind];
             int jg = f.doppler.stencil(dopplerCm1[i], gw, 4 * i);
@@ -617,10 +625,9 @@ public final class FastEngine implements CrossSectionEngine {
                         int i = dist.order[q];
                         double w = dist.dopplerWeights[4 * i + gIndex] * dist.lorentzWeights[4 * i + lIndex];
                         int p = dist.firstPoint[i];
-                        lines[p] += w * dist.positionWeights[4 * i];
-                        lines[p + 1] += w * dist.positionWeights[4 * i + 1];
-                        lines[p + 2] += w * dist.positionWeights[4 * i + 2];
-                        lines[p + 3] += w * dist.positionWeights[4 * i + 3];
+                        for (int j = 0; j < P; j++) {
+                            lines[p + j] += w * dist.positionWeights[P * i + j];
+                        }
                     }
                 }
             }
@@ -680,12 +687,12 @@ public final class FastEngine implements CrossSectionEngine {
     private void describeStatic(Map<String, String> m) {
         m.put("engine", ID);
         m.put("fast.method", "discrete integral transform (van den Bekerom & Pannier 2021): 3-D distribution over "
-                + "position, ln alphaD, ln gammaL with 4-point Lagrange weights; FFT convolution per width slice");
+                + "position (6-point Lagrange weights), ln alphaD and ln gammaL (4-point); FFT convolution per width slice");
         m.put("fast.tolerance", Double.toString(tolerance));
         m.put("fast.criterion", "relative error where sigma >= 1e-6 max sigma");
         m.put("fast.kernel", "per-slice Voigt sampled and truncated as in the exact engine (cutoff and pedestal at "
                 + "the slice's node widths)");
-        m.put("fast.cutoff_edge", "within 2 internal steps of a line's cutoff distance the truncation is spread over "
+        m.put("fast.cutoff_edge", "within 3 internal steps of a line's cutoff distance the truncation is spread over "
                 + "the line's position stencil; a width-dependent cutoff is taken at the slice's node widths");
         m.putAll(wings.describe());
     }

@@ -1,11 +1,11 @@
 package org.linewright.grid.engine.fast;
 
 /**
- * Four-point Lagrange weights, the distribution rule of the fast engine on all three of its axes (position, Doppler
- * width, Lorentz width). Spreading a unit point mass at u over nodes u₀ … u₃ with weights
- * ℓⱼ(u) = Πₖ≠ⱼ (u − uₖ)/(uⱼ − uₖ) reproduces the moments Σ ℓⱼ·uⱼⁿ = uⁿ for n = 0 … 3 exactly, so a profile built from
- * the node profiles differs from the true one by the interpolation remainder ω(u)·f⁗(ξ)/4!, ω(u) = Π (u − uⱼ)
- * (Lagrange's remainder theorem; e.g. Abramowitz &amp; Stegun 25.2.3).
+ * Lagrange weights, the distribution rule of the fast engine on all three of its axes: six points in position, four
+ * on each width axis. Spreading a unit point mass at u over nodes u₀ … u_(n−1) with weights
+ * ℓⱼ(u) = Πₖ≠ⱼ (u − uₖ)/(uⱼ − uₖ) reproduces the moments Σ ℓⱼ·uⱼᵏ = uᵏ for k = 0 … n−1 exactly, so a profile built
+ * from the node profiles differs from the true one by the interpolation remainder ω(u)·f⁽ⁿ⁾(ξ)/n!,
+ * ω(u) = Π (u − uⱼ) (Lagrange's remainder theorem; e.g. Abramowitz &amp; Stegun 25.2.3).
  */
 public final class LagrangeWeights {
 
@@ -28,6 +28,30 @@ public final class LagrangeWeights {
         out[offset + 1] = tp1 * tm1 * tm2 / 2;
         out[offset + 2] = -tp1 * tau * tm2 / 2;
         out[offset + 3] = tp1 * tau * tm1 / 6;
+    }
+
+    /**
+     * Weights for {@code points} (even) equally spaced nodes −(points/2 − 1), …, points/2 at fraction τ (0 ≤ τ &lt; 1
+     * between nodes 0 and 1): ℓⱼ(τ) = Πₖ≠ⱼ (τ − xₖ)/(xⱼ − xₖ).
+     *
+     * @param points number of nodes, even
+     * @param tau    position between nodes 0 and 1
+     * @param out    receives the weights at {@code out[offset .. offset+points-1]}
+     * @param offset first index written
+     */
+    public static void centred(int points, double tau, double[] out, int offset) {
+        int shift = points / 2 - 1;
+        for (int j = 0; j < points; j++) {
+            double xj = j - shift;
+            double w = 1;
+            for (int k = 0; k < points; k++) {
+                if (k != j) {
+                    double xk = k - shift;
+                    w *= (tau - xk) / (xj - xk);
+                }
+            }
+            out[offset + j] = w;
+        }
     }
 
     /**

@@ -57,7 +57,14 @@ class FastEngineContractTest {
             engine.accumulate(chunk, sigma);
             engine.finish(sigma);
         }
-        assertArrayEquals(new double[grid.size()], sigma);
+        // nothing but FFT round-off: far below 10⁻¹² of the strongest line's peak S/(πγL) (the exact engine: 0)
+        double peak = 0;
+        for (int i = 0; i < chunk.size; i++) {
+            peak = Math.max(peak, chunk.intensityCmPerMolecule[i] / (Math.PI * chunk.lorentzHwhmCm1[i]));
+        }
+        for (double v : sigma) {
+            assertTrue(v >= 0 && v <= 1e-12 * peak, "sigma " + v + " against peak " + peak);
+        }
     }
 
     @Test

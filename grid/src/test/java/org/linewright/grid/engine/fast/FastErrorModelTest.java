@@ -7,25 +7,27 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The measured errors against Lagrange's remainder theorem (Abramowitz &amp; Stegun 25.2.3): error =
- * ω(u)·f⁗(ξ)/4!, so fourth-order convergence, and for a Lorentzian at its centre a closed form.
+ * ω(u)·f⁽ⁿ⁾(ξ)/n! for n nodes, so convergence of order n, and for a Lorentzian at its centre a closed form.
  */
 class FastErrorModelTest {
 
     @Test
     void positionErrorOfALorentzianMatchesTheRemainderAtTheCentre() {
-        // L(x) ∝ 1/(1 + x²/γ²): L⁗(0)/L(0) = 24/γ⁴, the largest relative fourth derivative; max |ω(τ)| over
-        // τ ∈ [0, 1] for nodes −1, 0, 1, 2 is 9/16 at τ = ½ → relative error (9/16)·(h/γ)⁴ as h → 0
+        // six-point stencil, nodes −2 … 3: L(x) ∝ 1/(1 + x²/γ²) has |L⁽⁶⁾(0)/L(0)| = 720/γ⁶, the largest relative sixth
+        // derivative; max |ω(τ)| over τ ∈ [0, 1] is (5/2·3/2·1/2)² = 225/64 at τ = ½ → relative error
+        // (225/64)·(720/6!)·(h/γ)⁶ = (225/64)·(h/γ)⁶ as h → 0
         double gamma = 0.1;
         double h = 0.005;
-        double predicted = 9.0 / 16.0 * Math.pow(h / gamma, 4);
+        double predicted = 225.0 / 64.0 * Math.pow(h / gamma, 6);
         assertEquals(predicted, FastErrorModel.positionError(h, 0.0, gamma), 0.05 * predicted);
     }
 
     @Test
     void errorsFallAsTheFourthPowerOfTheStep() {
+        // position: sixth order (six-point stencil)
         double coarse = FastErrorModel.positionError(0.002, 0.004, 0.01);
         double fine = FastErrorModel.positionError(0.001, 0.004, 0.01);
-        assertEquals(16.0, coarse / fine, 3.0);
+        assertEquals(64.0, coarse / fine, 12.0);
         double dopplerCoarse = FastErrorModel.dopplerAxisError(0.04, 0.0);
         double dopplerFine = FastErrorModel.dopplerAxisError(0.02, 0.0);
         assertEquals(16.0, dopplerCoarse / dopplerFine, 3.0);

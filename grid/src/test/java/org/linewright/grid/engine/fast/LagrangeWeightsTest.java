@@ -35,6 +35,31 @@ class LagrangeWeightsTest {
     }
 
     @Test
+    void sixPointWeightsReproduceMomentsUpToFive() {
+        double[] w = new double[6];
+        for (double tau = 0; tau < 1; tau += 0.0625) {
+            LagrangeWeights.centred(6, tau, w, 0);
+            for (int order = 0; order <= 6; order++) {
+                double moment = 0;
+                for (int j = 0; j < 6; j++) {
+                    moment += w[j] * Math.pow(j - 2, order);
+                }
+                // order 6 is off by −ω(τ) = −Π(τ − xⱼ) over the nodes −2 … 3
+                double omega = order < 6 ? 0 : (tau + 2) * (tau + 1) * tau * (tau - 1) * (tau - 2) * (tau - 3);
+                assertEquals(Math.pow(tau, order) - omega, moment, 1e-12, "order " + order + " at " + tau);
+            }
+        }
+        // four points through the general routine agree with the closed forms
+        double[] four = new double[4];
+        LagrangeWeights.centred(4, 0.3, four, 0);
+        double[] closed = new double[4];
+        LagrangeWeights.uniform(0.3, closed, 0);
+        for (int j = 0; j < 4; j++) {
+            assertEquals(closed[j], four[j], 1e-15);
+        }
+    }
+
+    @Test
     void generalWeightsOnUnevenNodesReproduceCubics() {
         double[] nodes = {0.7, 1.0, 1.6, 2.9, 5.0};
         double[] w = new double[4];
