@@ -77,10 +77,11 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * same for any thread count. The FFT library's own threading is switched off (a process-wide JTransforms setting),
  * because this engine already runs slices in parallel.
  *
- * <p><b>Memory.</b> {@link #accumulate} keeps the lines (32 bytes each); {@link #finish} needs about 130 bytes per
+ * <p><b>Memory.</b> {@link #accumulate} keeps the lines (33 bytes each); {@link #finish} needs 124 bytes per
  * line for the distribution weights plus ({@value #BLOCKS} + 2·threads + 1)·L doubles, where L ≈ m·N + 2K (N output
- * points, K the cutoff in internal steps; without a cutoff K spans the lines' range), rounded up to a product of
- * 2, 3 and 5.
+ * points, K the cutoff in internal steps; without a cutoff K spans every line-to-point distance), rounded up to a
+ * power of two. {@link #finish} refuses with an {@link InputException} naming the figures when this exceeds the
+ * heap.
  */
 public final class FastEngine implements CrossSectionEngine {
 
@@ -97,6 +98,8 @@ public final class FastEngine implements CrossSectionEngine {
     /** Largest FFT length accepted. */
     static final int MAX_FFT_LENGTH = 1 << 29;
 
+    /** Working memory per line in {@link #finish}: stencil indices and weights (6 + 4 + 4 doubles, 3 ints). */
+    static final int BYTES_PER_LINE = 14 * Double.BYTES + 3 * Integer.BYTES;
     /** Bounds of the log-width steps searched. */
     static final double MIN_LOG_STEP = 1e-3;
     static final double MAX_LOG_STEP = 2.0;
@@ -302,6 +305,15 @@ public final class FastEngine implements CrossSectionEngine {
         }
         int fftLength = fftLength((int) needed);
         int offset = (int) reach + 4;
+        // refuse up front, with the figures, rather than fail half-way for want of heap
+        long bytes = ((long) Math.min(BLOCKS, slices) + 2L * threads + 1) * fftLength * Double.BYTES
+                + (long) count * BYTES_PER_LINE;
+        long heap = Runtime.getRuntime().maxMemory();
+        if (bytes > heap) {
+            throw new InputException("fast engine: about " + bytes / (1 << 20) + " MB needed (FFT length " + fftLength
+                    + ", " + count + " lines) but the heap allows " + heap / (1 << 20)
+                    + " MB; use a cutoff, a smaller range, fewer threads, a larger -Xmx or the exact engine");
+        }
 
         // distribution weights, line by line
         Distribution dist = distribute(families, origin, h, offset, fftLength);
