@@ -30,7 +30,7 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * an internal uniform wavenumber grid of step h, Doppler HWHM on nodes evenly spaced in ln αD, Lorentz HWHM on nodes
  * evenly spaced in ln γL — and each (αD, γL) node pair (a "slice") is convolved along ν with the Voigt profile of
  * its node widths; the slices are summed. The convolutions are products of FFTs (JTransforms), the slices summed in
- * the frequency domain, so one inverse transform gives σ. Cost O(lines·64 + slices·L·log L), L the FFT length.
+ * the frequency domain, so one inverse transform gives σ. Cost O(lines·16·6 + slices·L·log L), L the FFT length.
  *
  * <p><b>Weights.</b> Where the paper uses two-point weights per axis, this engine uses Lagrange weights
  * ({@link LagrangeWeights}): four points in αD² (Gaussians convolve by adding variances) and in γL (Lorentzians
@@ -55,7 +55,11 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  *
  * <p><b>Wings.</b> Each slice's kernel is the profile sampled in real space at multiples of h and truncated exactly
  * as the exact engine truncates a line ({@link WingKernel#addLine}: |Δν| ≤ d, pedestal V(d) subtracted when asked),
- * with d taken at the slice's node widths; its FFT is taken numerically. So the result equals the exact engine's
+ * with d taken at the slice's node widths; its FFT is taken numerically. (The paper multiplies by the analytic
+ * transform exp(−π²f²αD²/ln2 − 2πγL|f|) instead; that is the transform of the untruncated profile, and sampled at the
+ * DFT frequencies it yields the periodic sum of the profile, so wings wrap around the buffer. The sampled kernel
+ * costs one more FFT per slice but has neither problem; its transform is checked against the analytic one in the
+ * tests.) So the result equals the exact engine's
  * truncated lines to within the tolerance, with two documented differences: (1) a line's cutoff edge is spread over
  * its six position nodes, so at points within 3h of a line's cutoff distance the truncation step is blurred (no
  * such points without a cutoff, and only a kink with pedestal removal); (2) for a width-dependent cutoff
