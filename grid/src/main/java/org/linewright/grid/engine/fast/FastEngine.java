@@ -235,6 +235,10 @@ public final class FastEngine implements CrossSectionEngine {
         if (grid == null) {
             throw new IllegalStateException("finish before begin");
         }
+        if (sigmaCm2PerMolecule.length != grid.size()) {
+            throw new IllegalArgumentException("sigma has " + sigmaCm2PerMolecule.length + " points, the grid "
+                    + grid.size());
+        }
         describeStatic(plan);
         if (count == 0) {
             estimate = 0;
