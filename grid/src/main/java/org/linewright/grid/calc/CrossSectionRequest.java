@@ -1,8 +1,8 @@
 package org.linewright.grid.calc;
 
-import org.linewright.broadening.sources.WidthOptions;
 import java.util.Objects;
 import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.wavenumber.WavenumberGrid;

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Locale;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.engine.exact.ExactEngine;
+import org.linewright.grid.engine.fast.FastEngine;
 import org.linewright.ingest.InputException;
 
 /**
@@ -11,7 +12,7 @@ import org.linewright.ingest.InputException;
  * has one case.
  */
 public final class EngineFactory {
-    /** The ids of the engines known to this factory (available or not). */
+    /** The ids of the engines known to this factory . */
     public static final List<String> IDS = List.of(ExactEngine.ID, "fast");
 
     private EngineFactory() {
@@ -34,7 +35,7 @@ public final class EngineFactory {
             case ExactEngine.ID:
                 return new ExactEngine(threads, wings);
             case "fast":
-                throw new InputException("engine 'fast' is not available in this build");
+                return new FastEngine(threads, wings, tolerance);
             default:
                 throw new InputException("engine '" + id + "': unknown (expected one of " + String.join(", ", IDS) + ")");
         }

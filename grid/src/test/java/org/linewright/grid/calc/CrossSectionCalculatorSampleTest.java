@@ -1,6 +1,5 @@
 package org.linewright.grid.calc;
 
-import org.linewright.broadening.sources.WidthOptions;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -14,6 +13,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.ChiFactorKind;
 import org.linewright.broadening.wings.WingTreatment;
