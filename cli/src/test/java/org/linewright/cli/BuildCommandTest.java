@@ -74,7 +74,8 @@ class BuildCommandTest {
         assertTrue(dry.out().contains("dry run: 0 of 20 blocks would be computed, 20 reused"), dry.out());
 
         Run again = run("build", plan.toString());
-        assertTrue(again.out().contains("blocks: 0 computed, 20 reused (of 20)"), again.out());
+        assertTrue(again.out().contains("blocks: 0 computed, 20 reused (of 20); 0 raw line list(s) ingested"),
+                again.out());
         CrossSectionTable t = CrossSectionTable.open(table);
         assertEquals(2001, t.wavenumberCm1().length);
         assertEquals(t.metadata().get("sigma_sha256"), t.sigmaSha256());

@@ -131,6 +131,9 @@ class IncrementalBuildTest {
         assertTrue(dry.dryRun());
         assertNull(dry.written());
         assertEquals(expected, second.computed());
+        assertEquals(1, first.ingested(), "the raw list is ingested into the cache once");
+        assertEquals(1, dry.ingested(), "a changed list (new SHA-256) is ingested again, by the dry run here");
+        assertEquals(0, second.ingested(), "an unchanged list comes from the cache");
         assertEquals(cells - expected, second.reused());
 
         Path fresh = plan("fresh", editedFile);
