@@ -57,9 +57,9 @@ public final class BuildCommand implements Callable<Integer> {
     @Option(names = "--dry-run", description = "Say how many blocks would be computed and reused (and which), then stop.")
     private boolean dryRun;
 
-    @Option(names = "--threads", paramLabel = "N", defaultValue = "1",
-            description = "Threads for the engine (default ${DEFAULT-VALUE}); results are the same for any number.")
-    private int threads;
+    @Option(names = "--threads", paramLabel = "N",
+            description = "Threads for the engine (default: the number of processors); results are the same for any number.")
+    private Integer threads;
 
     @Option(names = "--plot", paramLabel = "FILE.png",
             description = "Also plot σ at the table's temperatures and pressures.")
@@ -67,16 +67,17 @@ public final class BuildCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        if (threads < 1) {
+        int threadCount = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+        if (threadCount < 1) {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(),
-                    "--threads: " + threads + " (expected a positive number)");
+                    "--threads: " + threadCount + " (expected a positive number)");
         }
         boolean quiet = root.globalOptions().quiet();
         PrintWriter out = spec.commandLine().getOut();
         TablePlan plan = PlanReader.read(planFile);
         BuildReport report;
         try (Progress progress = Progress.start("build", -1, "points", 1, quiet || dryRun)) {
-            report = TableBuilder.build(plan, CalculatorBlocks.factory(), threads, dryRun, new BuildListener() {
+            report = TableBuilder.build(plan, CalculatorBlocks.factory(), threadCount, dryRun, new BuildListener() {
                 @Override
                 public void sourceStarted(Path source, long fileBytes) {
                     progress.message("ingest " + source.getFileName());
