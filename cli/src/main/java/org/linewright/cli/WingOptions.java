@@ -34,30 +34,16 @@ public final class WingOptions {
             description = "Sub-Lorentzian far wings (chi factor) for CO2 lines broadened by CO2.")
     boolean chiFactor;
 
-    /** Lower bound of the pressure-proportional cutoff, cm⁻¹. */
-    private static final double PRESSURE_RULE_MIN_CM1 = 1.0;
-
     /** The wing treatment these options describe. */
     public WingTreatment treatment() {
-        if (!(cutoffCm1 > 0)) {
-            throw new InputException("--cutoff: " + cutoffCm1 + " (expected a positive distance in cm-1)");
-        }
-        if (hwhmMultiple != null && perAtmCm1 != null) {
-            throw new InputException("--cutoff-hwhm and --cutoff-per-atm: give one cutoff rule, not both");
-        }
         WingCutoff cutoff;
-        if (hwhmMultiple != null) {
-            if (!(hwhmMultiple > 0)) {
-                throw new InputException("--cutoff-hwhm: " + hwhmMultiple + " (expected a positive multiple)");
-            }
-            cutoff = WingCutoff.hwhmMultiple(hwhmMultiple, cutoffCm1);
-        } else if (perAtmCm1 != null) {
-            if (!(perAtmCm1 > 0)) {
-                throw new InputException("--cutoff-per-atm: " + perAtmCm1 + " (expected a positive cm-1 per atm)");
-            }
-            cutoff = WingCutoff.pressureScaled(perAtmCm1, Math.min(PRESSURE_RULE_MIN_CM1, cutoffCm1), cutoffCm1);
-        } else {
-            cutoff = WingCutoff.fixed(cutoffCm1);
+        try {
+            cutoff = WingCutoff.of(cutoffCm1, hwhmMultiple == null ? Double.NaN : hwhmMultiple,
+                    perAtmCm1 == null ? Double.NaN : perAtmCm1);
+        } catch (InputException e) {
+            // The same rules as plans; named here by their options.
+            throw new InputException("--" + e.getMessage().replace("cutoff HWHM multiple", "cutoff-hwhm")
+                    .replace("cutoff per atm", "cutoff-per-atm"));
         }
         return new WingTreatment(cutoff, removePedestal, chiFactor ? ChiFactorKind.PERRIN_HARTMANN_CO2 : ChiFactorKind.NONE);
     }

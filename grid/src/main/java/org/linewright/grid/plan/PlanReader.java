@@ -41,7 +41,8 @@ public final class PlanReader {
             "lines", Set.of("sources"),
             "grid", Set.of("wavenumber", "pressures_bar", "temperatures_K"),
             "background", Set.of(),
-            "profile", Set.of("engine", "tolerance", "shape", "cutoff_cm1", "remove_pedestal", "chi_factor",
+            "profile", Set.of("engine", "tolerance", "shape", "cutoff_cm1", "cutoff_hwhm", "cutoff_per_atm_cm1",
+                    "remove_pedestal", "chi_factor",
                     "threshold"),
             "species", Set.of("molecules", "isotopologues"),
             "partition_sums", Set.of("tables", "molecule_data"),
@@ -273,6 +274,17 @@ public final class PlanReader {
         if (!(cutoff > 0) || !Double.isFinite(cutoff)) {
             throw error("profile.cutoff_cm1", "is " + cutoff, "a positive distance in cm-1");
         }
+        double hwhm = number(toml, "profile.cutoff_hwhm", Double.NaN);
+        double perAtm = number(toml, "profile.cutoff_per_atm_cm1", Double.NaN);
+        if (!Double.isNaN(hwhm) && !Double.isNaN(perAtm)) {
+            throw error("profile.cutoff_hwhm", "and profile.cutoff_per_atm_cm1 are both given", "one cutoff rule");
+        }
+        if (!Double.isNaN(hwhm) && !(hwhm > 0)) {
+            throw error("profile.cutoff_hwhm", "is " + hwhm, "a positive multiple of the line's half width");
+        }
+        if (!Double.isNaN(perAtm) && !(perAtm > 0)) {
+            throw error("profile.cutoff_per_atm_cm1", "is " + perAtm, "a positive distance per atm in cm-1");
+        }
         boolean pedestal = bool("profile.remove_pedestal", false);
         ChiFactorKind chi;
         String chiText = string("profile.chi_factor", "none");
@@ -285,7 +297,7 @@ public final class PlanReader {
         if (!(threshold >= 0) || !Double.isFinite(threshold)) {
             throw error("profile.threshold", "is " + threshold, "an intensity >= 0 in cm/molecule");
         }
-        return new TablePlan.Profile(engine, tolerance, shape, cutoff, pedestal, chi, threshold);
+        return new TablePlan.Profile(engine, tolerance, shape, cutoff, hwhm, perAtm, pedestal, chi, threshold);
     }
 
     private TablePlan.Species species() {

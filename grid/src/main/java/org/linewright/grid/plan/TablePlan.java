@@ -8,6 +8,8 @@ import java.util.Map;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.ChiFactorKind;
+import org.linewright.broadening.wings.WingCutoff;
+import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.partition.TableSpec;
 import org.linewright.ingest.units.PhysicalConstants;
@@ -78,7 +80,13 @@ public record TablePlan(Path planFile, List<Path> sources, WavenumberGrid grid, 
      * @param thresholdCmPerMolecule   lines with S(T) below this are skipped (0: none)
      */
     public record Profile(String engine, double tolerance, LineShapeKind shape, double cutoffCm1,
-                          boolean removePedestal, ChiFactorKind chiFactor, double thresholdCmPerMolecule) {
+                          double cutoffHwhmMultiple, double cutoffPerAtmCm1, boolean removePedestal,
+                          ChiFactorKind chiFactor, double thresholdCmPerMolecule) {
+        /** The wing treatment of this profile: the cutoff rule (capped at {@code cutoffCm1}), pedestal, χ. */
+        public WingTreatment wings() {
+            return new WingTreatment(WingCutoff.of(cutoffCm1, cutoffHwhmMultiple, cutoffPerAtmCm1), removePedestal,
+                    chiFactor);
+        }
     }
 
     /**

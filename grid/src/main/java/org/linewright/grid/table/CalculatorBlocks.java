@@ -7,7 +7,6 @@ import java.util.Map;
 import org.linewright.broadening.background.BackgroundGas;
 import org.linewright.broadening.sources.WidthSource;
 import org.linewright.broadening.sources.WidthSourceTally;
-import org.linewright.broadening.wings.FixedCutoff;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.calc.CrossSectionRequest;
@@ -38,8 +37,7 @@ public final class CalculatorBlocks implements BlockCalculator {
     private CalculatorBlocks(TablePlan plan, List<LineStore> stores, MoleculeRegistry registry, int threads) {
         this.plan = plan;
         this.calculator = new CrossSectionCalculator(stores, registry);
-        this.wings = new WingTreatment(new FixedCutoff(plan.profile().cutoffCm1()), plan.profile().removePedestal(),
-                plan.profile().chiFactor());
+        this.wings = plan.profile().wings();
         this.engine = EngineFactory.create(plan.profile().engine(), threads, wings, plan.profile().tolerance());
         int[] molecules = plan.species().molecules().stream().mapToInt(Integer::intValue).toArray();
         this.selection = new LineSelection(molecules, plan.species().isotopologues().toArray(new int[0][]));

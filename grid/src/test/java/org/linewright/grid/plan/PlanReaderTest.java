@@ -115,6 +115,18 @@ class PlanReaderTest {
     }
 
     @Test
+    void cutoffRulesAreReadAndExclusive() throws IOException {
+        TablePlan hwhm = read(GOOD.replace("cutoff_cm1 = 25.0", "cutoff_cm1 = 25.0\ncutoff_hwhm = 500.0"));
+        assertEquals("voigt-hwhm-multiple", hwhm.profile().wings().cutoff().describe().get("wing.cutoff.rule"));
+        TablePlan perAtm = read(GOOD.replace("cutoff_cm1 = 25.0", "cutoff_cm1 = 25.0\ncutoff_per_atm_cm1 = 5.0"));
+        // d = min(25, max(1, 5 cm-1/atm x 2 atm)) = 10 cm-1 (the documented pressure rule)
+        assertEquals(10.0, perAtm.profile().wings().cutoff().distanceCm1(0.003, 0.1, 2.0), 1e-12);
+        InputException both = assertThrows(InputException.class, () -> read(GOOD.replace("cutoff_cm1 = 25.0",
+                "cutoff_cm1 = 25.0\ncutoff_hwhm = 500.0\ncutoff_per_atm_cm1 = 5.0")));
+        assertTrue(both.getMessage().contains("profile.cutoff_hwhm"), both.getMessage());
+    }
+
+    @Test
     void missingPlanFileIsNamed() {
         InputException e = assertThrows(InputException.class, () -> PlanReader.read(dir.resolve("none.toml")));
         assertTrue(e.getMessage().contains("none.toml"));
