@@ -42,7 +42,6 @@ public final class TableStep implements DemoStep {
         details.add(String.format(Locale.ROOT, "blocks: %d computed, %d reused; %d lines in the stores; %.2f s",
                 report.computed(), report.reused(), report.linesInStores(), report.seconds()));
         details.add("table " + context.outDir().relativize(report.table()) + " sha256 " + report.written().fileSha256());
-        return new StepOutcome(details, List.of(context.outDir().relativize(report.table()),
-                context.outDir().relativize(plot)));
+        return new StepOutcome(details, List.of(report.table(), plot));
     }
 }
