@@ -2,11 +2,14 @@ package org.linewright.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.linewright.broadening.listing.LineListing;
 import org.linewright.broadening.listing.LineListingRequest;
 import org.linewright.broadening.listing.ListingFormat;
+import org.linewright.cli.plot.PlotStyle;
+import org.linewright.cli.plot.StickSpectrumPlot;
 import org.linewright.cli.units.QuantityParser;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.registry.MoleculeRegistry;
@@ -39,6 +42,9 @@ import picocli.CommandLine.Spec;
             "      --background H2=0.85,He=0.15 --format csv --out co-800K.csv"
         })
 public final class LinesCommand implements Callable<Integer> {
+    /** Most lines drawn by --plot (the strongest of a larger selection). */
+    private static final int PLOT_MAX_LINES = 200_000;
+
     @Spec
     private CommandSpec spec;
 
@@ -76,6 +82,11 @@ public final class LinesCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "FILE", description = "Write here instead of standard output (needed for arrow).")
     private Path out;
 
+    @Option(names = "--plot", paramLabel = "FILE.png",
+            description = "Also draw a stick spectrum of the listed lines (S(T) with --temperature, else S(296 K); "
+                    + "at most the 200000 strongest).")
+    private Path plot;
+
     @Mixin
     private BackgroundOptions backgroundOptions;
 
@@ -98,8 +109,18 @@ public final class LinesCommand implements Callable<Integer> {
         double temperatureK = temperature == null ? Double.NaN : QuantityParser.parseTemperature(temperature).kelvin();
         LineListingRequest request = new LineListingRequest(low, high, moleculeId, isotopologue, strongest,
                 temperatureK, backgroundOptions.compositionOrNull(), backgroundOptions.widthOptions());
-        LineListing.Summary summary = LineListing.write(LineStore.open(store), request, registry,
+        LineStore lineStore = LineStore.open(store);
+        LineListing.Summary summary = LineListing.write(lineStore, request, registry,
                 ListingFormat.byName(format), out, spec.commandLine().getOut());
+        if (plot != null) {
+            double[][] sticks = LineListing.sticks(lineStore, request, registry, PLOT_MAX_LINES);
+            if (sticks[0].length == 0) {
+                throw new InputException("--plot: no lines in the selection to draw");
+            }
+            String what = Double.isNaN(temperatureK) ? "S(296 K)" : String.format(Locale.ROOT, "S(%.6g K)", temperatureK);
+            StickSpectrumPlot.write(plot, PlotStyle.of("Line intensities " + what + ": " + store.getFileName()),
+                    List.of(new StickSpectrumPlot.Series(what, sticks[0], sticks[1])), floor(sticks[1]));
+        }
         if (!root.globalOptions().quiet()) {
             PrintWriter err = spec.commandLine().getErr();
             err.printf(Locale.ROOT, "%d line(s) listed of %d in the selection%s%n", summary.linesListed(),
@@ -111,6 +132,15 @@ public final class LinesCommand implements Callable<Integer> {
             err.flush();
         }
         return ExitCodes.OK;
+    }
+
+    /** Bottom of the plot's intensity axis: 10⁻⁹ of the strongest line (the demo's choice). */
+    private static double floor(double[] intensities) {
+        double max = 0;
+        for (double v : intensities) {
+            max = Math.max(max, v);
+        }
+        return max > 0 ? max * 1e-9 : Double.MIN_NORMAL;
     }
 
     private double position(String text) {

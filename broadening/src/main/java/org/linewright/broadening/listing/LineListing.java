@@ -95,6 +95,43 @@ public final class LineListing {
         }
     }
 
+    /**
+     * Positions and intensities of the selected lines — S(T) when the request has a temperature, else S(296 K) —
+     * in wavenumber order, for a stick spectrum. At most {@code maxLines} lines: a larger selection is cut to its
+     * {@code maxLines} strongest.
+     *
+     * @return {wavenumbers in cm⁻¹, intensities in cm/molecule}
+     */
+    public static double[][] sticks(LineStore store, LineListingRequest request, IsotopologueLookup lookup, int maxLines)
+            throws IOException {
+        LineQuery query = query(request).withColumns(LineQuery.CROSS_SECTION_COLUMNS);
+        int limit = request.strongest() > 0 ? Math.min(request.strongest(), maxLines) : maxLines;
+        LineListingRequest ranked = new LineListingRequest(request.lowCm1(), request.highCm1(), request.moleculeId(),
+                request.isotopologue(), limit, request.temperatureK(), null, null);
+        long[] selected = strongestSequence(store, query, ranked, lookup);
+        double[] nu = new double[selected.length];
+        double[] s = new double[selected.length];
+        IsotopologueCache cache = Double.isNaN(request.temperatureK()) ? null
+                : new IsotopologueCache(lookup, request.temperatureK());
+        LineBatch batch = new LineBatch(BATCH);
+        double[] key = new double[BATCH];
+        long seq = 0;
+        int next = 0;
+        try (LineCursor cursor = store.cursor(query)) {
+            while (cursor.read(batch) && next < selected.length) {
+                rankingIntensity(batch, cache, key);
+                for (int i = 0; i < batch.size; i++, seq++) {
+                    if (next < selected.length && selected[next] == seq) {
+                        nu[next] = batch.wavenumberCm1[i];
+                        s[next] = key[i];
+                        next++;
+                    }
+                }
+            }
+        }
+        return new double[][] {Arrays.copyOf(nu, next), Arrays.copyOf(s, next)};
+    }
+
     private static LineQuery query(LineListingRequest r) {
         LineQuery q = LineQuery.all();
         if (Double.isFinite(r.lowCm1()) || Double.isFinite(r.highCm1())) {
