@@ -1,0 +1,316 @@
+package org.linewright.reference.compare;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.TreeMap;
+
+import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
+import org.linewright.ingest.line.TextColumn;
+import org.linewright.ingest.store.LineQuery;
+import org.linewright.ingest.store.LineStore;
+import org.linewright.reference.data.ReferenceLines;
+
+/**
+ * Compares two line lists (line stores) and reports the lines added, removed and changed, field by field.
+ *
+ * <p>Pairing: a line of the old list is paired with the unpaired line of the new list that has the same species
+ * and identical quantum labels (upper/lower global and local) and lies nearest to it within
+ * {@link CompareOptions#matchWindowCm1()}; lines still unpaired are then paired with the nearest unpaired line of
+ * the same species within {@link CompareOptions#nearestToleranceCm1()}. Everything left is removed (old) or
+ * added (new).
+ *
+ * <p>Both stores are sorted by wavenumber, so the comparison is one merge over both with a window: with the old
+ * list at position ν, the new list is held from about ν − W − 2T to ν + W + T (W the window, T the tolerance),
+ * and a line is settled once no line that could still pair with it remains to be read. Memory is bounded by the
+ * lines within that span (plus the listed changes), whatever the lists' length.
+ */
+public final class LineListComparer {
+    /** Fields compared between paired lines: every column but the identity and the record number. */
+    private static final LineColumn[] COMPARED = Arrays.stream(LineColumn.values())
+            .filter(c -> c != LineColumn.MOLECULE && c != LineColumn.ISOTOPOLOGUE && c != LineColumn.SOURCE_LINE)
+            .toArray(LineColumn[]::new);
+
+    private final CompareOptions options;
+
+    public LineListComparer(CompareOptions options) {
+        this.options = Objects.requireNonNull(options, "options");
+    }
+
+    /** Compares {@code oldStore} with {@code newStore}; the names label the report. */
+    public ComparisonReport compare(LineStore oldStore, String oldName, LineStore newStore, String newName)
+            throws IOException {
+        try (LineWindow olds = new LineWindow(oldStore.cursor(LineQuery.all()));
+             LineWindow news = new LineWindow(newStore.cursor(LineQuery.all()))) {
+            Run run = new Run(olds, news);
+            run.execute();
+            return run.report(oldName, newName);
+        }
+    }
+
+    /** One comparison. */
+    private final class Run {
+        private final LineWindow olds;
+        private final LineWindow news;
+        private final double window = options.matchWindowCm1();
+        private final double tolerance = options.nearestToleranceCm1();
+        private long[] pending = new long[64];
+        private int pendingHead;
+        private int pendingTail;
+        private long addedScan;
+        private long oldLines;
+        private long newLines;
+        private long unchanged;
+        private long changed;
+        private long added;
+        private long removed;
+        private final EnumMap<LineColumn, double[]> fieldStats = new EnumMap<>(LineColumn.class);
+        private final TreeMap<String, long[]> bandCounts = new TreeMap<>();
+        private final Map<String, double[]> bandRanges = new TreeMap<>();
+        private final Map<String, Object[]> bandKeys = new TreeMap<>();
+        private final List<LineChange> listed = new ArrayList<>();
+        private final List<FieldChange> scratch = new ArrayList<>();
+
+        Run(LineWindow olds, LineWindow news) {
+            this.olds = olds;
+            this.news = news;
+        }
+
+        void execute() throws IOException {
+            long index = 0;
+            while (true) {
+                if (index == olds.end() && !olds.loadOne()) {
+                    break;
+                }
+                double nu = olds.wavenumber(index);
+                news.loadBeyond(nu + window + tolerance);
+                long partner = labelPartner(index, nu);
+                if (partner >= 0) {
+                    pair(index, partner, LineChange.MatchedBy.QUANTA);
+                } else {
+                    enqueue(index);
+                }
+                settlePending(nu - window - tolerance);
+                settleAdded(nu - window - 2 * tolerance);
+                index++;
+                olds.releaseBefore(pendingHead < pendingTail ? Math.min(pending[pendingHead], index) : index);
+            }
+            oldLines = index;
+            settlePending(Double.POSITIVE_INFINITY);
+            settleAdded(Double.POSITIVE_INFINITY);
+            while (news.loadOne()) {
+                settleAdded(Double.POSITIVE_INFINITY);
+            }
+            newLines = news.end();
+        }
+
+        /** The nearest unpaired new line with the same identity within the window, or −1. */
+        private long labelPartner(long oldIndex, double nu) {
+            LineWindow.Chunk oc = olds.chunk(oldIndex);
+            int or = olds.row(oldIndex);
+            long identity = oc.identity[or];
+            long best = -1;
+            double bestDistance = Double.POSITIVE_INFINITY;
+            long from = news.lowerBound(nu - window);
+            for (long n = from; n < news.end(); n++) {
+                LineWindow.Chunk nc = news.chunk(n);
+                int nr = news.row(n);
+                double d = nc.batch.wavenumberCm1[nr] - nu;
+                if (d > window) {
+                    break;
+                }
+                if (!nc.done[nr] && nc.identity[nr] == identity && Math.abs(d) < bestDistance
+                        && sameIdentity(oc.batch, or, nc.batch, nr)) {
+                    best = n;
+                    bestDistance = Math.abs(d);
+                }
+            }
+            return best;
+        }
+
+        /** Pairs pending old lines below {@code limit} with the nearest unpaired new line, else removes them. */
+        private void settlePending(double limit) {
+            while (pendingHead < pendingTail) {
+                long o = pending[pendingHead];
+                LineWindow.Chunk oc = olds.chunk(o);
+                int or = olds.row(o);
+                double nu = oc.batch.wavenumberCm1[or];
+                if (!(nu < limit)) {
+                    break;
+                }
+                pendingHead++;
+                long best = -1;
+                double bestDistance = Double.POSITIVE_INFINITY;
+                for (long n = news.lowerBound(nu - tolerance); n < news.end(); n++) {
+                    LineWindow.Chunk nc = news.chunk(n);
+                    int nr = news.row(n);
+                    double d = Math.abs(nc.batch.wavenumberCm1[nr] - nu);
+                    if (nc.batch.wavenumberCm1[nr] - nu > tolerance) {
+                        break;
+                    }
+                    if (!nc.done[nr] && d <= tolerance && d < bestDistance
+                            && nc.batch.moleculeId[nr] == oc.batch.moleculeId[or]
+                            && nc.batch.isotopologue[nr] == oc.batch.isotopologue[or]) {
+                        best = n;
+                        bestDistance = d;
+                    }
+                }
+                if (best >= 0) {
+                    pair(o, best, LineChange.MatchedBy.NEAREST);
+                } else {
+                    removed++;
+                    oc.done[or] = true;
+                    record(LineChange.Kind.REMOVED, null, oc.batch, or, null, -1, List.of());
+                }
+            }
+        }
+
+        /** Declares unpaired new lines below {@code limit} added and releases what is settled. */
+        private void settleAdded(double limit) {
+            while (addedScan < news.end()) {
+                LineWindow.Chunk nc = news.chunk(addedScan);
+                int nr = news.row(addedScan);
+                if (!(nc.batch.wavenumberCm1[nr] < limit)) {
+                    break;
+                }
+                if (!nc.done[nr]) {
+                    nc.done[nr] = true;
+                    added++;
+                    record(LineChange.Kind.ADDED, null, null, -1, nc.batch, nr, List.of());
+                }
+                addedScan++;
+            }
+            news.releaseBefore(addedScan);
+        }
+
+        private void enqueue(long index) {
+            if (pendingTail == pending.length) {
+                int live = pendingTail - pendingHead;
+                if (pendingHead > pending.length / 2) {
+                    System.arraycopy(pending, pendingHead, pending, 0, live);
+                } else {
+                    pending = Arrays.copyOfRange(pending, pendingHead, pendingHead + Math.max(64, 2 * pending.length));
+                }
+                pendingHead = 0;
+                pendingTail = live;
+            }
+            pending[pendingTail++] = index;
+        }
+
+        private void pair(long o, long n, LineChange.MatchedBy by) {
+            LineWindow.Chunk oc = olds.chunk(o);
+            LineWindow.Chunk nc = news.chunk(n);
+            int or = olds.row(o);
+            int nr = news.row(n);
+            oc.done[or] = true;
+            nc.done[nr] = true;
+            scratch.clear();
+            for (LineColumn c : COMPARED) {
+                if (c.kind() == LineColumn.Kind.TEXT) {
+                    TextColumn a = c.text(oc.batch);
+                    TextColumn b = c.text(nc.batch);
+                    if (!sameText(a, or, b, nr)) {
+                        scratch.add(new FieldChange(c, Double.NaN, Double.NaN, text(a, or), text(b, nr)));
+                    }
+                } else {
+                    double a = c.doubles(oc.batch)[or];
+                    double b = c.doubles(nc.batch)[nr];
+                    if (!(a == b || (Double.isNaN(a) && Double.isNaN(b)))) {
+                        scratch.add(new FieldChange(c, a, b, null, null));
+                    }
+                }
+            }
+            if (scratch.isEmpty()) {
+                unchanged++;
+                return;
+            }
+            changed++;
+            double at = nc.batch.wavenumberCm1[nr];
+            for (FieldChange f : scratch) {
+                double[] s = fieldStats.computeIfAbsent(f.column(), k -> new double[] {0, Double.NaN, Double.NaN, Double.NaN});
+                s[0]++;
+                if (!f.isText()) {
+                    double abs = Math.abs(f.absoluteChange());
+                    if (!(abs <= s[1])) {
+                        s[1] = abs;
+                        s[3] = at;
+                    }
+                    double rel = Math.abs(f.relativeChange());
+                    if (!(rel <= s[2])) {
+                        s[2] = rel;
+                    }
+                }
+            }
+            record(LineChange.Kind.CHANGED, by, oc.batch, or, nc.batch, nr, scratch);
+        }
+
+        private void record(LineChange.Kind kind, LineChange.MatchedBy by, LineBatch ob, int or, LineBatch nb, int nr,
+                            List<FieldChange> fields) {
+            LineBatch id = nb != null ? nb : ob;
+            int ir = nb != null ? nr : or;
+            String upperGlobal = text(id.upperGlobalQuanta, ir);
+            String lowerGlobal = text(id.lowerGlobalQuanta, ir);
+            double nu = id.wavenumberCm1[ir];
+            String band = String.format(java.util.Locale.ROOT, "%06d/%06d\t%s\t%s", id.moleculeId[ir], id.isotopologue[ir],
+                    ReferenceLines.normalizeLabel(upperGlobal), ReferenceLines.normalizeLabel(lowerGlobal));
+            long[] counts = bandCounts.computeIfAbsent(band, k -> new long[3]);
+            counts[kind.ordinal()]++;
+            double[] range = bandRanges.computeIfAbsent(band, k -> new double[] {nu, nu});
+            range[0] = Math.min(range[0], nu);
+            range[1] = Math.max(range[1], nu);
+            bandKeys.computeIfAbsent(band, k -> new Object[] {id.moleculeId[ir], id.isotopologue[ir],
+                ReferenceLines.normalizeLabel(upperGlobal), ReferenceLines.normalizeLabel(lowerGlobal)});
+            if (listed.size() < options.maxListedChanges()) {
+                listed.add(new LineChange(kind, by, id.moleculeId[ir], id.isotopologue[ir],
+                        ob == null ? Double.NaN : ob.wavenumberCm1[or], nb == null ? Double.NaN : nb.wavenumberCm1[nr],
+                        ob == null ? 0 : ob.sourceLine[or], nb == null ? 0 : nb.sourceLine[nr], upperGlobal, lowerGlobal,
+                        text(id.upperLocalQuanta, ir), text(id.lowerLocalQuanta, ir), fields));
+            }
+        }
+
+        ComparisonReport report(String oldName, String newName) {
+            EnumMap<LineColumn, ComparisonReport.FieldSummary> fields = new EnumMap<>(LineColumn.class);
+            fieldStats.forEach((c, s) -> fields.put(c, new ComparisonReport.FieldSummary((long) s[0], s[1], s[2], s[3])));
+            List<ComparisonReport.BandSummary> bands = new ArrayList<>();
+            for (Map.Entry<String, long[]> e : bandCounts.entrySet()) {
+                Object[] k = bandKeys.get(e.getKey());
+                double[] range = bandRanges.get(e.getKey());
+                long[] c = e.getValue();
+                bands.add(new ComparisonReport.BandSummary((int) k[0], (int) k[1], (String) k[2], (String) k[3],
+                        c[LineChange.Kind.ADDED.ordinal()], c[LineChange.Kind.REMOVED.ordinal()],
+                        c[LineChange.Kind.CHANGED.ordinal()], range[0], range[1]));
+            }
+            List<LineChange> sorted = new ArrayList<>(listed);
+            sorted.sort(Comparator.comparingDouble(LineChange::wavenumberCm1));
+            return new ComparisonReport(oldName, newName, options, oldLines, newLines, unchanged, changed, added,
+                    removed, fields, bands, sorted);
+        }
+    }
+
+    private static boolean sameIdentity(LineBatch a, int ar, LineBatch b, int br) {
+        return a.moleculeId[ar] == b.moleculeId[br] && a.isotopologue[ar] == b.isotopologue[br]
+                && sameText(a.upperGlobalQuanta, ar, b.upperGlobalQuanta, br)
+                && sameText(a.lowerGlobalQuanta, ar, b.lowerGlobalQuanta, br)
+                && sameText(a.upperLocalQuanta, ar, b.upperLocalQuanta, br)
+                && sameText(a.lowerLocalQuanta, ar, b.lowerLocalQuanta, br);
+    }
+
+    private static boolean sameText(TextColumn a, int ar, TextColumn b, int br) {
+        int al = a.rows() > ar ? a.length(ar) : 0;
+        int bl = b.rows() > br ? b.length(br) : 0;
+        if (al != bl) {
+            return false;
+        }
+        return al == 0 || Arrays.equals(a.bytes(), a.start(ar), a.start(ar) + al, b.bytes(), b.start(br), b.start(br) + bl);
+    }
+
+    private static String text(TextColumn c, int r) {
+        return c.rows() > r ? c.get(r) : "";
+    }
+}
