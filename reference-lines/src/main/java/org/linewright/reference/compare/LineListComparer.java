@@ -29,14 +29,11 @@ import org.linewright.reference.data.ReferenceLines;
  * <p>Both stores are sorted by wavenumber, so the comparison is one merge over both with a window: with the old
  * list at position ν, the new list is held from about ν − W − 2T to ν + W + T (W the window, T the tolerance),
  * and a line is settled once no line that could still pair with it remains to be read. Memory is bounded by the
- * lines within that span (plus the listed changes), whatever the lists' length.
+ * lines within that span (plus the listed changes), whatever the lists' length. Lines of the new list are found by
+ * their labels through a hash index of the window, so the cost per line is constant when labels are unique (lists
+ * without labels fall back to a scan of the lines of equal, empty labels within the window).
  */
 public final class LineListComparer {
-    /** Fields compared between paired lines: every column but the identity and the record number. */
-    private static final LineColumn[] COMPARED = Arrays.stream(LineColumn.values())
-            .filter(c -> c != LineColumn.MOLECULE && c != LineColumn.ISOTOPOLOGUE && c != LineColumn.SOURCE_LINE)
-            .toArray(LineColumn[]::new);
-
     private final CompareOptions options;
 
     public LineListComparer(CompareOptions options) {
@@ -117,18 +114,19 @@ public final class LineListComparer {
             long identity = oc.identity[or];
             long best = -1;
             double bestDistance = Double.POSITIVE_INFINITY;
-            long from = news.lowerBound(nu - window);
-            for (long n = from; n < news.end(); n++) {
+            for (long n = news.newestWithIdentity(identity); n >= 0; n = news.previousSame(n)) {
                 LineWindow.Chunk nc = news.chunk(n);
                 int nr = news.row(n);
-                double d = nc.batch.wavenumberCm1[nr] - nu;
-                if (d > window) {
+                double signed = nc.batch.wavenumberCm1[nr] - nu;
+                if (signed < -window) {
+                    // the chain runs from newer to older lines, i.e. downwards in wavenumber: none nearer follows
                     break;
                 }
-                if (!nc.done[nr] && nc.identity[nr] == identity && Math.abs(d) < bestDistance
-                        && sameIdentity(oc.batch, or, nc.batch, nr)) {
+                double d = Math.abs(signed);
+                if (!nc.done[nr] && d <= window && (d < bestDistance || (d == bestDistance && n < best))
+                        && nc.identity[nr] == identity && sameIdentity(oc.batch, or, nc.batch, nr)) {
                     best = n;
-                    bestDistance = Math.abs(d);
+                    bestDistance = d;
                 }
             }
             return best;
@@ -211,21 +209,23 @@ public final class LineListComparer {
             oc.done[or] = true;
             nc.done[nr] = true;
             scratch.clear();
-            for (LineColumn c : COMPARED) {
-                if (c.kind() == LineColumn.Kind.TEXT) {
-                    TextColumn a = c.text(oc.batch);
-                    TextColumn b = c.text(nc.batch);
-                    if (!sameText(a, or, b, nr)) {
-                        scratch.add(new FieldChange(c, Double.NaN, Double.NaN, text(a, or), text(b, nr)));
-                    }
-                } else {
-                    double a = c.doubles(oc.batch)[or];
-                    double b = c.doubles(nc.batch)[nr];
-                    if (!(a == b || (Double.isNaN(a) && Double.isNaN(b)))) {
-                        scratch.add(new FieldChange(c, a, b, null, null));
-                    }
+            for (int k = 0; k < LineWindow.NUMERIC_COMPARED.length; k++) {
+                double a = oc.numeric[k][or];
+                double b = nc.numeric[k][nr];
+                if (!(a == b || (Double.isNaN(a) && Double.isNaN(b)))) {
+                    scratch.add(new FieldChange(LineWindow.NUMERIC_COMPARED[k], a, b, null, null));
                 }
             }
+            for (int k = 0; k < LineWindow.TEXT_COMPARED.length; k++) {
+                TextColumn a = oc.text[k];
+                TextColumn b = nc.text[k];
+                if (!sameText(a, or, b, nr)) {
+                    scratch.add(new FieldChange(LineWindow.TEXT_COMPARED[k], Double.NaN, Double.NaN, text(a, or),
+                            text(b, nr)));
+                }
+            }
+            // report fields in column order
+            scratch.sort(java.util.Comparator.comparing(FieldChange::column));
             if (scratch.isEmpty()) {
                 unchanged++;
                 return;

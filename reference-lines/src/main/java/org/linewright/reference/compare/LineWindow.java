@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.line.TextColumn;
 import org.linewright.ingest.store.LineCursor;
 
@@ -38,7 +39,38 @@ final class LineWindow implements AutoCloseable {
         final LineBatch batch = new LineBatch(CHUNK_ROWS);
         final long[] identity = new long[CHUNK_ROWS];
         final boolean[] done = new boolean[CHUNK_ROWS];
+        /** Global index of the previous line held with the same identity hash, or −1. */
+        final long[] previousSame = new long[CHUNK_ROWS];
+        /** The batch's arrays of {@link #NUMERIC_COMPARED}, looked up once (the batch's arrays never change). */
+        final double[][] numeric = new double[NUMERIC_COMPARED.length][];
+        /** The batch's columns of {@link #TEXT_COMPARED}. */
+        final TextColumn[] text = new TextColumn[TEXT_COMPARED.length];
+
+        Chunk() {
+            for (int k = 0; k < numeric.length; k++) {
+                numeric[k] = NUMERIC_COMPARED[k].doubles(batch);
+            }
+            for (int k = 0; k < text.length; k++) {
+                text[k] = TEXT_COMPARED[k].text(batch);
+            }
+        }
     }
+
+    /** Numeric fields compared between paired lines: every double column. */
+    static final LineColumn[] NUMERIC_COMPARED = java.util.Arrays.stream(LineColumn.values())
+            .filter(c -> c.kind() == LineColumn.Kind.DOUBLE).toArray(LineColumn[]::new);
+    /** Text fields compared between paired lines: every text column. */
+    static final LineColumn[] TEXT_COMPARED = java.util.Arrays.stream(LineColumn.values())
+            .filter(c -> c.kind() == LineColumn.Kind.TEXT).toArray(LineColumn[]::new);
+
+    /*
+     * Identity index: an open-addressing table (linear probing) from identity hash to the global index of the
+     * newest line with that hash; older lines with the hash follow through Chunk.previousSame. Entries of released
+     * lines go stale and are skipped; the table is rebuilt from the lines held once stale entries could dominate.
+     */
+    private long[] tableKeys = new long[1 << 12];
+    private long[] tableHeads = filled(1 << 12);
+    private int tableEntries;
 
     /** Loads batches until a line beyond {@code wavenumberCm1} is held or the list ends. */
     void loadBeyond(double wavenumberCm1) throws IOException {
@@ -63,9 +95,77 @@ final class LineWindow implements AutoCloseable {
             c.done[r] = false;
         }
         chunks.addLast(c);
+        long first = end;
         end += c.batch.size;
         viewStale = true;
+        if (2L * tableEntries + 2L * c.batch.size > tableKeys.length) {
+            rebuildIndex(first);
+        }
+        for (int r = 0; r < c.batch.size; r++) {
+            c.previousSame[r] = insert(c.identity[r], first + r);
+        }
         return true;
+    }
+
+    /** The newest held line with this identity hash, or −1; older ones follow with {@link #previousSame}. */
+    long newestWithIdentity(long identity) {
+        int mask = tableKeys.length - 1;
+        for (int slot = spread(identity) & mask; tableHeads[slot] >= 0; slot = (slot + 1) & mask) {
+            if (tableKeys[slot] == identity) {
+                long head = tableHeads[slot];
+                return head >= base ? head : -1;
+            }
+        }
+        return -1;
+    }
+
+    /** The next older held line with the same identity hash as line {@code index}, or −1. */
+    long previousSame(long index) {
+        long p = chunk(index).previousSame[row(index)];
+        return p >= base ? p : -1;
+    }
+
+    /** Inserts a line; returns the previous head for its hash (or −1). */
+    private long insert(long identity, long index) {
+        int mask = tableKeys.length - 1;
+        int slot = spread(identity) & mask;
+        while (tableHeads[slot] >= 0) {
+            if (tableKeys[slot] == identity) {
+                long previous = tableHeads[slot];
+                tableHeads[slot] = index;
+                return previous;
+            }
+            slot = (slot + 1) & mask;
+        }
+        tableKeys[slot] = identity;
+        tableHeads[slot] = index;
+        tableEntries++;
+        return -1;
+    }
+
+    /** Rebuilds the table from the held lines before {@code upTo}, sized for them and the next chunk. */
+    private void rebuildIndex(long upTo) {
+        long held = Math.max(0, upTo - base);
+        int capacity = Integer.highestOneBit((int) Math.min(1 << 30, Math.max(1 << 12, 4 * (held + CHUNK_ROWS)))) * 2;
+        tableKeys = new long[capacity];
+        tableHeads = filled(capacity);
+        tableEntries = 0;
+        for (long g = base; g < upTo; g++) {
+            Chunk c = chunk(g);
+            int r = row(g);
+            c.previousSame[r] = insert(c.identity[r], g);
+        }
+    }
+
+    private static long[] filled(int n) {
+        long[] a = new long[n];
+        java.util.Arrays.fill(a, -1L);
+        return a;
+    }
+
+    private static int spread(long h) {
+        // the identity is already a 64-bit hash: fold its halves for the table index
+        return (int) (h ^ (h >>> 32));
     }
 
     boolean exhausted() {
