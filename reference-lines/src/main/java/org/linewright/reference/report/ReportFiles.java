@@ -7,6 +7,8 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.util.UUID;
 
 /** Writes a report file atomically: under a temporary name beside it, then renamed over the target. */
 public final class ReportFiles {
@@ -23,9 +25,11 @@ public final class ReportFiles {
     public static void write(Path file, Content content) throws IOException {
         Path dir = file.toAbsolutePath().getParent();
         Files.createDirectories(dir);
-        Path temp = Files.createTempFile(dir, "." + file.getFileName() + ".", ".partial");
+        // a fresh name beside the target (not createTempFile, whose owner-only permissions would stick to the report)
+        Path temp = dir.resolve("." + file.getFileName() + "." + UUID.randomUUID() + ".partial");
         try {
-            try (Writer out = Files.newBufferedWriter(temp, StandardCharsets.UTF_8)) {
+            try (Writer out = Files.newBufferedWriter(temp, StandardCharsets.UTF_8, StandardOpenOption.CREATE_NEW,
+                    StandardOpenOption.WRITE)) {
                 content.writeTo(out);
             }
             try {
