@@ -131,6 +131,21 @@ class VerifyCompareCommandsTest {
         assertTrue(same.out().contains("0 changed, 0 added, 0 removed"), same.out());
     }
 
+    /** Line stores written by {@code linewright ingest} are verified and compared as they are. */
+    @Test
+    void storesAreAcceptedAsTheyAre() {
+        Path store = temp.resolve("store");
+        Run ingest = run("-q", "ingest", sample("sample_CO2.par").toString(), "--store", store.toString());
+        assertEquals(ExitCodes.OK, ingest.code(), ingest.err());
+        Run verify = run("verify", store.toString(), "--format", "csv");
+        assertEquals(ExitCodes.OK, verify.code(), verify.err() + verify.out());
+        // CO2 sample: 5492 records (samples README)
+        assertTrue(verify.out().contains("summary,passed,,,,,lines,5492,"), verify.out());
+        Run compare = run("compare", store.toString(), sample("sample_CO2.par").toString());
+        assertEquals(ExitCodes.OK, compare.code(), compare.err() + compare.out());
+        assertTrue(compare.out().contains("5492 unchanged, 0 changed, 0 added, 0 removed"), compare.out());
+    }
+
     @Test
     void compareBadInputIsOneLineAndExitCode2() {
         assertOneErrorLine(run("compare", temp.resolve("a.par").toString(), temp.resolve("b.par").toString()));
