@@ -43,6 +43,7 @@ public final class VerificationReportWriter {
     private static void text(VerificationReport r, Writer out) throws IOException {
         StringBuilder b = new StringBuilder();
         line(b, "linewright verify: %s", r.subject());
+        line(b, "sources: %s (line numbers below are record numbers in the source files)", String.join(", ", r.sources()));
         line(b, "lines checked: %d", r.lines());
         line(b, "result: %s", r.passed() ? "PASSED (no check failed)" : "FAILED (" + r.totalFindings() + " finding(s))");
         line(b, "");
@@ -124,6 +125,11 @@ public final class VerificationReportWriter {
         StringBuilder b = new StringBuilder("{\n");
         b.append("  \"subject\": ").append(json(r.subject())).append(",\n");
         b.append("  \"passed\": ").append(r.passed()).append(",\n");
+        b.append("  \"sources\": [");
+        for (int i = 0; i < r.sources().size(); i++) {
+            b.append(i == 0 ? "" : ", ").append(json(r.sources().get(i)));
+        }
+        b.append("],\n");
         b.append("  \"lines\": ").append(r.lines()).append(",\n");
         b.append("  \"tolerances\": {\"relation\": ").append(jsonNumber(r.options().relationTolerance()))
                 .append(", \"registry\": ").append(jsonNumber(r.options().registryTolerance()))

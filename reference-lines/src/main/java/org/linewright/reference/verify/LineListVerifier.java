@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.Objects;
 import java.util.TreeMap;
 
+import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
@@ -19,6 +20,7 @@ import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineCursor;
 import org.linewright.ingest.store.LineQuery;
 import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.store.SourceInfo;
 import org.linewright.reference.data.ReferenceLine;
 import org.linewright.reference.data.ReferenceLines;
 
@@ -90,7 +92,7 @@ public final class LineListVerifier {
                 run.accept(batch);
             }
         }
-        return run.finish(subject);
+        return run.finish(subject, store.sources().stream().map(SourceInfo::name).toList());
     }
 
     /**
@@ -278,7 +280,7 @@ public final class LineListVerifier {
             }
         }
 
-        VerificationReport finish(String subject) {
+        VerificationReport finish(String subject, List<String> sources) {
             List<ReferenceMatch> matches = new ArrayList<>();
             for (RefState s : refs) {
                 Accumulator acc = species.get(((long) s.ref.moleculeId() << 32) | (s.ref.isotopologue() & 0xffffffffL));
@@ -312,7 +314,7 @@ public final class LineListVerifier {
                     }
                 }
             }
-            return new VerificationReport(subject, lines, options, summaries, matches, counts, findings, residuals);
+            return new VerificationReport(subject, sources, lines, options, summaries, matches, counts, findings, residuals);
         }
     }
 
@@ -320,8 +322,8 @@ public final class LineListVerifier {
 
     private static LineColumn[] foreignWidthColumns() {
         // indexed like LineBatch.foreignWidthCm1PerAtm (Broadener ordinal)
-        LineColumn[] c = new LineColumn[org.linewright.ingest.line.Broadener.values().length];
-        for (org.linewright.ingest.line.Broadener b : org.linewright.ingest.line.Broadener.values()) {
+        LineColumn[] c = new LineColumn[Broadener.values().length];
+        for (Broadener b : Broadener.values()) {
             c[b.ordinal()] = LineColumn.valueOf(b.name() + "_WIDTH");
         }
         return c;
@@ -548,19 +550,9 @@ public final class LineListVerifier {
         }
     }
 
+    /** Formats a message; numbers appear in Java's shortest round-trip form. */
     private static String fmt(String format, Object... args) {
-        Object[] shown = args.clone();
-        for (int i = 0; i < shown.length; i++) {
-            if (shown[i] instanceof Double d) {
-                shown[i] = number(d);
-            }
-        }
-        return String.format(Locale.ROOT, format, shown);
-    }
-
-    /** A number in the shortest form that round-trips (Java's {@link Double#toString}). */
-    static String number(double v) {
-        return Double.toString(v);
+        return String.format(Locale.ROOT, format, args);
     }
 
     /** The registry giving Q(296 K) and abundances. */

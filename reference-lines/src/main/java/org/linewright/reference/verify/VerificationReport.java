@@ -9,6 +9,7 @@ import java.util.Map;
  * Everything {@link LineListVerifier} found in one line list.
  *
  * @param subject            what was verified (a store directory or source names)
+ * @param sources            the store's source names (finding line numbers are record numbers in these files)
  * @param lines              lines checked
  * @param options            the tolerances used
  * @param isotopologues      per-isotopologue results of the intensity/Einstein-A check, by molecule and number
@@ -18,11 +19,12 @@ import java.util.Map;
  *                           {@link VerifyOptions#maxListedFindings()})
  * @param relationResiduals  S/S(A) − 1 over wavenumber, thinned for plotting
  */
-public record VerificationReport(String subject, long lines, VerifyOptions options,
+public record VerificationReport(String subject, List<String> sources, long lines, VerifyOptions options,
                                  List<IsotopologueSummary> isotopologues, List<ReferenceMatch> references,
                                  Map<Check, Long> findingCounts, List<Finding> findings,
                                  ResidualSeries relationResiduals) {
     public VerificationReport {
+        sources = List.copyOf(sources);
         isotopologues = List.copyOf(isotopologues);
         references = List.copyOf(references);
         EnumMap<Check, Long> ordered = new EnumMap<>(Check.class);
