@@ -12,10 +12,9 @@ import java.util.List;
  * The demo: runs a list of {@link DemoStep}s in order on the shipped synthetic data, times each, and writes
  * {@code report.txt} and {@code report.html} into the output folder.
  *
- * <p>{@link #availableSteps()} lists the steps this build can run. Integration point: when the line readers,
- * the line store and the table builder are wired in, a step reading the staged lists into the line store replaces
- * {@link SyntheticLinesStep}, and a step building the table named in {@code plan.toml} follows it; the report
- * picks both up without change.
+ * <p>{@link #availableSteps()} lists the steps this build runs, in order: stage the shipped synthetic data,
+ * ingest it into a line store, draw the stick spectrum (and, with the table builder, build and plot the plan's
+ * table).
  */
 public final class Demo {
     private final Path demoDir;
@@ -38,7 +37,7 @@ public final class Demo {
 
     /** The steps this build runs: stage the data, take the synthetic lines, draw the stick spectrum. */
     public static List<DemoStep> availableSteps() {
-        return List.of(new StageDataStep(), new SyntheticLinesStep(), new StickSpectrumStep());
+        return List.of(new StageDataStep(), new IngestStep(), new StickSpectrumStep());
     }
 
     /**

@@ -31,8 +31,8 @@ class DemoTest {
         assertTrue(html.contains("<img src=\"plots/stick-spectrum.png\""), html);
         // the plan's parameters are reported (values written in demo/plan.toml)
         assertTrue(text.contains("grid.temperatures_K") && text.contains("[500.0, 800.0, 1100.0]"), text);
-        // 804 CO lines (2 isotopologues x 2 bands x (101 R + 100 P)) and 161 CO2 lines (81 R + 80 P)
-        assertTrue(text.contains("12C16O: 402 lines") && text.contains("12C16O2: 161 lines"), text);
+        // 12C16O: 3 bands x (101 R + 100 P); 12C16O2: nu3 (81 R + 80 P) and the hot band (160 R + 159 P + 80 Q)
+        assertTrue(text.contains("12C16O: 603 lines") && text.contains("12C16O2: 560 lines"), text);
         assertTrue(Files.isRegularFile(out.resolve("data/synthetic-co.par.bz2")));
         var image = ImageIO.read(out.resolve(StickSpectrumStep.PLOT_FILE).toFile());
         assertEquals(1200, image.getWidth());

@@ -4,6 +4,10 @@ package org.linewright.grid.engine;
  * Lines ready for a cross-section engine at one (p, T): pressure-shifted centres, intensities S(T), Doppler and
  * Lorentz half widths, in ascending order of centre. Primitive arrays, reused chunk after chunk; {@link #size}
  * rows valid. Built from the line store by the cross-section calculator, consumed by every engine.
+ *
+ * <p>The line shape travels in the widths: a Doppler-only computation has γL = 0 on every row, a Lorentz-only one
+ * αD = 0; engines evaluate the Voigt profile, which reduces exactly to the pure shape in those limits. Centres are
+ * ascending before the shift is applied (the shift may swap neighbours closer than their shift difference).
  */
 public final class LineChunk {
     /** Number of valid rows. */

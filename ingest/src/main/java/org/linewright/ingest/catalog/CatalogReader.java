@@ -1,16 +1,16 @@
 package org.linewright.ingest.catalog;
 
-import java.io.IOException;
 import java.io.InputStream;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.source.DuplicateCounter;
+import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
-import org.linewright.ingest.source.LineReader;
 import org.linewright.ingest.source.ReadOptions;
-import org.linewright.ingest.text.AsciiLineReader;
-import org.linewright.ingest.text.AsciiNumbers;
+import org.linewright.ingest.source.RecordPerLineReader;
+import org.linewright.ingest.text.DecimalParser;
 import org.linewright.ingest.units.PhysicalConstants;
 
 /**
@@ -50,7 +50,7 @@ import org.linewright.ingest.units.PhysicalConstants;
  * ({@code A23} = 1023); a quantum number above 99 is written with a capital letter for the tens
  * ({@code A0} = 100, {@code B5} = 115) and one below −9 with a small letter ({@code a0} = −10, {@code b3} = −23).
  */
-public final class CatalogReader implements LineReader {
+public final class CatalogReader extends RecordPerLineReader implements DuplicateCounter {
     /** Temperature of the catalog's intensities, K. */
     public static final double CATALOG_TEMPERATURE_K = 300.0;
     private static final double HZ_PER_MHZ = 1e6;
@@ -62,9 +62,6 @@ public final class CatalogReader implements LineReader {
     private static final int MIN_RECORD_LENGTH = 55;
     private static final int QUANTA_PER_STATE = 6;
 
-    private final AsciiLineReader lines;
-    private final String fileName;
-    private final ReadOptions options;
     private final boolean intensitiesIncludeAbundance;
     private final byte[] upperQuanta = new byte[QUANTA_PER_STATE * 5];
     private final byte[] lowerQuanta = new byte[QUANTA_PER_STATE * 5];
@@ -76,8 +73,7 @@ public final class CatalogReader implements LineReader {
     private double cachedQ296;
     private double cachedQ300;
 
-    private long recordsRead;
-    private long recordsRejected;
+    private final DuplicateTracker duplicates = new DuplicateTracker();
 
     /** A reader for catalogs whose intensities exclude the natural abundance (the usual case). */
     public CatalogReader(InputStream in, String fileName, ReadOptions options) {
@@ -89,34 +85,12 @@ public final class CatalogReader implements LineReader {
      *                                    abundance (then S is not multiplied by it)
      */
     public CatalogReader(InputStream in, String fileName, ReadOptions options, boolean intensitiesIncludeAbundance) {
-        this.lines = new AsciiLineReader(in);
-        this.fileName = fileName;
-        this.options = options;
+        super(in, fileName, options);
         this.intensitiesIncludeAbundance = intensitiesIncludeAbundance;
     }
 
     @Override
-    public boolean read(LineBatch batch) throws IOException {
-        batch.clear();
-        while (!batch.isFull() && lines.next()) {
-            if (AsciiNumbers.isBlank(lines.buffer(), lines.lineStart(), lines.lineEnd())) {
-                continue;
-            }
-            recordsRead++;
-            try {
-                parse(batch);
-            } catch (LineFormatException e) {
-                if (!options.lenient()) {
-                    throw e;
-                }
-                recordsRejected++;
-                options.rejects().reject(fileName, lines.lineNumber(), lines.lineText(), e.reason());
-            }
-        }
-        return batch.size > 0;
-    }
-
-    private void parse(LineBatch batch) {
+    protected LineFormatException parseRecord(LineBatch batch, int row) {
         byte[] b = lines.buffer();
         int base = lines.lineStart();
         int length = lines.lineEnd() - base;
@@ -132,12 +106,12 @@ public final class CatalogReader implements LineReader {
             throw error(b, base, 32, 41, "ELO", "a non-negative energy in cm-1");
         }
         int gUpper = decodeDegeneracy(b, base);
-        long tag = AsciiNumbers.parseLong(b, base + 44, base + 51);
-        if (tag == AsciiNumbers.NOT_AN_INTEGER || tag == 0 || Math.abs(tag) > 9_999_999) {
+        long tag = DecimalParser.parseInt(b, base + 44, base + 51);
+        if (tag == DecimalParser.NOT_AN_INTEGER || tag == 0 || Math.abs(tag) > 9_999_999) {
             throw error(b, base, 45, 51, "TAG", "I7 species tag (negative: measured frequency)");
         }
-        long qnfmt = AsciiNumbers.parseLong(b, base + 51, base + 55);
-        if (qnfmt == AsciiNumbers.NOT_AN_INTEGER || qnfmt < 0) {
+        long qnfmt = DecimalParser.parseInt(b, base + 51, base + 55);
+        if (qnfmt == DecimalParser.NOT_AN_INTEGER || qnfmt < 0) {
             throw error(b, base, 52, 55, "QNFMT", "I4 quantum-number format code");
         }
         int perState = (int) (qnfmt % 10);
@@ -168,7 +142,6 @@ public final class CatalogReader implements LineReader {
         int lowerCount = decodeQuanta(b, base, 68, perState, length);
         int lowerJ = decoded[0];
         int lowerLength = writeQuanta(lowerCount, lowerQuanta);
-        int row = batch.size;
         batch.upperLocalQuanta.append(upperQuanta, 0, upperLength);
         batch.lowerLocalQuanta.append(lowerQuanta, 0, lowerLength);
 
@@ -200,7 +173,8 @@ public final class CatalogReader implements LineReader {
         }
         batch.referenceCodes.append(b, tagStart, tagEnd - tagStart);
         batch.lineMixingFlag.appendEmpty();
-        batch.size++;
+        duplicates.offer(batch, row);
+        return null;
     }
 
     /** Registry ids, abundance and Q(296), Q(300) of a species tag, cached (a catalog file is usually one species). */
@@ -229,7 +203,7 @@ public final class CatalogReader implements LineReader {
     }
 
     private double number(byte[] b, int base, int firstColumn, int lastColumn, String field, String expected) {
-        double v = AsciiNumbers.parseDouble(b, base + firstColumn - 1, base + lastColumn);
+        double v = DecimalParser.parse(b, base + firstColumn - 1, base + lastColumn);
         if (Double.isNaN(v) || Double.isInfinite(v)) {
             throw error(b, base, firstColumn, lastColumn, field, expected);
         }
@@ -246,12 +220,12 @@ public final class CatalogReader implements LineReader {
         }
         int value;
         if (i < to && b[i] >= 'A' && b[i] <= 'Z') {
-            long rest = AsciiNumbers.parseLong(b, i + 1, to);
-            value = rest == AsciiNumbers.NOT_AN_INTEGER || rest < 0 || to - (i + 1) != 2
+            long rest = DecimalParser.parseInt(b, i + 1, to);
+            value = rest == DecimalParser.NOT_AN_INTEGER || rest < 0 || to - (i + 1) != 2
                     ? -1 : (b[i] - 'A' + 10) * 100 + (int) rest;
         } else {
-            long v = AsciiNumbers.parseLong(b, from, to);
-            value = v == AsciiNumbers.NOT_AN_INTEGER ? -1 : (int) v;
+            long v = DecimalParser.parseInt(b, from, to);
+            value = v == DecimalParser.NOT_AN_INTEGER ? -1 : (int) v;
         }
         if (value <= 0) {
             throw error(b, base, 42, 44, "GUP", "a positive I3 degeneracy (letter for the hundreds above 999)");
@@ -329,23 +303,14 @@ public final class CatalogReader implements LineReader {
         return new LineFormatException(fileName, lines.lineNumber(), firstColumn, lastColumn, field, text, expected);
     }
 
+    /** Kept lines identical in molecule, isotopologue, wavenumber and the four quanta texts to the line before. */
     @Override
-    public long recordsRead() {
-        return recordsRead;
-    }
-
-    @Override
-    public long recordsRejected() {
-        return recordsRejected;
+    public long duplicatesSeen() {
+        return duplicates.duplicates();
     }
 
     @Override
     public LineFormat format() {
         return LineFormat.CATALOG;
-    }
-
-    @Override
-    public void close() throws IOException {
-        lines.close();
     }
 }

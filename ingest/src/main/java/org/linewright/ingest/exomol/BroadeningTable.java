@@ -4,8 +4,8 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.util.Arrays;
 import org.linewright.ingest.source.LineFormatException;
-import org.linewright.ingest.text.AsciiLineReader;
-import org.linewright.ingest.text.AsciiNumbers;
+import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * Lorentz half widths γ (cm⁻¹/atm at 296 K) and temperature exponents n, γ(T) = γ(296 K)·(296/T)ⁿ, of one
@@ -121,19 +121,18 @@ public final class BroadeningTable {
         double[] n = new double[256];
         long[] lineOf = new long[256];
         int rows = 0;
-        try (AsciiLineReader lines = new AsciiLineReader(in)) {
+        try (ByteLineScanner lines = new ByteLineScanner(in)) {
             int[] start = new int[4];
             int[] end = new int[4];
             while (lines.next()) {
                 byte[] b = lines.buffer();
-                int base = lines.lineStart();
-                int count = Tokens.split(b, base, lines.lineEnd(), start, end);
+                int count = lines.splitOnBlanks(start, end);
                 if (count == 0 || b[start[0]] == '#') {
                     continue;
                 }
                 String code = new String(b, start[0], end[0] - start[0], java.nio.charset.StandardCharsets.ISO_8859_1);
                 if (!code.equals("a0") && !code.equals("a1")) {
-                    throw Tokens.error(fileName, lines, base, start[0], end[0], "code",
+                    throw LineFormatException.atField(fileName, lines, start[0], end[0], "code",
                             "a0 or a1 (broadening by J'' only)");
                 }
                 if (count < 3) {
@@ -145,14 +144,14 @@ public final class BroadeningTable {
                             lines.lineText(), "at most one quantum number (J''); broadening by further quantum "
                             + "numbers is not supported");
                 }
-                double width = AsciiNumbers.parseDouble(b, start[1], end[1]);
+                double width = DecimalParser.parse(b, start[1], end[1]);
                 if (!(width >= 0) || Double.isInfinite(width)) {
-                    throw Tokens.error(fileName, lines, base, start[1], end[1], "gamma",
+                    throw LineFormatException.atField(fileName, lines, start[1], end[1], "gamma",
                             "a non-negative number in cm-1/atm");
                 }
-                double exp = AsciiNumbers.parseDouble(b, start[2], end[2]);
+                double exp = DecimalParser.parse(b, start[2], end[2]);
                 if (Double.isNaN(exp) || Double.isInfinite(exp)) {
-                    throw Tokens.error(fileName, lines, base, start[2], end[2], "n", "a number");
+                    throw LineFormatException.atField(fileName, lines, start[2], end[2], "n", "a number");
                 }
                 if (count == 3) {
                     if (!code.equals("a0")) {
@@ -167,9 +166,9 @@ public final class BroadeningTable {
                     defaultN = exp;
                     continue;
                 }
-                double jValue = AsciiNumbers.parseDouble(b, start[3], end[3]);
+                double jValue = DecimalParser.parse(b, start[3], end[3]);
                 if (!(jValue >= 0) || Double.isInfinite(jValue) || jValue * 2 != Math.rint(jValue * 2)) {
-                    throw Tokens.error(fileName, lines, base, start[3], end[3], "J''",
+                    throw LineFormatException.atField(fileName, lines, start[3], end[3], "J''",
                             "an integer or half-integer J'' >= 0");
                 }
                 if (rows == j.length) {

@@ -4,7 +4,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.util.Locale;
 import org.linewright.ingest.source.LineFormatException;
-import org.linewright.ingest.text.AsciiLineReader;
+import org.linewright.ingest.text.ByteLineScanner;
 
 /**
  * What the reader takes from a {@code .def} file: which optional numeric columns follow J in the states file.
@@ -29,7 +29,7 @@ record ExomolDefinition(boolean uncertainty, boolean lifetime, boolean landeFact
         boolean unc = false;
         boolean life = false;
         boolean lande = false;
-        try (AsciiLineReader lines = new AsciiLineReader(in)) {
+        try (ByteLineScanner lines = new ByteLineScanner(in)) {
             while (lines.next()) {
                 String line = lines.lineText();
                 int hash = line.indexOf('#');

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import org.linewright.ingest.source.LineFormatException;
+import org.linewright.ingest.source.SourceInput;
 
 /**
  * The files of one state/transition set, found from any one of them. In the directory of the given file:
@@ -21,7 +22,8 @@ import org.linewright.ingest.source.LineFormatException;
  *   <li>{@code NAME.pf} — the partition function (optional), {@code NAME.def} — the definition (optional);</li>
  *   <li>{@code ISO__GAS.broad} or {@code NAME__GAS.broad} — broadening by gas GAS (optional, any number),</li>
  * </ul>
- * each possibly with a compression suffix ({@code .bz2 .gz .xz .zst .zstd}). NAME is {@code ISO__DATASET}, and
+ * each possibly with a compression suffix ({@code .gz .gzip .bz2 .bzip2 .xz .zst .zstd .zip}, as
+ * {@link SourceInput.Compression#bySuffix} knows them). NAME is {@code ISO__DATASET}, and
  * ISO, the part before the first {@code __}, is the isotopologue written as an isotope formula
  * (e.g. {@code 12C-16O} in {@code 12C-16O__Li2015}).
  *
@@ -36,7 +38,6 @@ import org.linewright.ingest.source.LineFormatException;
 public record ExomolFileSet(String name, String isotopeFormula, Path states, List<Path> transitions,
                             Path partitionFunction, Path definition, Map<String, Path> broadening) {
 
-    private static final String[] COMPRESSION_SUFFIXES = {".bz2", ".gz", ".xz", ".zst", ".zstd"};
     private static final String[] KINDS = {"states", "trans", "pf", "def", "broad"};
 
     public ExomolFileSet {
@@ -168,12 +169,11 @@ public record ExomolFileSet(String name, String isotopeFormula, Path states, Lis
         return candidate;
     }
 
-    /** Removes a trailing compression suffix, if any. */
+    /** Removes a trailing compression suffix ({@link SourceInput.Compression#bySuffix}), if any. */
     static String stripCompression(String fileName) {
-        for (String s : COMPRESSION_SUFFIXES) {
-            if (fileName.endsWith(s)) {
-                return fileName.substring(0, fileName.length() - s.length());
-            }
+        if (SourceInput.Compression.bySuffix(fileName) != SourceInput.Compression.NONE) {
+            // every compression suffix is the text after the last dot
+            return fileName.substring(0, fileName.lastIndexOf('.'));
         }
         return fileName;
     }

@@ -10,14 +10,17 @@ import java.util.Map;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.partition.PartitionTable;
+import org.linewright.ingest.source.DuplicateCounter;
+import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
 import org.linewright.ingest.source.LineReader;
 import org.linewright.ingest.source.ReadOptions;
 import org.linewright.ingest.source.StreamOpener;
-import org.linewright.ingest.text.AsciiLineReader;
-import org.linewright.ingest.text.AsciiNumbers;
+import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * Reads a state/transition set in the ExoMol data format (J. Tennyson et al., "The ExoMol database: molecular
@@ -46,7 +49,7 @@ import org.linewright.ingest.text.AsciiNumbers;
  * Memory: the states (about 50 bytes per state plus its label text, twice that while the arrays grow) and one input buffer; transitions are never
  * held beyond the current batch.
  */
-public final class ExomolReader implements LineReader {
+public final class ExomolReader implements LineReader, DuplicateCounter {
     private static final int MAX_TRANSITION_FIELDS = 4;
 
     private final ExomolFileSet files;
@@ -66,12 +69,13 @@ public final class ExomolReader implements LineReader {
     private final BroadeningTable[] foreign = new BroadeningTable[Broadener.values().length];
 
     private int nextTransitionFile;
-    private AsciiLineReader transitions;
+    private ByteLineScanner transitions;
     private String transitionFileName;
     private final int[] start = new int[MAX_TRANSITION_FIELDS];
     private final int[] end = new int[MAX_TRANSITION_FIELDS];
     private long recordsRead;
     private long recordsRejected;
+    private final DuplicateTracker duplicates = new DuplicateTracker();
 
     private ExomolReader(ExomolFileSet files, StreamOpener opener, ReadOptions options, IsotopologueLookup.Id id,
                          double abundance, double partitionSum296K, PartitionTable partitionTable,
@@ -146,11 +150,12 @@ public final class ExomolReader implements LineReader {
             try (InputStream in = opener.open(files.partitionFunction())) {
                 pf = PartitionTable.read(in, pfName);
             }
-            q296 = pf.valueAt(LineBatch.REFERENCE_TEMPERATURE_K);
-            if (Double.isNaN(q296)) {
+            if (!(pf.minTemperatureK() <= LineBatch.REFERENCE_TEMPERATURE_K
+                    && LineBatch.REFERENCE_TEMPERATURE_K <= pf.maxTemperatureK())) {
                 throw LineFormatException.ofFile(pfName, "partition function does not cover 296 K (table spans "
                         + pf.minTemperatureK() + "-" + pf.maxTemperatureK() + " K)", null);
             }
+            q296 = pf.value(LineBatch.REFERENCE_TEMPERATURE_K);
         } else {
             q296 = lookup.partitionSum(id.moleculeId(), id.isotopologue(), LineBatch.REFERENCE_TEMPERATURE_K);
             if (!(q296 > 0)) {
@@ -217,14 +222,14 @@ public final class ExomolReader implements LineReader {
                 }
                 Path p = files.transitions().get(nextTransitionFile++);
                 transitionFileName = p.getFileName().toString();
-                transitions = new AsciiLineReader(opener.open(p));
+                transitions = new ByteLineScanner(opener.open(p));
             }
             if (!transitions.next()) {
                 transitions.close();
                 transitions = null;
                 continue;
             }
-            int n = Tokens.split(transitions.buffer(), transitions.lineStart(), transitions.lineEnd(), start, end);
+            int n = transitions.splitOnBlanks(start, end);
             if (n == 0) {
                 continue;
             }
@@ -244,26 +249,26 @@ public final class ExomolReader implements LineReader {
 
     /** Parses the current transition line and appends it as row {@code batch.size}. */
     private void parseTransition(LineBatch batch, int n) {
-        AsciiLineReader lines = transitions;
+        ByteLineScanner lines = transitions;
         byte[] b = lines.buffer();
         int base = lines.lineStart();
         if (n < 3 || n > MAX_TRANSITION_FIELDS) {
             throw new LineFormatException(transitionFileName, lines.lineNumber(), 0, 0, "fields", lines.lineText(),
                     "3 or 4 fields: upper id, lower id, A (s-1) [, wavenumber (cm-1)]");
         }
-        int upper = stateRow(b, base, 0, "upper state id");
-        int lower = stateRow(b, base, 1, "lower state id");
-        double a = AsciiNumbers.parseDouble(b, start[2], end[2]);
+        int upper = stateRow(b, 0, "upper state id");
+        int lower = stateRow(b, 1, "lower state id");
+        double a = DecimalParser.parse(b, start[2], end[2]);
         if (!(a >= 0) || Double.isInfinite(a)) {
-            throw Tokens.error(transitionFileName, lines, base, start[2], end[2], "A", "a non-negative number in s-1");
+            throw LineFormatException.atField(transitionFileName, lines, start[2], end[2], "A", "a non-negative number in s-1");
         }
         double upperEnergy = states.energyCm1[upper];
         double lowerEnergy = states.energyCm1[lower];
         double nu;
         if (n == 4) {
-            nu = AsciiNumbers.parseDouble(b, start[3], end[3]);
+            nu = DecimalParser.parse(b, start[3], end[3]);
             if (!(nu > 0) || Double.isInfinite(nu)) {
-                throw Tokens.error(transitionFileName, lines, base, start[3], end[3], "wavenumber",
+                throw LineFormatException.atField(transitionFileName, lines, start[3], end[3], "wavenumber",
                         "a positive number in cm-1");
             }
         } else {
@@ -313,17 +318,18 @@ public final class ExomolReader implements LineReader {
         batch.referenceCodes.appendEmpty();
         batch.lineMixingFlag.appendEmpty();
         batch.size++;
+        duplicates.offer(batch, row);
     }
 
-    private int stateRow(byte[] b, int base, int field, String name) {
-        long stateId = AsciiNumbers.parseLong(b, start[field], end[field]);
-        if (stateId == AsciiNumbers.NOT_AN_INTEGER || stateId < 0) {
-            throw Tokens.error(transitionFileName, transitions, base, start[field], end[field], name,
+    private int stateRow(byte[] b, int field, String name) {
+        long stateId = DecimalParser.parseInt(b, start[field], end[field]);
+        if (stateId == DecimalParser.NOT_AN_INTEGER || stateId < 0) {
+            throw LineFormatException.atField(transitionFileName, transitions, start[field], end[field], name,
                     "a non-negative integer");
         }
         int row = states.rowOf(stateId);
         if (row < 0) {
-            throw Tokens.error(transitionFileName, transitions, base, start[field], end[field], name,
+            throw LineFormatException.atField(transitionFileName, transitions, start[field], end[field], name,
                     "an id of " + files.states().getFileName()
                     + (states.rejected() > 0 ? " (some states were rejected)" : ""));
         }
@@ -338,6 +344,12 @@ public final class ExomolReader implements LineReader {
     @Override
     public long recordsRejected() {
         return recordsRejected;
+    }
+
+    /** Kept lines identical in molecule, isotopologue, wavenumber and the four quanta texts to the line before. */
+    @Override
+    public long duplicatesSeen() {
+        return duplicates.duplicates();
     }
 
     @Override

@@ -5,8 +5,8 @@ import java.io.InputStream;
 import java.util.Arrays;
 import org.linewright.ingest.source.LineFormatException;
 import org.linewright.ingest.source.ReadOptions;
-import org.linewright.ingest.text.AsciiLineReader;
-import org.linewright.ingest.text.AsciiNumbers;
+import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * The states of a set in primitive arrays (no object per state), with their texts in one byte array:
@@ -99,12 +99,9 @@ final class StateTable {
         int[] start = new int[MAX_FIELDS];
         int[] end = new int[MAX_FIELDS];
         long maxId = -1;
-        try (AsciiLineReader lines = new AsciiLineReader(in)) {
+        try (ByteLineScanner lines = new ByteLineScanner(in)) {
             while (lines.next()) {
-                byte[] b = lines.buffer();
-                int base = lines.lineStart();
-                int lineEnd = lines.lineEnd();
-                int n = Tokens.split(b, base, lineEnd, start, end);
+                int n = lines.splitOnBlanks(start, end);
                 if (n == 0) {
                     continue;
                 }
@@ -124,10 +121,9 @@ final class StateTable {
         return t;
     }
 
-    private long parseRow(String fileName, AsciiLineReader lines, int[] start, int[] end, int n, int optional,
+    private long parseRow(String fileName, ByteLineScanner lines, int[] start, int[] end, int n, int optional,
                           boolean hasUncertainty) {
         byte[] b = lines.buffer();
-        int base = lines.lineStart();
         if (n < 4 + optional) {
             throw new LineFormatException(fileName, lines.lineNumber(), 0, 0, "fields", lines.lineText(),
                     (4 + optional) + " or more fields: id, energy (cm-1), degeneracy, J"
@@ -137,34 +133,34 @@ final class StateTable {
             throw new LineFormatException(fileName, lines.lineNumber(), 0, 0, "fields", lines.lineText(),
                     "at most " + MAX_FIELDS + " fields");
         }
-        long id = AsciiNumbers.parseLong(b, start[0], end[0]);
-        if (id == AsciiNumbers.NOT_AN_INTEGER || id < 0 || id >= Integer.MAX_VALUE) {
-            throw Tokens.error(fileName, lines, base, start[0], end[0], "state id", "a non-negative integer below 2^31-1");
+        long id = DecimalParser.parseInt(b, start[0], end[0]);
+        if (id == DecimalParser.NOT_AN_INTEGER || id < 0 || id >= Integer.MAX_VALUE) {
+            throw LineFormatException.atField(fileName, lines, start[0], end[0], "state id", "a non-negative integer below 2^31-1");
         }
-        double energy = AsciiNumbers.parseDouble(b, start[1], end[1]);
+        double energy = DecimalParser.parse(b, start[1], end[1]);
         if (Double.isNaN(energy) || Double.isInfinite(energy)) {
-            throw Tokens.error(fileName, lines, base, start[1], end[1], "energy", "a number in cm-1");
+            throw LineFormatException.atField(fileName, lines, start[1], end[1], "energy", "a number in cm-1");
         }
         if (energy < 0) {
-            throw Tokens.error(fileName, lines, base, start[1], end[1], "energy", "a non-negative energy in cm-1");
+            throw LineFormatException.atField(fileName, lines, start[1], end[1], "energy", "a non-negative energy in cm-1");
         }
-        double g = AsciiNumbers.parseDouble(b, start[2], end[2]);
+        double g = DecimalParser.parse(b, start[2], end[2]);
         if (!(g >= 0) || Double.isInfinite(g) || g != Math.rint(g)) {
-            throw Tokens.error(fileName, lines, base, start[2], end[2], "degeneracy", "a non-negative integer");
+            throw LineFormatException.atField(fileName, lines, start[2], end[2], "degeneracy", "a non-negative integer");
         }
-        double jValue = AsciiNumbers.parseDouble(b, start[3], end[3]);
+        double jValue = DecimalParser.parse(b, start[3], end[3]);
         if (!(jValue >= 0) || Double.isInfinite(jValue) || jValue * 2 != Math.rint(jValue * 2)) {
-            throw Tokens.error(fileName, lines, base, start[3], end[3], "J", "an integer or half-integer J >= 0");
+            throw LineFormatException.atField(fileName, lines, start[3], end[3], "J", "an integer or half-integer J >= 0");
         }
         if (end[3] - start[3] > Byte.MAX_VALUE) {
-            throw Tokens.error(fileName, lines, base, start[3], end[3], "J", "at most 127 characters");
+            throw LineFormatException.atField(fileName, lines, start[3], end[3], "J", "at most 127 characters");
         }
         double unc = Double.NaN;
         if (hasUncertainty) {
             // the uncertainty, when announced, is the first optional column
-            unc = AsciiNumbers.parseDouble(b, start[4], end[4]);
+            unc = DecimalParser.parse(b, start[4], end[4]);
             if (!(unc >= 0) || Double.isInfinite(unc)) {
-                throw Tokens.error(fileName, lines, base, start[4], end[4], "energy uncertainty",
+                throw LineFormatException.atField(fileName, lines, start[4], end[4], "energy uncertainty",
                         "a non-negative number in cm-1");
             }
         }

@@ -11,13 +11,13 @@ import java.util.Locale;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.TextColumn;
-import org.linewright.ingest.source.ByteLineScanner;
-import org.linewright.ingest.source.DecimalParser;
 import org.linewright.ingest.source.DuplicateCounter;
+import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
-import org.linewright.ingest.source.LineReader;
 import org.linewright.ingest.source.ReadOptions;
+import org.linewright.ingest.source.RecordPerLineReader;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * Reads comma- or tab-separated line-list exports whose first non-blank line names the parameters
@@ -35,7 +35,7 @@ import org.linewright.ingest.source.ReadOptions;
  * are read as 10, 11, 12. Validation and duplicate counting follow {@link HitranRecordReader}; J', J'', K'
  * are read from the local quanta when they keep their 15-character width.
  */
-public final class HitranDelimitedReader implements LineReader, DuplicateCounter {
+public final class HitranDelimitedReader extends RecordPerLineReader implements DuplicateCounter {
     /** The parameter columns this reader knows, by header name (matched without regard to case). */
     public enum Parameter {
         MOLEC_ID("molec_id", true), LOCAL_ISO_ID("local_iso_id", true), NU("nu", true), SW("sw", true),
@@ -89,10 +89,6 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
         }
     }
 
-    private final InputStream in;
-    private final ByteLineScanner lines;
-    private final String fileName;
-    private final ReadOptions options;
     private final byte delimiter;
     private final String[] headerNames;
     private final int[] columnOf = new int[Parameter.values().length];
@@ -105,15 +101,7 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
     private final byte[] quantaScratch = new byte[2 * HitranQuanta.FIELD_WIDTH];
     private final double[] quanta = new double[3];
     private byte[] unescapeScratch = new byte[64];
-    private byte[] previousQuanta = new byte[64];
-    private int previousQuantaLength = -1;
-    private int cursor;
-    private int previousMolecule = -1;
-    private int previousIsotopologue = -1;
-    private long previousWavenumberBits;
-    private long recordsRead;
-    private long recordsRejected;
-    private long duplicates;
+    private final DuplicateTracker duplicates = new DuplicateTracker();
 
     /**
      * Reads the header row.
@@ -122,10 +110,7 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
      * @throws LineFormatException when there is no header or a required column is missing
      */
     public HitranDelimitedReader(InputStream in, String fileName, ReadOptions options) throws IOException {
-        this.in = in;
-        this.lines = new ByteLineScanner(in);
-        this.fileName = fileName;
-        this.options = options;
+        super(in, fileName, options);
         boolean found;
         while ((found = lines.next()) && lines.isBlank()) {
             // skip blank lines before the header
@@ -189,27 +174,7 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
     }
 
     @Override
-    public boolean read(LineBatch batch) throws IOException {
-        batch.clear();
-        while (!batch.isFull() && lines.next()) {
-            if (lines.isBlank()) {
-                continue;
-            }
-            recordsRead++;
-            LineFormatException bad = parseRow(batch, batch.size);
-            if (bad == null) {
-                batch.size++;
-            } else if (options.lenient()) {
-                recordsRejected++;
-                options.rejects().reject(fileName, lines.lineNumber(), lines.lineText(), bad.reason());
-            } else {
-                throw bad;
-            }
-        }
-        return batch.size > 0;
-    }
-
-    private LineFormatException parseRow(LineBatch b, int row) {
+    protected LineFormatException parseRecord(LineBatch b, int row) {
         LineFormatException bad = tokenize();
         if (bad != null) {
             return bad;
@@ -285,42 +250,8 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
         appendText(b.uncertaintyCodes, Parameter.IERR);
         appendText(b.referenceCodes, Parameter.IREF);
         appendText(b.lineMixingFlag, Parameter.LINE_MIXING_FLAG);
-        countDuplicate(b, row);
+        duplicates.offer(b, row);
         return null;
-    }
-
-    private void countDuplicate(LineBatch b, int row) {
-        int total = b.upperGlobalQuanta.length(row) + b.lowerGlobalQuanta.length(row)
-                + b.upperLocalQuanta.length(row) + b.lowerLocalQuanta.length(row) + 4;
-        if (previousQuanta.length < total) {
-            previousQuanta = Arrays.copyOf(previousQuanta, Math.max(total, 2 * previousQuanta.length));
-        }
-        long bits = Double.doubleToRawLongBits(b.wavenumberCm1[row]);
-        boolean same = b.moleculeId[row] == previousMolecule && b.isotopologue[row] == previousIsotopologue
-                && bits == previousWavenumberBits && total == previousQuantaLength;
-        cursor = 0;
-        same = compareAndKeep(b.upperGlobalQuanta, row, same);
-        same = compareAndKeep(b.lowerGlobalQuanta, row, same);
-        same = compareAndKeep(b.upperLocalQuanta, row, same);
-        same = compareAndKeep(b.lowerLocalQuanta, row, same);
-        if (same) {
-            duplicates++;
-        }
-        previousQuantaLength = total;
-        previousMolecule = b.moleculeId[row];
-        previousIsotopologue = b.isotopologue[row];
-        previousWavenumberBits = bits;
-    }
-
-    /** Compares one quanta text with the previous row's at {@link #cursor}, then keeps it there. */
-    private boolean compareAndKeep(TextColumn c, int row, boolean same) {
-        int len = c.length(row);
-        int from = c.start(row);
-        boolean equal = same && Arrays.equals(c.bytes(), from, from + len, previousQuanta, cursor, cursor + len);
-        System.arraycopy(c.bytes(), from, previousQuanta, cursor, len);
-        cursor += len;
-        previousQuanta[cursor++] = '\n'; // separates the four texts
-        return equal;
     }
 
     /** Splits the current line into fields; returns an error for an unterminated quote. */
@@ -391,14 +322,8 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
     /** True when the field is empty, blank or "#" (a missing value). */
     private boolean missing(int f) {
         byte[] buf = lines.buffer();
-        int s = fieldStart[f];
-        int e = fieldEnd[f];
-        while (s < e && buf[s] == ' ') {
-            s++;
-        }
-        while (e > s && buf[e - 1] == ' ') {
-            e--;
-        }
+        int s = DecimalParser.skipSpaces(buf, fieldStart[f], fieldEnd[f]);
+        int e = DecimalParser.trimSpaces(buf, s, fieldEnd[f]);
         return s == e || (e - s == 1 && buf[s] == '#');
     }
 
@@ -441,14 +366,8 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
     private int isotopologue() {
         int f = columnOf[Parameter.LOCAL_ISO_ID.ordinal()];
         byte[] buf = lines.buffer();
-        int s = fieldStart[f];
-        int e = fieldEnd[f];
-        while (s < e && buf[s] == ' ') {
-            s++;
-        }
-        while (e > s && buf[e - 1] == ' ') {
-            e--;
-        }
+        int s = DecimalParser.skipSpaces(buf, fieldStart[f], fieldEnd[f]);
+        int e = DecimalParser.trimSpaces(buf, s, fieldEnd[f]);
         if (e - s == 1) {
             int code = HitranRecordReader.isotopologueCode(buf[s]);
             if (code > 0) {
@@ -510,29 +429,14 @@ public final class HitranDelimitedReader implements LineReader, DuplicateCounter
         return new String(lines.buffer(), fieldStart[f], rawLength(f), StandardCharsets.UTF_8);
     }
 
-    @Override
-    public long recordsRead() {
-        return recordsRead;
-    }
-
-    @Override
-    public long recordsRejected() {
-        return recordsRejected;
-    }
-
     /** Kept rows identical in molecule, isotopologue, wavenumber and the four quanta texts to the row before. */
     @Override
     public long duplicatesSeen() {
-        return duplicates;
+        return duplicates.duplicates();
     }
 
     @Override
     public LineFormat format() {
         return LineFormat.HITRAN_DELIMITED;
-    }
-
-    @Override
-    public void close() throws IOException {
-        in.close();
     }
 }

@@ -1,17 +1,15 @@
 package org.linewright.ingest.hitran;
 
-import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import org.linewright.ingest.line.LineBatch;
-import org.linewright.ingest.source.ByteLineScanner;
-import org.linewright.ingest.source.DecimalParser;
 import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormat;
 import org.linewright.ingest.source.LineFormatException;
-import org.linewright.ingest.source.LineReader;
 import org.linewright.ingest.source.ReadOptions;
+import org.linewright.ingest.source.RecordPerLineReader;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * Reads line lists in the 160-character fixed-column layout (2004 and later; see {@link HitranField}) into
@@ -30,7 +28,7 @@ import org.linewright.ingest.source.ReadOptions;
  * <p>Duplicates: a record with the same molecule, isotopologue, wavenumber (same double) and the same four
  * quanta fields (byte for byte) as the previous kept record is kept and counted in {@link #duplicatesSeen()}.
  */
-public final class HitranRecordReader implements LineReader, DuplicateCounter {
+public final class HitranRecordReader extends RecordPerLineReader implements DuplicateCounter {
     private static final int QUANTA_START = HitranField.UPPER_GLOBAL_QUANTA.start();
     private static final int QUANTA_LENGTH = HitranField.LOWER_LOCAL_QUANTA.end() - QUANTA_START;
     private static final byte KNOWN_UNCHECKED = 0;
@@ -38,9 +36,6 @@ public final class HitranRecordReader implements LineReader, DuplicateCounter {
     private static final byte KNOWN_NO = 2;
     private static final int MAX_ISOTOPOLOGUE_CODE = 12;
 
-    private final ByteLineScanner lines;
-    private final String fileName;
-    private final ReadOptions options;
     private final IsotopologueLookup isotopologues;
     /** Per (molecule, isotopologue): whether the lookup knows it, asked once. */
     private final byte[] knownCache = new byte[100 * (MAX_ISOTOPOLOGUE_CODE + 1)];
@@ -49,46 +44,20 @@ public final class HitranRecordReader implements LineReader, DuplicateCounter {
     private int previousMolecule = -1;
     private int previousIsotopologue = -1;
     private long previousWavenumberBits;
-    private long recordsRead;
-    private long recordsRejected;
     private long duplicates;
-    private final InputStream in;
 
     /**
      * @param in the decompressed record bytes (closed by {@link #close()})
      * @param fileName the file name shown in error messages and passed to the reject sink
      */
     public HitranRecordReader(InputStream in, String fileName, ReadOptions options) {
-        this.in = in;
-        this.lines = new ByteLineScanner(in);
-        this.fileName = fileName;
-        this.options = options;
+        super(in, fileName, options);
         this.isotopologues = options.isotopologues();
     }
 
-    @Override
-    public boolean read(LineBatch batch) throws IOException {
-        batch.clear();
-        while (!batch.isFull() && lines.next()) {
-            if (lines.isBlank()) {
-                continue;
-            }
-            recordsRead++;
-            LineFormatException problem = parseRecord(batch, batch.size);
-            if (problem == null) {
-                batch.size++;
-            } else if (options.lenient()) {
-                recordsRejected++;
-                options.rejects().reject(fileName, lines.lineNumber(), lines.lineText(), problem.reason());
-            } else {
-                throw problem;
-            }
-        }
-        return batch.size > 0;
-    }
-
     /** Parses the current line into row {@code row}; returns null when good, else the problem (row content then undefined). */
-    private LineFormatException parseRecord(LineBatch b, int row) {
+    @Override
+    protected LineFormatException parseRecord(LineBatch b, int row) {
         byte[] buf = lines.buffer();
         int s = lines.lineStart();
         int length = lines.lineLength();
@@ -233,16 +202,6 @@ public final class HitranRecordReader implements LineReader, DuplicateCounter {
         return new String(lines.buffer(), lines.lineStart() + field.start(), field.width(), StandardCharsets.UTF_8);
     }
 
-    @Override
-    public long recordsRead() {
-        return recordsRead;
-    }
-
-    @Override
-    public long recordsRejected() {
-        return recordsRejected;
-    }
-
     /** Kept records identical in molecule, isotopologue, wavenumber and the four quanta to the record before. */
     @Override
     public long duplicatesSeen() {
@@ -252,10 +211,5 @@ public final class HitranRecordReader implements LineReader, DuplicateCounter {
     @Override
     public LineFormat format() {
         return LineFormat.HITRAN160;
-    }
-
-    @Override
-    public void close() throws IOException {
-        in.close();
     }
 }

@@ -7,6 +7,7 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
+import java.util.function.IntFunction;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.TextColumn;
 
@@ -120,59 +121,53 @@ public final class HitranRecordWriter {
     static String fixed(HitranField field, double value, int decimals) {
         requireFinite(field, value);
         BigDecimal exact = new BigDecimal(Math.abs(value));
-        boolean negative = (Double.doubleToRawLongBits(value) < 0);
-        String best = null;
-        for (int d = decimals; d < field.width(); d++) {
+        String sign = Double.doubleToRawLongBits(value) < 0 ? "-" : "";
+        return shortestExact(field, value, decimals, d -> {
             String digits = exact.setScale(d, RoundingMode.HALF_EVEN).toPlainString();
-            String text = (negative ? "-" : "") + digits;
+            String text = sign + digits;
             if (text.length() > field.width() && digits.startsWith("0.")) {
                 // Fortran F editing drops the optional leading zero when the field is full
-                text = (negative ? "-" : "") + digits.substring(1);
+                text = sign + digits.substring(1);
             }
-            if (text.length() > field.width()) {
-                break;
-            }
-            if (best == null) {
-                best = text;
-            }
-            if (Double.parseDouble(text) == value) {
-                return text;
-            }
-        }
-        if (best == null) {
-            throw new IllegalArgumentException("field " + field.fieldName() + ": " + value
-                    + " does not fit " + field.format());
-        }
-        return best;
+            return text;
+        });
     }
 
     /** Scientific text d.ddd…E±xx with at least {@code decimals} mantissa decimals that reads back exactly. */
     static String scientific(HitranField field, double value, int decimals) {
         requireFinite(field, value);
-        boolean negative = (Double.doubleToRawLongBits(value) < 0);
         BigDecimal exact = new BigDecimal(Math.abs(value));
+        String sign = Double.doubleToRawLongBits(value) < 0 ? "-" : "";
+        return shortestExact(field, value, decimals, d -> {
+            if (value == 0) {
+                return sign + "0." + "0".repeat(d) + "E+00";
+            }
+            BigDecimal rounded = exact.round(new MathContext(d + 1, RoundingMode.HALF_EVEN));
+            String digits = rounded.unscaledValue().toString();
+            int exponent = digits.length() - 1 - rounded.scale();
+            // the unscaled value may carry fewer digits than asked (trailing zeros stripped by rounding)
+            StringBuilder mantissa = new StringBuilder(digits);
+            while (mantissa.length() < d + 1) {
+                mantissa.append('0');
+            }
+            mantissa.setLength(d + 1);
+            int absExponent = Math.abs(exponent);
+            return sign + mantissa.charAt(0) + "." + mantissa.substring(1) + "E" + (exponent < 0 ? '-' : '+')
+                    + (absExponent < 10 ? "0" : "") + absExponent;
+        });
+    }
+
+    /**
+     * The text {@code textWithDecimals(d)} for the fewest decimals d ≥ {@code decimals} that reads back as
+     * {@code value} and fits the field; when none does, the one with {@code decimals} decimals (the closest
+     * that fits).
+     *
+     * @throws IllegalArgumentException when not even that fits the field
+     */
+    private static String shortestExact(HitranField field, double value, int decimals, IntFunction<String> textWithDecimals) {
         String best = null;
         for (int d = decimals; d < field.width(); d++) {
-            String text;
-            if (value == 0) {
-                text = "0." + "0".repeat(d) + "E+00";
-            } else {
-                BigDecimal rounded = exact.round(new MathContext(d + 1, RoundingMode.HALF_EVEN));
-                String digits = rounded.unscaledValue().toString();
-                int exponent = digits.length() - 1 - rounded.scale();
-                // the unscaled value may carry fewer digits than asked (trailing zeros stripped by rounding)
-                StringBuilder mantissa = new StringBuilder(digits);
-                while (mantissa.length() < d + 1) {
-                    mantissa.append('0');
-                }
-                mantissa.setLength(d + 1);
-                int absExponent = Math.abs(exponent);
-                text = mantissa.charAt(0) + "." + mantissa.substring(1) + "E" + (exponent < 0 ? '-' : '+')
-                        + (absExponent < 10 ? "0" : "") + absExponent;
-            }
-            if (negative) {
-                text = "-" + text;
-            }
+            String text = textWithDecimals.apply(d);
             if (text.length() > field.width()) {
                 break;
             }

@@ -23,6 +23,8 @@ public final class LineBatch {
     /** Temperature at which {@link #intensityCmPerMolecule} and the widths are given. */
     public static final double REFERENCE_TEMPERATURE_K = 296.0;
 
+    private static final LineColumn[] COLUMNS = LineColumn.values();
+
     private final int capacity;
     /** Number of valid rows. */
     public int size;
@@ -140,5 +142,62 @@ public final class LineBatch {
         upperJ[row] = Double.NaN;
         lowerJ[row] = Double.NaN;
         upperK[row] = Double.NaN;
+    }
+
+    /**
+     * Copies rows {@code [from, from+n)} of every column of {@code src} to rows {@code [to, to+n)} of this batch.
+     * Text rows are appended, so {@code to} must equal the text columns' current row count.
+     */
+    public void copyRows(LineBatch src, int from, int to, int n) {
+        for (LineColumn c : COLUMNS) {
+            switch (c.kind()) {
+                case INT -> System.arraycopy(c.ints(src), from, c.ints(this), to, n);
+                case LONG -> System.arraycopy(c.longs(src), from, c.longs(this), to, n);
+                case DOUBLE -> System.arraycopy(c.doubles(src), from, c.doubles(this), to, n);
+                case TEXT -> c.text(this).appendRows(c.text(src), from, n);
+                default -> throw new AssertionError(c);
+            }
+        }
+    }
+
+    /**
+     * Copies rows {@code rows[from..from+n)} of {@code src}, in that order, to rows {@code [0, n)} of this batch
+     * (which must be empty of text rows); does not set {@link #size}.
+     */
+    public void gatherRows(LineBatch src, int[] rows, int from, int n) {
+        for (LineColumn c : COLUMNS) {
+            switch (c.kind()) {
+                case INT -> {
+                    int[] s = c.ints(src);
+                    int[] d = c.ints(this);
+                    for (int i = 0; i < n; i++) {
+                        d[i] = s[rows[from + i]];
+                    }
+                }
+                case LONG -> {
+                    long[] s = c.longs(src);
+                    long[] d = c.longs(this);
+                    for (int i = 0; i < n; i++) {
+                        d[i] = s[rows[from + i]];
+                    }
+                }
+                case DOUBLE -> {
+                    double[] s = c.doubles(src);
+                    double[] d = c.doubles(this);
+                    for (int i = 0; i < n; i++) {
+                        d[i] = s[rows[from + i]];
+                    }
+                }
+                case TEXT -> {
+                    TextColumn s = c.text(src);
+                    TextColumn d = c.text(this);
+                    for (int i = 0; i < n; i++) {
+                        int r = rows[from + i];
+                        d.append(s.bytes(), s.start(r), s.length(r));
+                    }
+                }
+                default -> throw new AssertionError(c);
+            }
+        }
     }
 }

@@ -160,6 +160,16 @@ public final class PartitionTable {
         return temperatureK[temperatureK.length - 1];
     }
 
+    /** The tabulated temperatures in K (a copy). */
+    public double[] temperaturesK() {
+        return temperatureK.clone();
+    }
+
+    /** The tabulated partition sums (a copy). */
+    public double[] partitionSums() {
+        return q.clone();
+    }
+
     /** Number of tabulated points. */
     public int size() {
         return q.length;

@@ -11,7 +11,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.linewright.ingest.InputException;
-import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.source.LineSources;
 import org.linewright.ingest.source.OpenedSource;
 import org.linewright.ingest.source.ReadOptions;
@@ -27,6 +26,8 @@ import org.linewright.ingest.store.SourceMetadata;
  * lines), hashed while it is read, and committed atomically with its counts. Nothing is dropped silently: a
  * strict ingest stops at the first bad record with a one-line {@link InputException} and leaves the store as it
  * was for that source; a lenient one sends every bad record, verbatim with its reason, to the rejects file.
+ * Parsing and storing overlap: a reader thread fills batches while the calling thread writes them
+ * ({@link BatchHandoff}), so an ingest uses two cores.
  */
 public final class IngestPipeline {
 
@@ -60,9 +61,8 @@ public final class IngestPipeline {
             RejectSink sink = options.lenient() ? rejects : RejectSink.DISCARD;
             ReadOptions readOptions = new ReadOptions(options.lenient(), sink, options.isotopologues(),
                     ReadOptions.DEFAULT_BATCH_SIZE);
-            LineBatch batch = new LineBatch(readOptions.batchSize());
             for (Path source : sources) {
-                reports.add(ingestOne(source, storeDir, options, readOptions, batch, listener));
+                reports.add(ingestOne(source, storeDir, options, readOptions, readOptions.batchSize(), listener));
             }
             Path written = rejects.commit();
             if (written == null && options.lenient() && options.rejectsFileOrNull() != null) {
@@ -76,7 +76,7 @@ public final class IngestPipeline {
     }
 
     private static IngestReport.Source ingestOne(Path source, Path storeDir, IngestOptions options,
-                                                 ReadOptions readOptions, LineBatch batch, IngestListener listener)
+                                                 ReadOptions readOptions, int batchCapacity, IngestListener listener)
             throws IOException {
         long started = System.nanoTime();
         listener.sourceStarted(source, Files.size(source));
@@ -88,14 +88,11 @@ public final class IngestPipeline {
             parameters.put("compression", opened.compression());
             SourceMetadata metadata = SourceMetadata.of(opened.fileName(), "", opened.format().id(), parameters);
             try (LineStoreWriter writer = LineStoreWriter.create(storeDir, name, metadata)) {
-                while (opened.reader().read(batch)) {
-                    writer.write(batch);
-                    listener.recordsRead(source, opened.reader().recordsRead());
-                }
+                new BatchHandoff(opened.reader(), batchCapacity).drainInto(writer, records -> listener.recordsRead(source, records));
                 long read = opened.reader().recordsRead();
                 long rejected = opened.reader().recordsRejected();
                 long duplicates = Math.max(0, opened.duplicatesSeen());
-                String sha256 = opened.sha256Hex().get();
+                String sha256 = digests(opened);
                 SourceInfo info = writer.commit(new IngestCounts(read, read - rejected, rejected, duplicates), sha256);
                 IngestReport.Source report = new IngestReport.Source(source, name, opened.format().id(),
                         opened.compression(), sha256, read, read - rejected, rejected, duplicates,
@@ -104,6 +101,25 @@ public final class IngestPipeline {
                 return report;
             }
         }
+    }
+
+    /**
+     * The SHA-256 of a single-file source, or {@code name=sha256} pairs separated by {@code ;} for a multi-file
+     * source (a state/transition set), every file named.
+     */
+    private static String digests(OpenedSource opened) {
+        List<OpenedSource.FileDigest> files = opened.files().get();
+        if (files.size() == 1) {
+            return files.get(0).sha256Hex();
+        }
+        StringBuilder sb = new StringBuilder();
+        for (OpenedSource.FileDigest d : files) {
+            if (sb.length() > 0) {
+                sb.append(';');
+            }
+            sb.append(d.fileName()).append('=').append(d.sha256Hex());
+        }
+        return sb.toString();
     }
 
     private static OpenedSource open(Path source, IngestOptions options, ReadOptions readOptions) throws IOException {

@@ -2,13 +2,16 @@ package org.linewright.ingest.source;
 
 import java.nio.charset.StandardCharsets;
 import java.util.Locale;
+import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.text.DecimalParser;
 
 /**
  * Recognises the format of a line list from its file name and its first non-blank lines.
  *
  * <ul>
- *   <li>{@link LineFormat#EXOMOL}: a name ending in {@code .states}, {@code .trans} or {@code .def} (before
- *       any compression suffix), or lines of whitespace-separated numbers starting with an integer id;</li>
+ *   <li>{@link LineFormat#EXOMOL}: a name ending in {@code .states}, {@code .trans}, {@code .def}, {@code .pf} or
+ *       {@code .broad} (before any compression suffix), or lines of whitespace-separated numbers starting with an
+ *       integer id;</li>
  *   <li>{@link LineFormat#HITRAN160}: 160-character lines with a molecule number, an isotopologue code and
  *       a wavenumber in their first 15 columns;</li>
  *   <li>{@link LineFormat#CATALOG}: lines of 55–81 characters whose frequency, error, log intensity,
@@ -26,14 +29,18 @@ public final class FormatDetector {
     private FormatDetector() {
     }
 
-    /** The format a file name alone announces ({@code .states}, {@code .trans}, {@code .def}), or null. */
+    /**
+     * The format a file name alone announces ({@code .states}, {@code .trans}, {@code .def}, {@code .pf},
+     * {@code .broad}, each optionally followed by a compression suffix), or null.
+     */
     public static LineFormat byFileName(String fileName) {
         String n = fileName.toLowerCase(Locale.ROOT);
         SourceInput.Compression c = SourceInput.Compression.bySuffix(n);
         if (c != SourceInput.Compression.NONE) {
             n = n.substring(0, n.lastIndexOf('.'));
         }
-        if (n.endsWith(".states") || n.endsWith(".trans") || n.endsWith(".def")) {
+        if (n.endsWith(".states") || n.endsWith(".trans") || n.endsWith(".def") || n.endsWith(".pf")
+                || n.endsWith(".broad")) {
             return LineFormat.EXOMOL;
         }
         return null;
@@ -56,7 +63,7 @@ public final class FormatDetector {
                 break; // a partial line at the end of the head proves nothing
             }
             int stop = end > start && head[end - 1] == '\r' ? end - 1 : end;
-            if (!blank(head, start, stop)) {
+            if (!ByteLineScanner.isBlank(head, start, stop)) {
                 LineFormat line = classify(head, start, stop, examined == 0);
                 if (line == null || (found != null && line != found)) {
                     return examined == 0 ? null : found;
@@ -90,7 +97,7 @@ public final class FormatDetector {
                 end++;
             }
             int stop = end > start && head[end - 1] == '\r' ? end - 1 : end;
-            if (!blank(head, start, stop)) {
+            if (!ByteLineScanner.isBlank(head, start, stop)) {
                 String first = new String(head, start, Math.min(stop - start, 60), StandardCharsets.UTF_8);
                 return "an unrecognised first line of " + (stop - start) + " characters \"" + first + "\"";
             }
@@ -153,34 +160,11 @@ public final class FormatDetector {
 
     /** Whitespace-separated tokens, the first an integer id, the next two numbers (state or transition lines). */
     private static boolean isNumericTokens(byte[] b, int s, int e) {
-        int token = 0;
-        int i = s;
-        while (i < e && token < 3) {
-            while (i < e && (b[i] == ' ' || b[i] == '\t')) {
-                i++;
-            }
-            if (i == e) {
-                break;
-            }
-            int t0 = i;
-            while (i < e && b[i] != ' ' && b[i] != '\t') {
-                i++;
-            }
-            boolean ok = token == 0 ? DecimalParser.parseInt(b, t0, i) >= 0 : Double.isFinite(DecimalParser.parse(b, t0, i));
-            if (!ok) {
-                return false;
-            }
-            token++;
-        }
-        return token == 3;
-    }
-
-    private static boolean blank(byte[] b, int s, int e) {
-        for (int i = s; i < e; i++) {
-            if (b[i] != ' ' && b[i] != '\t') {
-                return false;
-            }
-        }
-        return true;
+        int[] start = new int[3];
+        int[] end = new int[3];
+        int n = ByteLineScanner.splitOnBlanks(b, s, e, start, end);
+        return n >= 3 && DecimalParser.parseInt(b, start[0], end[0]) >= 0
+                && Double.isFinite(DecimalParser.parse(b, start[1], end[1]))
+                && Double.isFinite(DecimalParser.parse(b, start[2], end[2]));
     }
 }

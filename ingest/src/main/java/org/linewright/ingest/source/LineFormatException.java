@@ -1,6 +1,7 @@
 package org.linewright.ingest.source;
 
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.text.ByteLineScanner;
 
 /**
  * Bad input, located exactly: the file, the 1-based line, the 1-based column range, the field, the
@@ -37,6 +38,17 @@ public final class LineFormatException extends InputException {
     /** A whole-file problem (empty file, wrong format, corrupt or truncated compressed stream). */
     public static LineFormatException ofFile(String file, String problem, Throwable cause) {
         return new LineFormatException(file, 0, 0, 0, null, null, problem, cause);
+    }
+
+    /**
+     * A bad field {@code lines.buffer()[from, to)} of the current line of {@code lines}: the columns are counted
+     * from the line's start, the offending text is the field's bytes.
+     */
+    public static LineFormatException atField(String file, ByteLineScanner lines, int from, int to, String field,
+                                              String expected) {
+        int base = lines.lineStart();
+        return new LineFormatException(file, lines.lineNumber(), from - base + 1, to - base, field,
+                lines.text(from, to), expected);
     }
 
     /** The reason without the file and line prefix, as written to a rejects file. */

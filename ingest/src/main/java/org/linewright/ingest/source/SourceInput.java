@@ -229,6 +229,11 @@ public final class SourceInput implements Closeable {
         return fileName;
     }
 
+    /** True once {@link #stream()} has been read to its end (the SHA-256 is then available). */
+    public boolean readToEnd() {
+        return ((CheckedInputStream) decompressed).atEnd;
+    }
+
     /**
      * SHA-256 of the raw file bytes, lower-case hex. Valid once {@link #stream()} has been read to its end:
      * bytes the decompressor left unread (trailers, a zip central directory) are read and hashed here.
@@ -237,7 +242,7 @@ public final class SourceInput implements Closeable {
      */
     public String sha256Hex() {
         if (sha256Hex == null) {
-            if (!((CheckedInputStream) decompressed).atEnd) {
+            if (!readToEnd()) {
                 throw new IllegalStateException(fileName + ": the SHA-256 is known only after the whole file was read");
             }
             try {

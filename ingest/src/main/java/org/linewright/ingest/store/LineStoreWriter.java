@@ -163,7 +163,7 @@ public final class LineStoreWriter implements AutoCloseable {
             int from = 0;
             while (from < n) {
                 int take = Math.min(n - from, runLines - runBuffer.size);
-                copyRows(batch, from, runBuffer, runBuffer.size, take);
+                runBuffer.copyRows(batch, from, runBuffer.size, take);
                 runBuffer.size += take;
                 from += take;
                 if (runBuffer.isFull()) {
@@ -187,7 +187,7 @@ public final class LineStoreWriter implements AutoCloseable {
             for (int from = 0; from < n; from += gather.capacity()) {
                 int m = Math.min(gather.capacity(), n - from);
                 gather.clear();
-                gatherRows(runBuffer, order, from, gather, m);
+                gather.gatherRows(runBuffer, order, from, m);
                 gather.size = m;
                 run.write(gather);
             }
@@ -377,58 +377,4 @@ public final class LineStoreWriter implements AutoCloseable {
             throw new IllegalStateException("SHA-256 is required of every Java platform", e);
         }
     }
-
-    /** Copies rows {@code [from, from+n)} of every column of {@code src} to rows {@code [to, to+n)} of {@code dst}. */
-    static void copyRows(LineBatch src, int from, LineBatch dst, int to, int n) {
-        for (LineColumn c : StoreColumns.COLUMNS) {
-            switch (c.kind()) {
-                case INT -> System.arraycopy(c.ints(src), from, c.ints(dst), to, n);
-                case LONG -> System.arraycopy(c.longs(src), from, c.longs(dst), to, n);
-                case DOUBLE -> System.arraycopy(c.doubles(src), from, c.doubles(dst), to, n);
-                case TEXT -> {
-                    c.text(dst).appendRows(c.text(src), from, n);
-                }
-                default -> throw new AssertionError(c);
-            }
-        }
-    }
-
-    /** Copies rows {@code order[from..from+n)} of {@code src} to rows {@code [0, n)} of {@code dst}. */
-    private static void gatherRows(LineBatch src, int[] order, int from, LineBatch dst, int n) {
-        for (LineColumn c : StoreColumns.COLUMNS) {
-            switch (c.kind()) {
-                case INT -> {
-                    int[] s = c.ints(src);
-                    int[] d = c.ints(dst);
-                    for (int i = 0; i < n; i++) {
-                        d[i] = s[order[from + i]];
-                    }
-                }
-                case LONG -> {
-                    long[] s = c.longs(src);
-                    long[] d = c.longs(dst);
-                    for (int i = 0; i < n; i++) {
-                        d[i] = s[order[from + i]];
-                    }
-                }
-                case DOUBLE -> {
-                    double[] s = c.doubles(src);
-                    double[] d = c.doubles(dst);
-                    for (int i = 0; i < n; i++) {
-                        d[i] = s[order[from + i]];
-                    }
-                }
-                case TEXT -> {
-                    TextColumn s = c.text(src);
-                    TextColumn d = c.text(dst);
-                    for (int i = 0; i < n; i++) {
-                        int r = order[from + i];
-                        d.append(s.bytes(), s.start(r), s.length(r));
-                    }
-                }
-                default -> throw new AssertionError(c);
-            }
-        }
-    }
-
 }

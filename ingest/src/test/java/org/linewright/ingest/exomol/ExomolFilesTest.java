@@ -79,17 +79,6 @@ class ExomolFilesTest {
     }
 
     @Test
-    void partitionTableErrors() {
-        LineFormatException e = assertThrows(LineFormatException.class, () -> PartitionTable.read(
-                new ByteArrayInputStream("1.0 1.0\n2.0 1.5\n2.0 1.7\n".getBytes(StandardCharsets.US_ASCII)), "x.pf"));
-        assertEquals("x.pf:3:cols 1-3: field temperature: \"2.0\" (expected a temperature above the previous row's 2.0 K)",
-                e.getMessage());
-        e = assertThrows(LineFormatException.class, () -> PartitionTable.read(
-                new ByteArrayInputStream("1.0 0x\n".getBytes(StandardCharsets.US_ASCII)), "x.pf"));
-        assertEquals("x.pf:1:cols 5-6: field Q: \"0x\" (expected a positive number)", e.getMessage());
-    }
-
-    @Test
     void duplicateStateIdsAndTransitionsBelowTheirLowerStateAreErrors() throws IOException {
         CarbonMonoxideLookup registry = new CarbonMonoxideLookup();
         Files.writeString(dir.resolve("12C-16O__Dup.states"), "1 0.0 1 0\n2 3.845033 3 1\n1 11.534953 5 2\n");

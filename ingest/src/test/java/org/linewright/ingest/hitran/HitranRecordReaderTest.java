@@ -95,12 +95,12 @@ class HitranRecordReaderTest {
 
     /**
      * The intensity/Einstein-A relation of Šimečková et al. 2006 (JQSRT 98, 130) with the abundances and
-     * Q(296 K) of the samples' README: S = Iₐ·A·g′/(8πcν²)·e^(−c2E″/T)·(1−e^(−c2ν/T))/Q(T), within 3×10⁻³
+     * Q(296 K) of the samples README: S = Iₐ·A·g′/(8πcν²)·e^(−c2E″/T)·(1−e^(−c2ν/T))/Q(T), within 2×10⁻³
      * (rounding of S and A, and of the recalled Q, per the README). It fails when fields are swapped or
      * mis-scaled (ν, S, A, E″, g′).
      */
     @ParameterizedTest
-    @CsvSource({"sample_CO.par", "sample_CO2.par", "sample_PH3.par"})
+    @CsvSource({"sample_CO.par", "sample_CO2.par", "sample_N2O.par", "sample_PH3.par"})
     void intensityMatchesEinsteinARelation(String file) throws IOException {
         SampleIsotopologues iso = new SampleIsotopologues();
         double c2 = PhysicalConstants.SECOND_RADIATION_CONSTANT_CM_K;
@@ -117,7 +117,7 @@ class HitranRecordReaderTest {
             }
             double s = ia * b.einsteinAS1[row] * b.upperDegeneracy[row] / (8 * Math.PI * c * nu * nu)
                     * Math.exp(-c2 * b.lowerEnergyCm1[row] / t) * -Math.expm1(-c2 * nu / t) / q;
-            assertEquals(1.0, s / b.intensityCmPerMolecule[row], 3e-3, file + " record " + (i + 1));
+            assertEquals(1.0, s / b.intensityCmPerMolecule[row], 2e-3, file + " record " + (i + 1));
             checked[0]++;
         });
         assertTrue(checked[0] > 4000, "records checked: " + checked[0]);

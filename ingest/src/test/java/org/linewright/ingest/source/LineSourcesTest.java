@@ -227,16 +227,6 @@ class LineSourcesTest {
                 e.getMessage());
     }
 
-    @Test
-    void formatsNotWiredYetSaySo() throws IOException {
-        Path states = tmp.resolve("12C-16O__synthetic.states");
-        Files.writeString(states, "           1     0.000000      1       0\n");
-        assertThrows(UnsupportedOperationException.class, () -> LineSources.open(states, null, STRICT));
-        Path cat = tmp.resolve("synthetic.cat");
-        Files.writeString(cat, SYNTHETIC_CATALOG_LINE + "\n");
-        assertThrows(UnsupportedOperationException.class, () -> LineSources.open(cat, null, STRICT));
-    }
-
     /** An invented catalog line (synthetic values) in the 80-column layout: F13.4 F8.4 F8.4 I2 F10.4 I3 I7 I4 6I2 6I2. */
     static final String SYNTHETIC_CATALOG_LINE = "  123456.7890  0.0050 -4.1234 3   12.3456  5 -99001 101 2         1";
 
@@ -251,6 +241,9 @@ class LineSourcesTest {
         byte[] trans = "\n        12         1  1.2345e-02\n        13         2  2.0000e-03\n".getBytes(StandardCharsets.US_ASCII);
         assertEquals(LineFormat.EXOMOL, FormatDetector.byContent(trans, trans.length));
         assertEquals(LineFormat.EXOMOL, FormatDetector.byFileName("1H2-16O__synthetic__00000-00100.trans.bz2"));
+        for (String name : new String[] {"a__b.states", "a__b.def.gz", "a__b.pf", "a__H2.broad.xz", "a__b.STATES.zst"}) {
+            assertEquals(LineFormat.EXOMOL, FormatDetector.byFileName(name), name);
+        }
         assertNull(FormatDetector.byFileName("lines.par.bz2"));
         byte[] binary = {1, 2, 0, 4};
         assertTrue(FormatDetector.describe(binary, 4).startsWith("binary"));

@@ -1,5 +1,6 @@
-package org.linewright.ingest.source;
+package org.linewright.ingest.text;
 
+import java.io.Closeable;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
@@ -8,9 +9,11 @@ import java.nio.charset.StandardCharsets;
  * Splits a byte stream into lines over one large reusable buffer, without an object per line. A line ends
  * at LF; a CR before the LF is not part of the line (LF and CRLF files read alike); the last line may lack
  * its terminator. After {@link #next()} returns true the current line is
- * {@code buffer()[lineStart(), lineEnd())}, valid until the next call.
+ * {@code buffer()[lineStart(), lineEnd())}, valid until the next call. Lines longer than the buffer make it
+ * grow. {@link #splitOnBlanks} splits the current line into blank-separated fields for the formats written
+ * as free-format columns.
  */
-public final class ByteLineScanner {
+public final class ByteLineScanner implements Closeable {
     /** Default buffer size: large enough for thousands of records per refill. */
     public static final int DEFAULT_BUFFER_BYTES = 1 << 20;
 
@@ -38,9 +41,10 @@ public final class ByteLineScanner {
      * @return false at the end of the input
      */
     public boolean next() throws IOException {
+        int scanFrom = position;
         while (true) {
             byte[] b = buffer;
-            for (int i = position; i < limit; i++) {
+            for (int i = scanFrom; i < limit; i++) {
                 if (b[i] == '\n') {
                     setLine(position, i);
                     position = i + 1;
@@ -55,7 +59,10 @@ public final class ByteLineScanner {
                 }
                 return false;
             }
+            // the bytes scanned so far hold no LF: after the refill moves them to the front, resume behind them
+            int scanned = limit - position;
             fill();
+            scanFrom = scanned;
         }
     }
 
@@ -111,18 +118,78 @@ public final class ByteLineScanner {
         return lineNumber;
     }
 
-    /** True when the current line holds only spaces and tabs (or nothing). */
+    /** True when the current line holds only blanks (spaces, tabs, stray CRs) or nothing. */
     public boolean isBlank() {
-        for (int i = lineStart; i < lineEnd; i++) {
-            if (buffer[i] != ' ' && buffer[i] != '\t') {
+        return isBlank(buffer, lineStart, lineEnd);
+    }
+
+    /** True when {@code bytes[from, to)} holds only blanks (spaces, tabs, stray CRs) or nothing. */
+    public static boolean isBlank(byte[] bytes, int from, int to) {
+        for (int i = from; i < to; i++) {
+            if (!isBlank(bytes[i])) {
                 return false;
             }
         }
         return true;
     }
 
+    /**
+     * Splits the current line into fields separated by runs of blanks (spaces, tabs, stray CRs), without
+     * allocating: field {@code k} is {@code buffer()[start[k], end[k])}.
+     *
+     * @param start receives the start of each field (its length is the most fields wanted)
+     * @param end receives the end of each field
+     * @return the number of fields, or {@code start.length + 1} when the line holds more fields than fit
+     */
+    public int splitOnBlanks(int[] start, int[] end) {
+        return splitOnBlanks(buffer, lineStart, lineEnd, start, end);
+    }
+
+    /**
+     * Splits {@code bytes[from, to)} into fields separated by runs of blanks (spaces, tabs, stray CRs), without
+     * allocating: field {@code k} is {@code bytes[start[k], end[k])}.
+     *
+     * @return the number of fields, or {@code start.length + 1} when there are more fields than fit
+     */
+    public static int splitOnBlanks(byte[] bytes, int from, int to, int[] start, int[] end) {
+        int count = 0;
+        int i = from;
+        while (true) {
+            while (i < to && isBlank(bytes[i])) {
+                i++;
+            }
+            if (i == to) {
+                return count;
+            }
+            if (count == start.length) {
+                return count + 1;
+            }
+            start[count] = i;
+            while (i < to && !isBlank(bytes[i])) {
+                i++;
+            }
+            end[count] = i;
+            count++;
+        }
+    }
+
+    private static boolean isBlank(byte b) {
+        return b == ' ' || b == '\t' || b == '\r';
+    }
+
     /** The current line as text (allocates; for error reports and rejects). */
     public String lineText() {
         return new String(buffer, lineStart, lineEnd - lineStart, StandardCharsets.UTF_8);
+    }
+
+    /** The bytes {@code buffer()[from, to)} of the current line as text (allocates; for error reports). */
+    public String text(int from, int to) {
+        return new String(buffer, from, to - from, StandardCharsets.UTF_8);
+    }
+
+    /** Closes the underlying stream. */
+    @Override
+    public void close() throws IOException {
+        in.close();
     }
 }

@@ -1,4 +1,4 @@
-package org.linewright.ingest.source;
+package org.linewright.ingest.text;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -134,6 +134,33 @@ class DecimalParserTest {
         assertTrue(decided > 99_900, "decided " + decided);
     }
 
+    /** Field texts of fixed-column and free-format line lists; reference: the JDK parser. */
+    @Test
+    void fixedAndExponentFormsOfLineListsAreBitwiseEqual() {
+        for (String t : new String[] {"3.845033", "  2143.271100", "7.207E-08", "1.2345e+05", "-0.000479", "0.5", ".5",
+            "5.", "+12", "-0.0", "1.438776877", "115271.2018", "  -5.0105", "1.00000000000000000000001", "1e-320",
+            "123456789012345678901234567890", "abc", "12x", "1 2", "1e+"}) {
+            assertSameAsJdk(t);
+        }
+    }
+
+    /**
+     * Fortran double-precision exponents read as E exponents; reference: the JDK parser of the same text with
+     * D replaced by E (the D exponent is the E exponent of double precision, common practice in Fortran output).
+     */
+    @Test
+    void fortranDoublePrecisionExponents() {
+        for (String t : new String[] {"6.02214076D23", "1.5d-3", "-2.5D+02", ".5D0", "7.D-400", "1d99999", "9.883D-43"}) {
+            byte[] b = t.getBytes(StandardCharsets.ISO_8859_1);
+            double expected = Double.parseDouble(t.replace('d', 'E').replace('D', 'E'));
+            assertEquals(Double.doubleToRawLongBits(expected), Double.doubleToRawLongBits(DecimalParser.parse(b, 0, b.length)), t);
+        }
+        // a lone d stays the JDK's type suffix; a D without exponent digits is not a number
+        for (String t : new String[] {"1.5d", "1.5D", "1d+", "1dd5", "d5", "0x1d5"}) {
+            assertSameAsJdk(t);
+        }
+    }
+
     @Test
     void integers() {
         byte[] b = " -12 ".getBytes(StandardCharsets.ISO_8859_1);
@@ -141,5 +168,14 @@ class DecimalParserTest {
         byte[] bad = " 1 2".getBytes(StandardCharsets.ISO_8859_1);
         assertEquals(Long.MIN_VALUE, DecimalParser.parseInt(bad, 0, bad.length));
         assertTrue(DecimalParser.parseInt(b, 0, 1) == Long.MIN_VALUE);
+        // reference: Long.parseLong of the trimmed text; more than 18 digits and decimals are refused
+        for (String t : new String[] {"  12345678 ", " -28001", "+7"}) {
+            byte[] bytes = t.getBytes(StandardCharsets.ISO_8859_1);
+            assertEquals(Long.parseLong(t.trim()), DecimalParser.parseInt(bytes, 0, bytes.length), t);
+        }
+        for (String t : new String[] {"12.0", "", "1234567890123456789", "-", "1e3"}) {
+            byte[] bytes = t.getBytes(StandardCharsets.ISO_8859_1);
+            assertEquals(DecimalParser.NOT_AN_INTEGER, DecimalParser.parseInt(bytes, 0, bytes.length), t);
+        }
     }
 }

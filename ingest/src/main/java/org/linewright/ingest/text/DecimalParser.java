@@ -1,4 +1,4 @@
-package org.linewright.ingest.source;
+package org.linewright.ingest.text;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -27,10 +27,16 @@ import java.nio.charset.StandardCharsets;
  * text goes to {@code Double.parseDouble}.
  * This is the test-and-fallback scheme of Clinger's 1990 paper with a wider fast step.
  *
+ * <p>Fortran double-precision exponents: {@code d} or {@code D} followed by an (optionally signed) exponent, as
+ * in {@code 6.02214076D23}, is read as {@code E} (common practice in Fortran-written data files). The JDK rejects
+ * such texts; every text the JDK accepts (including a lone {@code d} type suffix, {@code 1.5d}) keeps its JDK value.
+ *
  * <p>Accuracy: the result equals {@code Double.parseDouble} of the trimmed field text bit for bit (both are
- * correctly rounded to nearest-even; the sign of zero is kept).
+ * correctly rounded to nearest-even; the sign of zero is kept), with a Fortran {@code D} exponent read as {@code E}.
  */
 public final class DecimalParser {
+    /** Returned by {@link #parseInt} for text that is blank or not an integer. */
+    public static final long NOT_AN_INTEGER = Long.MIN_VALUE;
     /** Largest mantissa for which the fast path is exact: 2^53. */
     private static final long EXACT_MANTISSA_LIMIT = 1L << 53;
     /** Powers of ten exactly representable as doubles (10^0 … 10^22). */
@@ -77,14 +83,8 @@ public final class DecimalParser {
      *         is blank or not a number (callers report it; a literal {@code NaN} also gives NaN)
      */
     public static double parse(byte[] bytes, int from, int to) {
-        int i = from;
-        int end = to;
-        while (i < end && bytes[i] == ' ') {
-            i++;
-        }
-        while (end > i && bytes[end - 1] == ' ') {
-            end--;
-        }
+        int i = skipSpaces(bytes, from, to);
+        int end = trimSpaces(bytes, i, to);
         if (i == end) {
             return Double.NaN;
         }
@@ -130,7 +130,7 @@ public final class DecimalParser {
         int exponent = 0;
         if (i < end) {
             c = bytes[i];
-            if (c != 'e' && c != 'E') {
+            if (c != 'e' && c != 'E' && c != 'd' && c != 'D') {
                 return slow(bytes, from, to);
             }
             i++;
@@ -203,19 +203,13 @@ public final class DecimalParser {
     /**
      * An integer in {@code bytes[from, to)}, surrounding spaces ignored, optional sign.
      *
-     * @return the value, or {@code Long.MIN_VALUE} when the text is blank or not an integer
+     * @return the value, or {@link #NOT_AN_INTEGER} when the text is blank, not an integer or longer than 18 digits
      */
     public static long parseInt(byte[] bytes, int from, int to) {
-        int i = from;
-        int end = to;
-        while (i < end && bytes[i] == ' ') {
-            i++;
-        }
-        while (end > i && bytes[end - 1] == ' ') {
-            end--;
-        }
+        int i = skipSpaces(bytes, from, to);
+        int end = trimSpaces(bytes, i, to);
         if (i == end) {
-            return Long.MIN_VALUE;
+            return NOT_AN_INTEGER;
         }
         boolean negative = false;
         if (bytes[i] == '-' || bytes[i] == '+') {
@@ -223,23 +217,56 @@ public final class DecimalParser {
             i++;
         }
         if (i == end || end - i > MAX_FAST_DIGITS) {
-            return Long.MIN_VALUE;
+            return NOT_AN_INTEGER;
         }
         long value = 0;
         for (; i < end; i++) {
             byte c = bytes[i];
             if (c < '0' || c > '9') {
-                return Long.MIN_VALUE;
+                return NOT_AN_INTEGER;
             }
             value = value * 10 + (c - '0');
         }
         return negative ? -value : value;
     }
 
+    /** The first index of {@code bytes[from, to)} that is not a space, or {@code to} when there is none. */
+    public static int skipSpaces(byte[] bytes, int from, int to) {
+        int i = from;
+        while (i < to && bytes[i] == ' ') {
+            i++;
+        }
+        return i;
+    }
+
+    /** The end of {@code bytes[from, to)} without its trailing spaces ({@code from} when all are spaces). */
+    public static int trimSpaces(byte[] bytes, int from, int to) {
+        int end = to;
+        while (end > from && bytes[end - 1] == ' ') {
+            end--;
+        }
+        return end;
+    }
+
     private static double slow(byte[] bytes, int from, int to) {
-        String text = new String(bytes, from, to - from, StandardCharsets.ISO_8859_1);
+        String text = new String(bytes, from, to - from, StandardCharsets.ISO_8859_1).trim();
         try {
-            return Double.parseDouble(text.trim());
+            return Double.parseDouble(text);
+        } catch (NumberFormatException e) {
+            return fortranExponent(text);
+        }
+    }
+
+    /** A text the JDK rejected, read again with a Fortran {@code D} exponent written as {@code E}; else NaN. */
+    private static double fortranExponent(String text) {
+        int d = Math.max(text.indexOf('d'), text.indexOf('D'));
+        // only "digits D [sign] digits": a trailing d is the JDK's type suffix, handled (or rejected) above
+        if (d <= 0 || d == text.length() - 1 || !Character.isDigit(text.charAt(text.length() - 1))
+                || (text.charAt(d - 1) != '.' && !Character.isDigit(text.charAt(d - 1)))) {
+            return Double.NaN;
+        }
+        try {
+            return Double.parseDouble(text.substring(0, d) + 'E' + text.substring(d + 1));
         } catch (NumberFormatException e) {
             return Double.NaN;
         }

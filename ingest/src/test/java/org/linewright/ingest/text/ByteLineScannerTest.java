@@ -13,7 +13,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 /** Reference: {@link String#lines()} of the JDK splits on the same terminators. */
-class AsciiLineReaderTest {
+class ByteLineScannerTest {
 
     private static List<String> readAll(String text, int bufferBytes, boolean trickle) throws IOException {
         byte[] bytes = text.getBytes(StandardCharsets.ISO_8859_1);
@@ -28,7 +28,7 @@ class AsciiLineReaderTest {
             };
         }
         List<String> lines = new ArrayList<>();
-        try (AsciiLineReader r = new AsciiLineReader(in, bufferBytes)) {
+        try (ByteLineScanner r = new ByteLineScanner(in, bufferBytes)) {
             while (r.next()) {
                 lines.add(r.lineText());
                 assertEquals(lines.size(), r.lineNumber());
@@ -47,5 +47,32 @@ class AsciiLineReaderTest {
             assertEquals(text.lines().toList(), readAll(text, 1 << 16, trickle));
         }
         assertTrue(readAll("", 16, false).isEmpty());
+    }
+
+    /** Reference: the JDK's {@code String.split("[ \\t\\r]+")} of the stripped line. */
+    @Test
+    void splitOnBlanksMatchesTheJdkSplit() throws IOException {
+        String text = "  1   0.000000 \t 1  0 + e X1Sigma+\r\r\n\t\n7 8 9\n";
+        int[] start = new int[8];
+        int[] end = new int[8];
+        try (ByteLineScanner r = new ByteLineScanner(new ByteArrayInputStream(text.getBytes(StandardCharsets.ISO_8859_1)))) {
+            while (r.next()) {
+                String line = r.lineText();
+                String stripped = line.replaceAll("^[ \\t\\r]+|[ \\t\\r]+$", "");
+                List<String> expected = stripped.isEmpty() ? List.of() : List.of(stripped.split("[ \\t\\r]+"));
+                int n = r.splitOnBlanks(start, end);
+                List<String> actual = new ArrayList<>();
+                for (int k = 0; k < n; k++) {
+                    actual.add(r.text(start[k], end[k]));
+                }
+                assertEquals(expected, actual, line);
+                assertEquals(expected.isEmpty(), r.isBlank(), line);
+            }
+        }
+        try (ByteLineScanner r = new ByteLineScanner(new ByteArrayInputStream("a b c d".getBytes(StandardCharsets.ISO_8859_1)))) {
+            assertTrue(r.next());
+            // more fields than fit: one more than the arrays hold
+            assertEquals(4, r.splitOnBlanks(new int[3], new int[3]));
+        }
     }
 }

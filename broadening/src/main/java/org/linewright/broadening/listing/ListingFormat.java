@@ -1,0 +1,22 @@
+package org.linewright.broadening.listing;
+
+import org.linewright.ingest.InputException;
+
+/** Output formats of {@link LineListing}. */
+public enum ListingFormat {
+    /** Aligned columns for people: the main parameters, not every column. */
+    TABLE,
+    /** Every column, a header row, values that reproduce the stored doubles exactly. */
+    CSV,
+    /** An Arrow IPC file: the line store's columns plus the computed ones. */
+    ARROW;
+
+    public static ListingFormat byName(String name) {
+        for (ListingFormat f : values()) {
+            if (f.name().equalsIgnoreCase(name)) {
+                return f;
+            }
+        }
+        throw new InputException("format '" + name + "' (expected table, csv or arrow)");
+    }
+}

@@ -1,0 +1,133 @@
+package org.linewright.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.linewright.broadening.listing.LineListing;
+import org.linewright.broadening.listing.LineListingRequest;
+import org.linewright.broadening.listing.ListingFormat;
+import org.linewright.cli.units.QuantityParser;
+import org.linewright.ingest.InputException;
+import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.store.LineStore;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code linewright lines}: list the lines of a store. */
+@Command(name = "lines",
+        mixinStandardHelpOptions = true,
+        description = {
+            "List the lines of a line store in wavenumber order: a window, a molecule or isotopologue, the strongest "
+                    + "N; optionally with the intensity at a temperature and the width each line gets in a background.",
+            "CSV output has every stored column (the first twelve: molecule,isotopologue,wavenumber_cm1,"
+                    + "intensity_cm_per_molecule,einstein_a_s1,air_width_cm1_per_atm,self_width_cm1_per_atm,"
+                    + "air_width_exponent,air_shift_cm1_per_atm,lower_energy_cm1,upper_degeneracy,lower_degeneracy), "
+                    + "values that read back exactly, then the computed columns.",
+            ""
+        },
+        footer = {
+            "",
+            "Examples:",
+            "  linewright lines stores/planet-b --between 2100 2200 --molecule CO --strongest 20",
+            "  linewright lines stores/planet-b --between 4.5 4.8 --unit um --temperature 800K \\",
+            "      --background H2=0.85,He=0.15 --format csv --out co-800K.csv"
+        })
+public final class LinesCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @ParentCommand
+    private LinewrightCommand root;
+
+    @Parameters(index = "0", paramLabel = "DIR", description = "The line store.")
+    private Path store;
+
+    @Option(names = "--between", arity = "2", paramLabel = "LOW HIGH",
+            description = "Spectral window (inclusive), in --unit unless the values carry a unit.")
+    private String[] between;
+
+    @Option(names = "--unit", paramLabel = "UNIT", defaultValue = "cm-1",
+            description = "Unit of --between values without one: cm-1, um or GHz (default: ${DEFAULT-VALUE}).")
+    private String unit;
+
+    @Option(names = "--molecule", paramLabel = "ID|FORMULA", description = "Only this molecule, e.g. 5 or CO.")
+    private String molecule;
+
+    @Option(names = "--isotopologue", paramLabel = "N", description = "Only this isotopologue (local number) of --molecule.")
+    private int isotopologue;
+
+    @Option(names = "--strongest", paramLabel = "N",
+            description = "Only the N strongest lines (by S(T) with --temperature, else by S(296 K)), in wavenumber order.")
+    private int strongest;
+
+    @Option(names = "--temperature", paramLabel = "T", description = "Add the intensity at this temperature, e.g. 800K.")
+    private String temperature;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "table",
+            description = "table, csv or arrow (default: ${DEFAULT-VALUE}).")
+    private String format;
+
+    @Option(names = "--out", paramLabel = "FILE", description = "Write here instead of standard output (needed for arrow).")
+    private Path out;
+
+    @Mixin
+    private BackgroundOptions backgroundOptions;
+
+    @Mixin
+    private SpeciesDataOptions speciesData;
+
+    @Override
+    public Integer call() throws Exception {
+        MoleculeRegistry registry = speciesData.registry();
+        double low = Double.NEGATIVE_INFINITY;
+        double high = Double.POSITIVE_INFINITY;
+        if (between != null) {
+            double a = position(between[0]);
+            double b = position(between[1]);
+            // A wavelength window reverses in wavenumber.
+            low = Math.min(a, b);
+            high = Math.max(a, b);
+        }
+        int moleculeId = molecule == null ? 0 : registry.molecule(molecule).id();
+        double temperatureK = temperature == null ? Double.NaN : QuantityParser.parseTemperature(temperature).kelvin();
+        LineListingRequest request = new LineListingRequest(low, high, moleculeId, isotopologue, strongest,
+                temperatureK, backgroundOptions.compositionOrNull(), backgroundOptions.widthOptions());
+        LineListing.Summary summary = LineListing.write(LineStore.open(store), request, registry,
+                ListingFormat.byName(format), out, spec.commandLine().getOut());
+        if (!root.globalOptions().quiet()) {
+            PrintWriter err = spec.commandLine().getErr();
+            err.printf(Locale.ROOT, "%d line(s) listed of %d in the selection%s%n", summary.linesListed(),
+                    summary.linesInSelection(), out == null ? "" : " -> " + out);
+            if (summary.widthSourcesOrNull() != null) {
+                summary.widthSourcesOrNull().report().forEach(err::println);
+                summary.widthSourcesOrNull().warnings().forEach(w -> err.println("warning: " + w));
+            }
+            err.flush();
+        }
+        return ExitCodes.OK;
+    }
+
+    private double position(String text) {
+        String t = text.strip();
+        boolean hasUnit = t.chars().anyMatch(Character::isLetter) && !t.matches("[-+0-9.]+[eE][-+]?[0-9]+");
+        if (!hasUnit && Double.parseDouble(checkNumber(t)) == 0.0) {
+            return 0.0;
+        }
+        return QuantityParser.parseWavenumber(hasUnit ? t : t + " " + unit).cm1();
+    }
+
+    private static String checkNumber(String t) {
+        try {
+            Double.parseDouble(t);
+            return t;
+        } catch (NumberFormatException e) {
+            throw new InputException("--between: \"" + t + "\" is not a number");
+        }
+    }
+}

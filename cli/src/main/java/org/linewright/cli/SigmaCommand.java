@@ -1,0 +1,283 @@
+package org.linewright.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.sources.WidthOptions;
+import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.wings.WingCutoff;
+import org.linewright.broadening.wings.WingTreatment;
+import org.linewright.cli.plot.CrossSectionPlot;
+import org.linewright.cli.plot.PlotStyle;
+import org.linewright.cli.progress.Progress;
+import org.linewright.cli.units.Pressure;
+import org.linewright.cli.units.QuantityParser;
+import org.linewright.cli.units.Temperature;
+import org.linewright.grid.calc.CrossSectionCalculator;
+import org.linewright.grid.calc.CrossSectionRequest;
+import org.linewright.grid.calc.CrossSectionResult;
+import org.linewright.grid.calc.LineSelection;
+import org.linewright.grid.engine.CrossSectionEngine;
+import org.linewright.grid.engine.EngineFactory;
+import org.linewright.grid.output.CrossSectionFiles;
+import org.linewright.grid.output.CrossSectionFormat;
+import org.linewright.grid.wavenumber.WavenumberGrid;
+import org.linewright.ingest.InputException;
+import org.linewright.ingest.registry.Isotopologue;
+import org.linewright.ingest.registry.Molecule;
+import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.store.LineStore;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code linewright sigma}: one absorption cross section σ(ν) at one (p, T) from line stores. */
+@Command(name = "sigma",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Compute one absorption cross section (cm^2/molecule over wavenumber) at one temperature and pressure "
+                    + "from line stores, with Voigt profiles broadened by the given background gas, and write it as "
+                    + "CSV, Arrow IPC or HDF5.",
+            "Lines are scaled to the temperature with their partition sums, cut at the wing cutoff, and summed "
+                    + "exactly on the grid (engine 'exact'). A summary (lines used, width sources per gas, dropped "
+                    + "intensity, warnings, time) is printed unless --quiet.",
+            ""
+        },
+        footer = {
+            "",
+            "Examples:",
+            "  linewright sigma stores/planet-b --temperature 800 --pressure 1bar --background H2=0.85,He=0.15 \\",
+            "      --between 2000 2300 --step 0.01 --out co-800K.csv --plot co-800K.png",
+            "  linewright sigma stores/planet-b --temperature 296K --pressure 760Torr --background air=1 \\",
+            "      --between 4.3 4.5 --unit um --resolving-power 1e5 --molecule CO2 --out co2.arrow"
+        })
+public final class SigmaCommand implements Callable<Integer> {
+    /** Resolution of the progress bar: the wavenumber range in this many steps. */
+    private static final int PROGRESS_STEPS = 100;
+
+    @Spec
+    private CommandSpec spec;
+
+    @ParentCommand
+    private LinewrightCommand root;
+
+    @Parameters(arity = "1..*", paramLabel = "DIR", description = "Line stores (written by 'linewright ingest').")
+    private List<Path> stores;
+
+    @Option(names = "--temperature", required = true, paramLabel = "K", description = "Temperature, e.g. 296 or 800K.")
+    private Temperature temperature;
+
+    @Option(names = "--pressure", required = true, paramLabel = "VALUE[unit]",
+            description = "Total pressure: Pa, hPa, kPa, mbar, bar, atm or Torr; a bare number is bar.")
+    private Pressure pressure;
+
+    @Mixin
+    private BackgroundOptions backgroundOptions;
+
+    @Option(names = "--between", arity = "2", required = true, paramLabel = "LOW HIGH",
+            description = "Spectral range of the grid (in --unit; bare numbers are cm-1 by default).")
+    private List<String> between;
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    private Spacing spacing;
+
+    /** Either a fixed step or a constant resolving power. */
+    static final class Spacing {
+        @Option(names = "--step", paramLabel = "S", description = "Grid step (cm-1, or GHz with --unit GHz).")
+        String step;
+
+        @Option(names = "--resolving-power", paramLabel = "R", description = "Constant resolving power ν/Δν.")
+        Double resolvingPower;
+    }
+
+    @Option(names = "--unit", paramLabel = "UNIT", defaultValue = "cm-1",
+            description = "Unit of bare numbers in --between (and --step with GHz): cm-1, um or GHz (default ${DEFAULT-VALUE}).")
+    private String unit;
+
+    @Option(names = "--cutoff", paramLabel = "CM1", defaultValue = "25",
+            description = "Wing cutoff distance from each line centre in cm-1 (default ${DEFAULT-VALUE}).")
+    private double cutoffCm1;
+
+    @Option(names = "--engine", paramLabel = "ID", defaultValue = "exact",
+            description = "Summation engine: exact or fast (default ${DEFAULT-VALUE}).")
+    private String engine;
+
+    @Option(names = "--tolerance", paramLabel = "T", defaultValue = "1e-3",
+            description = "Target relative error of approximate engines (default ${DEFAULT-VALUE}; the exact engine ignores it).")
+    private double tolerance;
+
+    @Option(names = "--shape", paramLabel = "SHAPE", defaultValue = "voigt",
+            description = "Line shape: voigt, doppler or lorentz (default ${DEFAULT-VALUE}).")
+    private String shape;
+
+    @Option(names = "--threshold", paramLabel = "S", defaultValue = "0",
+            description = "Leave out lines with S(T) below this, cm/molecule (default ${DEFAULT-VALUE}: keep all).")
+    private double threshold;
+
+    @Option(names = "--molecule", paramLabel = "ID-or-formula", description = "Only lines of this molecule, e.g. CO2 or 2.")
+    private String molecule;
+
+    @Option(names = "--isotopologue", paramLabel = "N", description = "Only this isotopologue of --molecule (local number).")
+    private Integer isotopologue;
+
+
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: the number of processors).")
+    private Integer threads;
+
+    @Option(names = "--format", paramLabel = "FORMAT", description = "Output format: arrow, csv or hdf5 (default: from the --out extension).")
+    private String format;
+
+    @Option(names = "--out", required = true, paramLabel = "FILE", description = "The cross-section file to write (.csv, .arrow, .h5).")
+    private Path out;
+
+    @Option(names = "--plot", paramLabel = "FILE.png", description = "Also draw σ on a log axis to this PNG file.")
+    private Path plot;
+
+    @Mixin
+    private SpeciesDataOptions speciesData;
+
+    @Override
+    public Integer call() throws Exception {
+        boolean quiet = root.globalOptions().quiet();
+        CrossSectionFormat fileFormat = format == null ? CrossSectionFormat.fromExtension(out)
+                : CrossSectionFormat.parse(format);
+        Composition composition = backgroundOptions.requiredComposition();
+        LineShapeKind lineShape = parseShape(shape);
+        if (!(cutoffCm1 > 0)) {
+            throw new InputException("--cutoff: " + cutoffCm1 + " (expected a positive distance in cm-1)");
+        }
+        if (!(threshold >= 0) || Double.isInfinite(threshold)) {
+            throw new InputException("--threshold: " + threshold + " (expected a non-negative intensity in cm/molecule)");
+        }
+        int threadCount = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+        WavenumberGrid grid = grid();
+        MoleculeRegistry registry = speciesData.registry();
+        LineSelection selection = selection(registry);
+        List<LineStore> opened = new ArrayList<>();
+        for (Path dir : stores) {
+            opened.add(LineStore.open(dir));
+        }
+        WingTreatment wings = WingTreatment.defaults().withCutoff(WingCutoff.fixed(cutoffCm1));
+        WidthOptions widths = backgroundOptions.widthOptions();
+        CrossSectionRequest request = new CrossSectionRequest(temperature.kelvin(), pressure.atm(), composition, grid,
+                wings, lineShape, threshold, selection, widths);
+        CrossSectionResult result;
+        try (CrossSectionEngine eng = EngineFactory.create(engine, threadCount, wings, tolerance);
+             Progress progress = Progress.start("sigma", PROGRESS_STEPS, "%", 1, quiet)) {
+            result = new CrossSectionCalculator(opened, registry).compute(request, eng,
+                    (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
+        }
+        CrossSectionFiles.write(out, fileFormat, grid, result.sigmaCm2PerMolecule(), result.metadata());
+        if (plot != null) {
+            CrossSectionPlot.write(plot, PlotStyle.of(String.format(Locale.ROOT, "T = %s K, p = %s bar, %s",
+                            fmt(temperature.kelvin()), fmt(pressure.bar()), composition)),
+                    grid.pointsCm1(), List.of(new CrossSectionPlot.Series(
+                            "T = " + fmt(temperature.kelvin()) + " K", result.sigmaCm2PerMolecule())), false);
+        }
+        if (!quiet) {
+            summary(spec.commandLine().getOut(), result, grid);
+        }
+        return ExitCodes.OK;
+    }
+
+    private static String fmt(double v) {
+        return String.format(Locale.ROOT, "%.6g", v);
+    }
+
+    private void summary(PrintWriter w, CrossSectionResult r, WavenumberGrid grid) {
+        w.printf(Locale.ROOT, "%s: %d points %.6f-%.6f cm-1, engine %s%n", out, grid.size(), grid.firstCm1(),
+                grid.lastCm1(), r.metadata().get("engine"));
+        w.printf(Locale.ROOT, "lines used: %d; below threshold: %d (%.3e of the intensity)%n", r.linesUsed(),
+                r.linesBelowThreshold(), r.droppedIntensityFraction());
+        w.printf(Locale.ROOT, "sum of S(T) used: %.6e cm/molecule; wing loss beyond the cutoff: %.3e%n",
+                r.sumIntensityCmPerMolecule(), r.wingLossFraction());
+        for (String line : r.widthSources().report()) {
+            w.println("width sources, " + line);
+        }
+        for (String warning : r.warnings()) {
+            w.println("warning: " + warning);
+        }
+        w.printf(Locale.ROOT, "time: %.2f s%n", r.seconds());
+        w.flush();
+    }
+
+    private WavenumberGrid grid() {
+        String u = unit.trim();
+        String lu = u.toLowerCase(Locale.ROOT);
+        if (!lu.equals("cm-1") && !lu.equals("um") && !lu.equals("ghz")) {
+            throw new InputException("--unit: '" + unit + "' (expected cm-1, um or GHz)");
+        }
+        double a = QuantityParser.parseWavenumber(withUnit(between.get(0), u)).cm1();
+        double b = QuantityParser.parseWavenumber(withUnit(between.get(1), u)).cm1();
+        double low = Math.min(a, b);
+        double high = Math.max(a, b);
+        if (!(low < high)) {
+            throw new InputException("--between " + between.get(0) + " " + between.get(1)
+                    + ": empty range (expected two different spectral positions)");
+        }
+        if (spacing.resolvingPower != null) {
+            return WavenumberGrid.resolvingPower(low, high, spacing.resolvingPower);
+        }
+        String stepUnit = lu.equals("ghz") ? u : "cm-1";
+        double step = QuantityParser.parseWavenumberInterval(withUnit(spacing.step, stepUnit)).cm1();
+        if (step > high - low) {
+            throw new InputException("--step " + spacing.step + ": larger than the range " + low + "-" + high
+                    + " cm-1 (expected a step smaller than the range)");
+        }
+        return WavenumberGrid.uniform(low, high, step);
+    }
+
+    /** Appends {@code unit} to a bare number (text without letters). */
+    private static String withUnit(String value, String unit) {
+        String v = value.trim();
+        for (int i = 0; i < v.length(); i++) {
+            char c = v.charAt(i);
+            // a letter other than an exponent 'e' means the value names its own unit
+            if (Character.isLetter(c) && !((c == 'e' || c == 'E') && i > 0 && i + 1 < v.length())) {
+                return v;
+            }
+        }
+        return v + " " + unit;
+    }
+
+    private static LineShapeKind parseShape(String name) {
+        try {
+            return LineShapeKind.parse(name);
+        } catch (IllegalArgumentException e) {
+            throw new InputException("--shape: " + e.getMessage());
+        }
+    }
+
+    private LineSelection selection(MoleculeRegistry registry) {
+        if (molecule == null) {
+            if (isotopologue != null) {
+                throw new InputException("--isotopologue " + isotopologue + ": needs --molecule (expected e.g. "
+                        + "--molecule CO2 --isotopologue 1)");
+            }
+            return LineSelection.ALL;
+        }
+        Molecule m = registry.molecule(molecule);
+        if (m == null) {
+            throw new InputException("--molecule '" + molecule + "': unknown (expected a molecule number or formula "
+                    + "of the registry, e.g. 2 or CO2)");
+        }
+        if (isotopologue == null) {
+            return LineSelection.molecules(m.id());
+        }
+        Isotopologue iso = registry.isotopologue(m.id(), isotopologue);
+        if (iso == null) {
+            throw new InputException("--isotopologue " + isotopologue + ": molecule " + m.formula()
+                    + " has no such isotopologue in the registry");
+        }
+        return LineSelection.isotopologue(m.id(), isotopologue);
+    }
+}

@@ -1,0 +1,56 @@
+package org.linewright.grid.engine.fast;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * The measured errors against Lagrange's remainder theorem (Abramowitz &amp; Stegun 25.2.3): error =
+ * ω(u)·f⁽ⁿ⁾(ξ)/n! for n nodes, so convergence of order n, and for a Lorentzian at its centre a closed form.
+ */
+class FastErrorModelTest {
+
+    @Test
+    void positionErrorOfALorentzianMatchesTheRemainderAtTheCentre() {
+        // six-point stencil, nodes −2 … 3: L(x) ∝ 1/(1 + x²/γ²) has |L⁽⁶⁾(0)/L(0)| = 720/γ⁶, the largest relative sixth
+        // derivative; max |ω(τ)| over τ ∈ [0, 1] is (5/2·3/2·1/2)² = 225/64 at τ = ½ → relative error
+        // (225/64)·(720/6!)·(h/γ)⁶ = (225/64)·(h/γ)⁶ as h → 0
+        double gamma = 0.1;
+        double h = 0.005;
+        double predicted = 225.0 / 64.0 * Math.pow(h / gamma, 6);
+        assertEquals(predicted, FastErrorModel.positionError(h, 0.0, gamma), 0.05 * predicted);
+    }
+
+    @Test
+    void errorsFallAsTheFourthPowerOfTheStep() {
+        // position: sixth order (six-point stencil)
+        double coarse = FastErrorModel.positionError(0.002, 0.004, 0.01);
+        double fine = FastErrorModel.positionError(0.001, 0.004, 0.01);
+        assertEquals(64.0, coarse / fine, 12.0);
+        double dopplerCoarse = FastErrorModel.dopplerAxisError(0.04, 0.0);
+        double dopplerFine = FastErrorModel.dopplerAxisError(0.02, 0.0);
+        assertEquals(16.0, dopplerCoarse / dopplerFine, 3.0);
+        double lorentzCoarse = FastErrorModel.lorentzAxisError(0.2, 0.0);
+        double lorentzFine = FastErrorModel.lorentzAxisError(0.1, 0.0);
+        assertEquals(16.0, lorentzCoarse / lorentzFine, 3.0);
+    }
+
+    @Test
+    void depthIsWhereTheProfileFallsToOneMillionthOfItsPeak() {
+        // Gaussian of HWHM α: exp(−ln2·x²/α²) = 10⁻⁶ at x = α·√(ln 10⁶/ln 2) (closed form)
+        double alpha = 0.01;
+        assertEquals(alpha * Math.sqrt(Math.log(1e6) / Math.log(2)), FastErrorModel.depthDetuning(alpha, 0.0),
+                1e-9 * alpha);
+        // Lorentzian: 1/(1 + x²/γ²) = 10⁻⁶ at x = γ·√(10⁶ − 1)
+        double gamma = 0.02;
+        assertEquals(gamma * Math.sqrt(1e6 - 1), FastErrorModel.depthDetuning(0.0, gamma), 1e-7 * gamma * 1000);
+    }
+
+    @Test
+    void largestStepMeetsItsBudget() {
+        double step = FastErrorModel.largestStep(s -> FastErrorModel.lorentzAxisError(s, 0.1), 2e-4, 1e-3, 2.0);
+        assertTrue(FastErrorModel.lorentzAxisError(step, 0.1) <= 2e-4);
+        assertTrue(FastErrorModel.lorentzAxisError(step * 1.05, 0.1) > 2e-4 * 1.01);
+    }
+}
