@@ -1,6 +1,5 @@
 package org.linewright.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -8,8 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
-import org.linewright.cli.plot.PlotStyle;
-import org.linewright.cli.plot.ResidualPlot;
+import org.linewright.cli.plot.VerificationPlot;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.reference.data.ReferenceLine;
 import org.linewright.reference.data.ReferenceLines;
@@ -18,7 +16,6 @@ import org.linewright.reference.report.ReportFiles;
 import org.linewright.reference.report.ReportFormat;
 import org.linewright.reference.report.VerificationReportWriter;
 import org.linewright.reference.verify.LineListVerifier;
-import org.linewright.reference.verify.ReferenceMatch;
 import org.linewright.reference.verify.VerificationReport;
 import org.linewright.reference.verify.VerifyOptions;
 
@@ -96,7 +93,7 @@ public final class VerifyCommand implements Callable<Integer> {
             ReportFiles.write(reportFile, w -> VerificationReportWriter.write(report, reportFormat, w));
         }
         if (plot != null) {
-            writePlot(report, plot);
+            VerificationPlot.write(report, plot);
         }
         if (!root.globalOptions().quiet() && reportFile != null) {
             out.printf(Locale.ROOT, "%s: %d lines, %s; report %s%n", list, report.lines(),
@@ -104,30 +101,5 @@ public final class VerifyCommand implements Callable<Integer> {
         }
         out.flush();
         return report.passed() ? ExitCodes.OK : ExitCodes.CHECK_FOUND_PROBLEMS;
-    }
-
-    /** The residual plot: S/S(A) − 1 of every (thinned) line and offset/position of the reference lines found. */
-    static void writePlot(VerificationReport report, Path png) throws IOException {
-        List<ResidualPlot.Series> series = new ArrayList<>();
-        if (report.relationResiduals().size() > 0) {
-            series.add(new ResidualPlot.Series("lines: S/S(A) - 1", report.relationResiduals().x(),
-                    report.relationResiduals().y()));
-        }
-        List<ReferenceMatch> found = report.references().stream().filter(m -> !Double.isNaN(m.offsetCm1())).toList();
-        if (!found.isEmpty()) {
-            double[] x = new double[found.size()];
-            double[] y = new double[found.size()];
-            for (int i = 0; i < x.length; i++) {
-                x[i] = found.get(i).reference().wavenumberCm1();
-                y[i] = found.get(i).relativeOffset();
-            }
-            series.add(new ResidualPlot.Series("reference lines: offset / position", x, y));
-        }
-        if (series.isEmpty()) {
-            throw new org.linewright.ingest.InputException("--plot " + png
-                    + ": nothing to plot (no line with S and A, no reference line found)");
-        }
-        ResidualPlot.write(png, PlotStyle.of("verify " + report.subject()), "wavenumber (cm-1)", "relative residual",
-                series);
     }
 }
