@@ -56,6 +56,14 @@ class VerifyCompareCommandsTest {
         return record.substring(0, 15) + String.format(Locale.ROOT, "%10.3E", 2 * s) + record.substring(25);
     }
 
+    private Path writeGarbage() {
+        try {
+            return Files.writeString(temp.resolve("garbage.par"), "this is not a line list\n");
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
     private static void assertOneErrorLine(Run r) {
         assertEquals(ExitCodes.BAD_INPUT, r.code(), r.err());
         String[] lines = r.err().strip().split("\\R");
@@ -101,6 +109,21 @@ class VerifyCompareCommandsTest {
         Run r = run("verify", sample("sample_PH3.par").toString(), "--reference", badReference.toString());
         assertOneErrorLine(r);
         assertTrue(r.err().contains("refs.tsv:2") && r.err().contains("position"), r.err());
+    }
+
+    /**
+     * A user's reference file is read with the built-in set: a CO J=1-0 entry 10 MHz off the rest frequency
+     * (115.2712018 GHz, from memory) with a 1 MHz tolerance is found misplaced, exit code 1.
+     */
+    @Test
+    void userReferenceLinesAreChecked() throws IOException {
+        Path refs = Files.writeString(temp.resolve("my-lines.tsv"), "# test\n"
+                + String.join("\t", org.linewright.reference.data.ReferenceLines.COLUMNS) + "\n"
+                + "rotational\t5\t1\t1\t0\t-\t0\t0\t115.2812018\tGHz\t0.001\tCO J=1-0 shifted\tfrom memory, shifted by 10 MHz\n");
+        Run r = run("verify", sample("sample_CO.par").toString(), "--reference", refs.toString());
+        assertEquals(ExitCodes.CHECK_FOUND_PROBLEMS, r.code(), r.err() + r.out());
+        assertTrue(r.out().lines().anyMatch(l -> l.contains("CO J=1-0 shifted") && l.contains("offset")), r.out());
+        assertTrue(r.out().contains("reference-position   1 finding(s)"), r.out());
     }
 
     /** Shift one line by 0.01 cm-1, remove one, add one: exit code 1 and exactly three CSV rows. */
@@ -151,5 +174,8 @@ class VerifyCompareCommandsTest {
         assertOneErrorLine(run("compare", temp.resolve("a.par").toString(), temp.resolve("b.par").toString()));
         assertOneErrorLine(run("compare", temp.toString(), temp.toString()));
         assertOneErrorLine(run("compare", "x", "y", "--window", "-1 cm-1"));
+        Run r = run("compare", sample("sample_CO.par").toString(), writeGarbage().toString());
+        assertOneErrorLine(r);
+        assertTrue(r.err().contains("garbage.par"), r.err());
     }
 }
