@@ -6,7 +6,7 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.List;
-import java.util.Map;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.TreeMap;
 
@@ -68,9 +68,8 @@ public final class LineListComparer {
         private long added;
         private long removed;
         private final EnumMap<LineColumn, double[]> fieldStats = new EnumMap<>(LineColumn.class);
-        private final TreeMap<String, long[]> bandCounts = new TreeMap<>();
-        private final Map<String, double[]> bandRanges = new TreeMap<>();
-        private final Map<String, Object[]> bandKeys = new TreeMap<>();
+        /** Per band, keyed by zero-padded molecule/isotopologue and the labels (so the map sorts by species). */
+        private final TreeMap<String, BandTally> bands = new TreeMap<>();
         private final List<LineChange> listed = new ArrayList<>();
         private final List<FieldChange> scratch = new ArrayList<>();
 
@@ -225,7 +224,7 @@ public final class LineListComparer {
                 }
             }
             // report fields in column order
-            scratch.sort(java.util.Comparator.comparing(FieldChange::column));
+            scratch.sort(Comparator.comparing(FieldChange::column));
             if (scratch.isEmpty()) {
                 unchanged++;
                 return;
@@ -257,15 +256,13 @@ public final class LineListComparer {
             String upperGlobal = text(id.upperGlobalQuanta, ir);
             String lowerGlobal = text(id.lowerGlobalQuanta, ir);
             double nu = id.wavenumberCm1[ir];
-            String band = String.format(java.util.Locale.ROOT, "%06d/%06d\t%s\t%s", id.moleculeId[ir], id.isotopologue[ir],
+            String band = String.format(Locale.ROOT, "%06d/%06d\t%s\t%s", id.moleculeId[ir], id.isotopologue[ir],
                     ReferenceLines.normalizeLabel(upperGlobal), ReferenceLines.normalizeLabel(lowerGlobal));
-            long[] counts = bandCounts.computeIfAbsent(band, k -> new long[3]);
-            counts[kind.ordinal()]++;
-            double[] range = bandRanges.computeIfAbsent(band, k -> new double[] {nu, nu});
-            range[0] = Math.min(range[0], nu);
-            range[1] = Math.max(range[1], nu);
-            bandKeys.computeIfAbsent(band, k -> new Object[] {id.moleculeId[ir], id.isotopologue[ir],
-                ReferenceLines.normalizeLabel(upperGlobal), ReferenceLines.normalizeLabel(lowerGlobal)});
+            BandTally tally = bands.computeIfAbsent(band, k -> new BandTally(id.moleculeId[ir], id.isotopologue[ir],
+                    ReferenceLines.normalizeLabel(upperGlobal), ReferenceLines.normalizeLabel(lowerGlobal)));
+            tally.counts[kind.ordinal()]++;
+            tally.minWavenumberCm1 = Math.min(tally.minWavenumberCm1, nu);
+            tally.maxWavenumberCm1 = Math.max(tally.maxWavenumberCm1, nu);
             if (listed.size() < options.maxListedChanges()) {
                 listed.add(new LineChange(kind, by, id.moleculeId[ir], id.isotopologue[ir],
                         ob == null ? Double.NaN : ob.wavenumberCm1[or], nb == null ? Double.NaN : nb.wavenumberCm1[nr],
@@ -277,19 +274,36 @@ public final class LineListComparer {
         ComparisonReport report(String oldName, String newName) {
             EnumMap<LineColumn, ComparisonReport.FieldSummary> fields = new EnumMap<>(LineColumn.class);
             fieldStats.forEach((c, s) -> fields.put(c, new ComparisonReport.FieldSummary((long) s[0], s[1], s[2], s[3])));
-            List<ComparisonReport.BandSummary> bands = new ArrayList<>();
-            for (Map.Entry<String, long[]> e : bandCounts.entrySet()) {
-                Object[] k = bandKeys.get(e.getKey());
-                double[] range = bandRanges.get(e.getKey());
-                long[] c = e.getValue();
-                bands.add(new ComparisonReport.BandSummary((int) k[0], (int) k[1], (String) k[2], (String) k[3],
-                        c[LineChange.Kind.ADDED.ordinal()], c[LineChange.Kind.REMOVED.ordinal()],
-                        c[LineChange.Kind.CHANGED.ordinal()], range[0], range[1]));
+            List<ComparisonReport.BandSummary> bandSummaries = new ArrayList<>();
+            for (BandTally t : bands.values()) {
+                bandSummaries.add(new ComparisonReport.BandSummary(t.moleculeId, t.isotopologue, t.upperGlobal,
+                        t.lowerGlobal, t.counts[LineChange.Kind.ADDED.ordinal()],
+                        t.counts[LineChange.Kind.REMOVED.ordinal()], t.counts[LineChange.Kind.CHANGED.ordinal()],
+                        t.minWavenumberCm1, t.maxWavenumberCm1));
             }
             List<LineChange> sorted = new ArrayList<>(listed);
             sorted.sort(Comparator.comparingDouble(LineChange::wavenumberCm1));
             return new ComparisonReport(oldName, newName, options, oldLines, newLines, unchanged, changed, added,
-                    removed, fields, bands, sorted);
+                    removed, fields, bandSummaries, sorted);
+        }
+    }
+
+    /** Changes counted in one band (one per band, not per line). */
+    private static final class BandTally {
+        final int moleculeId;
+        final int isotopologue;
+        final String upperGlobal;
+        final String lowerGlobal;
+        /** Indexed by {@link LineChange.Kind#ordinal()}. */
+        final long[] counts = new long[LineChange.Kind.values().length];
+        double minWavenumberCm1 = Double.POSITIVE_INFINITY;
+        double maxWavenumberCm1 = Double.NEGATIVE_INFINITY;
+
+        BandTally(int moleculeId, int isotopologue, String upperGlobal, String lowerGlobal) {
+            this.moleculeId = moleculeId;
+            this.isotopologue = isotopologue;
+            this.upperGlobal = upperGlobal;
+            this.lowerGlobal = lowerGlobal;
         }
     }
 

@@ -3,6 +3,7 @@ package org.linewright.reference.compare;
 import java.io.IOException;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 import org.linewright.ingest.line.LineBatch;
@@ -57,10 +58,10 @@ final class LineWindow implements AutoCloseable {
     }
 
     /** Numeric fields compared between paired lines: every double column. */
-    static final LineColumn[] NUMERIC_COMPARED = java.util.Arrays.stream(LineColumn.values())
+    static final LineColumn[] NUMERIC_COMPARED = Arrays.stream(LineColumn.values())
             .filter(c -> c.kind() == LineColumn.Kind.DOUBLE).toArray(LineColumn[]::new);
     /** Text fields compared between paired lines: every text column. */
-    static final LineColumn[] TEXT_COMPARED = java.util.Arrays.stream(LineColumn.values())
+    static final LineColumn[] TEXT_COMPARED = Arrays.stream(LineColumn.values())
             .filter(c -> c.kind() == LineColumn.Kind.TEXT).toArray(LineColumn[]::new);
 
     /*
@@ -159,22 +160,13 @@ final class LineWindow implements AutoCloseable {
 
     private static long[] filled(int n) {
         long[] a = new long[n];
-        java.util.Arrays.fill(a, -1L);
+        Arrays.fill(a, -1L);
         return a;
     }
 
     private static int spread(long h) {
         // the identity is already a 64-bit hash: fold its halves for the table index
         return (int) (h ^ (h >>> 32));
-    }
-
-    boolean exhausted() {
-        return exhausted;
-    }
-
-    /** Global index of the first line held. */
-    long first() {
-        return base;
     }
 
     /** Global index one past the last line loaded. */
@@ -201,12 +193,9 @@ final class LineWindow implements AutoCloseable {
         return view[(int) ((index - base) / CHUNK_ROWS)];
     }
 
-    static int row(long index, long base) {
-        return (int) ((index - base) % CHUNK_ROWS);
-    }
-
+    /** The row of line {@code index} in its chunk. */
     int row(long index) {
-        return row(index, base);
+        return (int) ((index - base) % CHUNK_ROWS);
     }
 
     double wavenumber(long index) {
