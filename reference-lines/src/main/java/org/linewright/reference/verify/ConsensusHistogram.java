@@ -1,21 +1,26 @@
 package org.linewright.reference.verify;
 
+import java.util.Arrays;
+
 /**
  * The median of many values that cluster tightly around a known centre, in bounded memory: a histogram of
  * ln(value/centre) with {@value #BINS} bins of width {@value #BIN_WIDTH} over ±{@value #HALF_RANGE}, plus counts
  * below and above. The median is the centre of its bin, so it is exact to ±{@value #BIN_WIDTH}/2 relative when it
- * falls inside the range ({@link #median()} returns NaN otherwise).
+ * falls inside the range. Otherwise (the lines disagree with the centre by more than 10 %, e.g. another
+ * partition-sum convention) the median of an evenly thinned sample of at most {@value #SAMPLE} values stands in.
  */
 final class ConsensusHistogram {
     static final double HALF_RANGE = 0.1;
     static final double BIN_WIDTH = 1e-5;
     static final int BINS = 20_001;
+    static final int SAMPLE = 4096;
 
     private final double centre;
     private final int[] counts = new int[BINS];
     private long below;
     private long above;
     private long total;
+    private final ResidualSeries sample = new ResidualSeries(SAMPLE);
 
     ConsensusHistogram(double centre) {
         if (!(centre > 0) || Double.isInfinite(centre)) {
@@ -27,6 +32,7 @@ final class ConsensusHistogram {
     void add(double value) {
         double x = Math.log(value / centre);
         total++;
+        sample.add(value, 0.0);
         if (!(x >= -HALF_RANGE)) {
             below++;
         } else if (x > HALF_RANGE) {
@@ -42,14 +48,19 @@ final class ConsensusHistogram {
         return total;
     }
 
-    /** The median value (lower median for an even count), or NaN when it lies outside the histogram. */
+    /**
+     * The median value (lower median for an even count), from the histogram when it lies inside it, else from the
+     * thinned sample; NaN when nothing was added.
+     */
     double median() {
         if (total == 0) {
             return Double.NaN;
         }
         long rank = (total + 1) / 2;
-        if (rank <= below) {
-            return Double.NaN;
+        if (rank <= below || rank > total - above) {
+            double[] values = sample.x();
+            Arrays.sort(values);
+            return values[(values.length - 1) / 2];
         }
         long seen = below;
         for (int k = 0; k < BINS; k++) {

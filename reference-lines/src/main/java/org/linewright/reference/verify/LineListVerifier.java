@@ -373,10 +373,6 @@ public final class LineListVerifier {
 
         void resolveConsensus() {
             consensus = histogram == null ? Double.NaN : histogram.median();
-            if (histogram != null && Double.isNaN(consensus)) {
-                // the median lies more than 10 % from the centre: the registry's value is the only yardstick left
-                consensus = registryQOverAbundance;
-            }
         }
 
         IsotopologueSummary summary() {

@@ -51,6 +51,22 @@ class LineListVerifierFaultTest {
         assertEquals(ParFiles.intensity(original), f.expected(), 1.5e-3 * ParFiles.intensity(original));
     }
 
+    /**
+     * Every intensity doubled (as if computed with half the partition sum, e.g. another nuclear-spin convention):
+     * the lines agree with each other, so no line is flagged, but the isotopologue's Q(296 K)/abundance is half
+     * the registry's (samples README: registry confirmed to 2e-3) and is reported once.
+     */
+    @Test
+    void allIntensitiesScaledIsOneRegistryFinding() throws IOException {
+        List<String> records = ParFiles.records(ReferenceData.hitranSample("sample_PH3.par"));
+        records.replaceAll(r -> ParFiles.withIntensity(r, 2 * ParFiles.intensity(r)));
+        VerificationReport report = verify(ParFiles.write(temp.resolve("ph3-doubled.par"), records));
+        assertEquals(1, report.count(Check.REGISTRY_VALUES), () -> report.findings().toString());
+        assertEquals(0, report.count(Check.INTENSITY_RELATION));
+        IsotopologueSummary ph3 = report.isotopologues().get(0);
+        assertEquals(-0.5, ph3.registryDeviation(), 2e-3);
+    }
+
     /** A negative E″ (a convention for "unknown" in some lists) and a duplicated record are both reported. */
     @Test
     void negativeLowerEnergyAndDuplicateAreReported() throws IOException {
