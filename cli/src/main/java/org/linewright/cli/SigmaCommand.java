@@ -9,7 +9,6 @@ import java.util.concurrent.Callable;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
-import org.linewright.broadening.wings.WingCutoff;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.cli.plot.CrossSectionPlot;
 import org.linewright.cli.plot.PlotStyle;
@@ -103,9 +102,8 @@ public final class SigmaCommand implements Callable<Integer> {
             description = "Unit of bare numbers in --between (and --step with GHz): cm-1, um or GHz (default ${DEFAULT-VALUE}).")
     private String unit;
 
-    @Option(names = "--cutoff", paramLabel = "CM1", defaultValue = "25",
-            description = "Wing cutoff distance from each line centre in cm-1 (default ${DEFAULT-VALUE}).")
-    private double cutoffCm1;
+    @Mixin
+    private WingOptions wingOptions;
 
     @Option(names = "--engine", paramLabel = "ID", defaultValue = "exact",
             description = "Summation engine: exact or fast (default ${DEFAULT-VALUE}).")
@@ -152,9 +150,6 @@ public final class SigmaCommand implements Callable<Integer> {
                 : CrossSectionFormat.parse(format);
         Composition composition = backgroundOptions.requiredComposition();
         LineShapeKind lineShape = parseShape(shape);
-        if (!(cutoffCm1 > 0)) {
-            throw new InputException("--cutoff: " + cutoffCm1 + " (expected a positive distance in cm-1)");
-        }
         if (!(threshold >= 0) || Double.isInfinite(threshold)) {
             throw new InputException("--threshold: " + threshold + " (expected a non-negative intensity in cm/molecule)");
         }
@@ -166,7 +161,7 @@ public final class SigmaCommand implements Callable<Integer> {
         for (Path dir : stores) {
             opened.add(LineStore.open(dir));
         }
-        WingTreatment wings = WingTreatment.defaults().withCutoff(WingCutoff.fixed(cutoffCm1));
+        WingTreatment wings = wingOptions.treatment();
         WidthOptions widths = backgroundOptions.widthOptions();
         CrossSectionRequest request = new CrossSectionRequest(temperature.kelvin(), pressure.atm(), composition, grid,
                 wings, lineShape, threshold, selection, widths);

@@ -57,6 +57,46 @@ public interface WingCutoff {
         return new PressureScaledCutoff(distancePerAtmCm1, minDistanceCm1, maxDistanceCm1);
     }
 
+    /** Lower bound of the pressure-scaled rule chosen by {@link #of}, cm⁻¹. */
+    double PRESSURE_RULE_MIN_CM1 = 1.0;
+
+    /**
+     * The cutoff a user describes with a cap and at most one rule: a multiple of each line's Voigt HWHM, or a
+     * distance per atm of pressure (bounded below by {@link #PRESSURE_RULE_MIN_CM1}), both capped; with neither,
+     * the cap itself as a fixed distance.
+     *
+     * @param capCm1            the fixed distance, or the cap of a rule; positive
+     * @param hwhmMultipleOrNaN the HWHM multiple, or NaN for none
+     * @param perAtmCm1OrNaN    the distance per atm, or NaN for none
+     * @throws org.linewright.ingest.InputException for a non-positive value or two rules at once
+     */
+    static WingCutoff of(double capCm1, double hwhmMultipleOrNaN, double perAtmCm1OrNaN) {
+        if (!(capCm1 > 0)) {
+            throw new org.linewright.ingest.InputException("cutoff: " + capCm1 + " (expected a positive distance in cm-1)");
+        }
+        boolean hwhm = !Double.isNaN(hwhmMultipleOrNaN);
+        boolean perAtm = !Double.isNaN(perAtmCm1OrNaN);
+        if (hwhm && perAtm) {
+            throw new org.linewright.ingest.InputException(
+                    "cutoff: a HWHM multiple and a distance per atm given together (expected one rule)");
+        }
+        if (hwhm) {
+            if (!(hwhmMultipleOrNaN > 0)) {
+                throw new org.linewright.ingest.InputException("cutoff HWHM multiple: " + hwhmMultipleOrNaN
+                        + " (expected a positive number)");
+            }
+            return hwhmMultiple(hwhmMultipleOrNaN, capCm1);
+        }
+        if (perAtm) {
+            if (!(perAtmCm1OrNaN > 0)) {
+                throw new org.linewright.ingest.InputException("cutoff per atm: " + perAtmCm1OrNaN
+                        + " (expected a positive cm-1 per atm)");
+            }
+            return pressureScaled(perAtmCm1OrNaN, Math.min(PRESSURE_RULE_MIN_CM1, capCm1), capCm1);
+        }
+        return fixed(capCm1);
+    }
+
     /** @return the policy without cutoff (the whole grid) */
     static WingCutoff none() {
         return NoCutoff.INSTANCE;

@@ -35,9 +35,10 @@ public final class Demo {
         this.quiet = quiet;
     }
 
-    /** The steps this build runs: stage the data, ingest the lines, verify them, draw the stick spectrum. */
+    /** The steps this build runs: stage the data, ingest the lines, verify them, draw the stick spectrum, build the table. */
     public static List<DemoStep> availableSteps() {
-        return List.of(new StageDataStep(), new IngestStep(), new VerifyStep(), new StickSpectrumStep());
+        return List.of(new StageDataStep(), new IngestStep(), new VerifyStep(), new StickSpectrumStep(),
+                new TableStep());
     }
 
     /**

@@ -24,7 +24,7 @@ class DemoTest {
     void demoWritesReportsAndStickPlot(@TempDir Path out) throws IOException {
         Assumptions.assumeTrue(Files.isRegularFile(SHIPPED.resolve("plan.toml")), "shipped demo folder not found");
         DemoReport report = new Demo(SHIPPED, out, Demo.availableSteps(), true).run(Demo.StepListener.NONE);
-        assertEquals(4, report.steps().size());
+        assertEquals(5, report.steps().size());
         // the synthetic lines are generated from the S-A relation (Simeckova et al. 2006) with the registry's
         // Q(296 K) and abundances: the verify step must pass them
         assertTrue(Files.readString(out.resolve(VerifyStep.REPORT_FILE)).contains("result: PASSED"));
@@ -40,6 +40,16 @@ class DemoTest {
         assertTrue(Files.isRegularFile(out.resolve("data/synthetic-co.par.bz2")));
         var image = ImageIO.read(out.resolve(StickSpectrumStep.PLOT_FILE).toFile());
         assertEquals(1200, image.getWidth());
+        // the table step: the table named in demo/plan.toml, with the plan's axes, its checksum and its plot
+        var table = org.linewright.grid.table.CrossSectionTable.open(out.resolve("tables/synthetic-subneptune.arrow"));
+        assertEquals(java.util.List.of(1e-3, 1e-1, 10.0),
+                java.util.Arrays.stream(table.pressureBar()).boxed().toList());
+        assertEquals(java.util.List.of(500.0, 800.0, 1100.0),
+                java.util.Arrays.stream(table.temperatureK()).boxed().toList());
+        assertEquals(table.metadata().get("sigma_sha256"), table.sigmaSha256());
+        assertTrue(Files.isRegularFile(out.resolve("tables/synthetic-subneptune.arrow.sha256")));
+        assertTrue(ImageIO.read(out.resolve(TableStep.PLOT).toFile()).getWidth() > 0);
+        assertTrue(html.contains("plots/cross-sections.png"), html);
     }
 
     @Test

@@ -1,0 +1,78 @@
+package org.linewright.cli.table;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.linewright.cli.plot.CrossSectionPlot;
+import org.linewright.cli.plot.PlotStyle;
+import org.linewright.grid.table.CrossSectionTable;
+
+/**
+ * Plots a built table: σ at every temperature for the middle pressure, and at every other pressure for the middle
+ * temperature. Grids of more points than a picture has pixels are reduced to the largest σ of each group of
+ * neighbouring points (peaks stay visible).
+ */
+public final class TablePlot {
+    /** Points drawn at most per curve. */
+    static final int MAX_POINTS = 8_000;
+
+    private TablePlot() {
+    }
+
+    /** Writes the plot of {@code table} to {@code png}. */
+    public static void write(CrossSectionTable table, Path png, String title) throws IOException {
+        double[] nu = table.wavenumberCm1();
+        double[] p = table.pressureBar();
+        double[] t = table.temperatureK();
+        int pm = p.length / 2;
+        int tm = t.length / 2;
+        List<CrossSectionPlot.Series> series = new ArrayList<>();
+        for (int j = 0; j < t.length; j++) {
+            series.add(new CrossSectionPlot.Series(label(p[pm], t[j]), reduce(table.sigma(pm, j))));
+        }
+        for (int i = 0; i < p.length; i++) {
+            if (i != pm) {
+                series.add(new CrossSectionPlot.Series(label(p[i], t[tm]), reduce(table.sigma(i, tm))));
+            }
+        }
+        CrossSectionPlot.write(png, PlotStyle.of(title), reduceAxis(nu), series, false);
+    }
+
+    private static String label(double pressureBar, double temperatureK) {
+        return String.format(Locale.ROOT, "p = %.3g bar, T = %.0f K", pressureBar, temperatureK);
+    }
+
+    private static int group(int n) {
+        return (n + MAX_POINTS - 1) / MAX_POINTS;
+    }
+
+    private static double[] reduce(double[] sigma) {
+        int g = group(sigma.length);
+        if (g <= 1) {
+            return sigma;
+        }
+        double[] out = new double[(sigma.length + g - 1) / g];
+        for (int k = 0; k < out.length; k++) {
+            double max = 0;
+            for (int i = k * g; i < Math.min(sigma.length, (k + 1) * g); i++) {
+                max = Math.max(max, sigma[i]);
+            }
+            out[k] = max;
+        }
+        return out;
+    }
+
+    private static double[] reduceAxis(double[] nu) {
+        int g = group(nu.length);
+        if (g <= 1) {
+            return nu;
+        }
+        double[] out = new double[(nu.length + g - 1) / g];
+        for (int k = 0; k < out.length; k++) {
+            out[k] = nu[Math.min(nu.length - 1, k * g + g / 2)];
+        }
+        return out;
+    }
+}

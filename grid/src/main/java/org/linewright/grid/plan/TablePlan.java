@@ -1,0 +1,171 @@
+package org.linewright.grid.plan;
+
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.wings.ChiFactorKind;
+import org.linewright.broadening.wings.WingCutoff;
+import org.linewright.broadening.wings.WingTreatment;
+import org.linewright.grid.wavenumber.WavenumberGrid;
+import org.linewright.ingest.partition.TableSpec;
+import org.linewright.ingest.units.PhysicalConstants;
+
+/**
+ * A validated table plan: which lines, on which wavenumber grid, at which pressures and temperatures, broadened by
+ * which background gases, with which line shape and engine, written where. Read from TOML by {@link PlanReader};
+ * every path is absolute (resolved against the plan file's folder).
+ *
+ * @param planFile            the plan file (absolute)
+ * @param sources             raw line lists or line-store folders, in the order given
+ * @param grid                the wavenumber grid in cm⁻¹
+ * @param pressuresBar        pressures, bar, ascending, all positive
+ * @param temperaturesK       temperatures, K, ascending, all positive
+ * @param composition         background gas mole fractions (sum 1)
+ * @param profile             line shape, engine and wing options
+ * @param species             molecule / isotopologue selection (empty: every line)
+ * @param partitionTables     user partition-sum tables, {@code MOL/ISO=FILE} (files absolute)
+ * @param moleculeDataOrNull  user isotopologue metadata file, or null
+ * @param widths              width source options
+ * @param blockPoints         wavenumber points per block of the build (the unit of incremental rebuilds)
+ * @param outputTable         the table file: {@code .arrow} for Arrow IPC, {@code .h5} for HDF5
+ * @param precision           σ element type in the table
+ */
+public record TablePlan(Path planFile, List<Path> sources, WavenumberGrid grid, double[] pressuresBar,
+                        double[] temperaturesK, Composition composition, Profile profile, Species species,
+                        List<TableSpec> partitionTables, Path moleculeDataOrNull, Widths widths, int blockPoints,
+                        Path outputTable, Precision precision) {
+
+    /** Pascal per bar (definition of the bar). */
+    public static final double PA_PER_BAR = 1.0e5;
+
+    /** Default wavenumber points per build block. */
+    public static final int DEFAULT_BLOCK_POINTS = 20_000;
+
+    public TablePlan {
+        sources = List.copyOf(sources);
+        pressuresBar = pressuresBar.clone();
+        temperaturesK = temperaturesK.clone();
+        partitionTables = List.copyOf(partitionTables);
+    }
+
+    /** A pressure in bar as atmospheres (the unit of line-list widths). */
+    public static double barToAtm(double pressureBar) {
+        return pressureBar * PA_PER_BAR / PhysicalConstants.STANDARD_ATMOSPHERE_PA;
+    }
+
+    /** Element type of σ in a written table. */
+    public enum Precision {
+        FLOAT32, FLOAT64;
+
+        /** The plan / metadata spelling: {@code float32} or {@code float64}. */
+        public String id() {
+            return name().toLowerCase(Locale.ROOT);
+        }
+    }
+
+    /**
+     * Line shape and engine.
+     *
+     * @param engine                   engine id: {@code exact} or {@code fast}
+     * @param tolerance                the fast engine's relative tolerance
+     * @param shape                    the line shape
+     * @param cutoffCm1                wing cutoff distance from the line centre, cm⁻¹ (also the reach of a line
+     *                                 into neighbouring build blocks)
+     * @param removePedestal           subtract the profile's value at the cutoff
+     * @param chiFactor                sub-Lorentzian far-wing factor
+     * @param thresholdCmPerMolecule   lines with S(T) below this are skipped (0: none)
+     */
+    public record Profile(String engine, double tolerance, LineShapeKind shape, double cutoffCm1,
+                          double cutoffHwhmMultiple, double cutoffPerAtmCm1, boolean removePedestal,
+                          ChiFactorKind chiFactor, double thresholdCmPerMolecule) {
+        /** The wing treatment of this profile: the cutoff rule (capped at {@code cutoffCm1}), pedestal, χ. */
+        public WingTreatment wings() {
+            return new WingTreatment(WingCutoff.of(cutoffCm1, cutoffHwhmMultiple, cutoffPerAtmCm1), removePedestal,
+                    chiFactor);
+        }
+    }
+
+    /**
+     * Species selection: lines pass when their molecule is listed or their (molecule, isotopologue) pair is; with
+     * both lists empty every line passes.
+     *
+     * @param molecules      molecule numbers
+     * @param isotopologues  {@code {molecule, isotopologue}} pairs
+     */
+    public record Species(List<Integer> molecules, List<int[]> isotopologues) {
+        public Species {
+            molecules = List.copyOf(molecules);
+            isotopologues = List.copyOf(isotopologues);
+        }
+
+        /** True when no selection is set. */
+        public boolean all() {
+            return molecules.isEmpty() && isotopologues.isEmpty();
+        }
+
+        /** Text form for metadata, e.g. {@code molecules=5 isotopologues=2/1}. */
+        public String describe() {
+            if (all()) {
+                return "all";
+            }
+            StringBuilder b = new StringBuilder();
+            for (int m : molecules) {
+                b.append(b.length() == 0 ? "" : " ").append(m);
+            }
+            for (int[] i : isotopologues) {
+                b.append(b.length() == 0 ? "" : " ").append(i[0]).append('/').append(i[1]);
+            }
+            return b.toString();
+        }
+    }
+
+    /**
+     * Where Lorentz widths come from.
+     *
+     * @param order           width sources in order of preference (labels such as {@code line}, {@code rule},
+     *                        {@code table}, {@code user}, {@code air-proxy}, {@code default}); empty: the
+     *                        calculator's default order
+     * @param forbidDefaults  fail instead of falling back to a default width
+     */
+    public record Widths(List<String> order, boolean forbidDefaults) {
+        public Widths {
+            order = List.copyOf(order);
+        }
+    }
+
+    /** Pressures in atm, in plan order. */
+    public double[] pressuresAtm() {
+        double[] a = new double[pressuresBar.length];
+        for (int i = 0; i < a.length; i++) {
+            a[i] = barToAtm(pressuresBar[i]);
+        }
+        return a;
+    }
+
+    /** Folder of the plan file (paths in the plan are relative to it). */
+    public Path baseDir() {
+        return planFile.getParent();
+    }
+
+    /** Every parameter that affects σ, as text, for metadata and block hashes (paths excluded). */
+    public Map<String, String> describe() {
+        Map<String, String> m = new LinkedHashMap<>(grid.describe());
+        m.put("composition", composition.toString());
+        m.put("engine", profile.engine());
+        m.put("tolerance", Double.toString(profile.tolerance()));
+        m.put("shape", profile.shape().name().toLowerCase(Locale.ROOT));
+        m.put("cutoff_cm1", Double.toString(profile.cutoffCm1()));
+        m.put("remove_pedestal", Boolean.toString(profile.removePedestal()));
+        m.put("chi_factor", profile.chiFactor().name().toLowerCase(Locale.ROOT));
+        m.put("threshold_cm_per_molecule", Double.toString(profile.thresholdCmPerMolecule()));
+        m.put("species", species.describe());
+        m.put("width_order", String.join(",", widths.order()));
+        m.put("forbid_default_widths", Boolean.toString(widths.forbidDefaults()));
+        m.put("block_points", Integer.toString(blockPoints));
+        return m;
+    }
+}

@@ -1,0 +1,94 @@
+package org.linewright.grid.table;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.linewright.broadening.background.BackgroundGas;
+import org.linewright.broadening.sources.WidthSource;
+import org.linewright.broadening.sources.WidthSourceTally;
+import org.linewright.broadening.wings.WingTreatment;
+import org.linewright.grid.calc.CrossSectionCalculator;
+import org.linewright.grid.calc.CrossSectionRequest;
+import org.linewright.grid.calc.CrossSectionResult;
+import org.linewright.grid.calc.LineSelection;
+import org.linewright.grid.calc.ProgressListener;
+import org.linewright.broadening.sources.WidthOptions;
+import org.linewright.grid.engine.CrossSectionEngine;
+import org.linewright.grid.engine.EngineFactory;
+import org.linewright.grid.plan.TablePlan;
+import org.linewright.grid.wavenumber.WavenumberGrid;
+import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.store.LineStore;
+
+/**
+ * The table builder's blocks computed by the cross-section calculator with the plan's engine: each block is one
+ * {@link CrossSectionCalculator#compute} on the block's slice of the grid, restricted to the lines whose stored
+ * centres lie within the block's reach. The engine uses the build's threads (same bits for any count).
+ */
+public final class CalculatorBlocks implements BlockCalculator {
+    private final CrossSectionCalculator calculator;
+    private final CrossSectionEngine engine;
+    private final TablePlan plan;
+    private final WingTreatment wings;
+    private final LineSelection selection;
+    private final WidthOptions widths;
+
+    private CalculatorBlocks(TablePlan plan, List<LineStore> stores, MoleculeRegistry registry, int threads) {
+        this.plan = plan;
+        this.calculator = new CrossSectionCalculator(stores, registry);
+        this.wings = plan.profile().wings();
+        this.engine = EngineFactory.create(plan.profile().engine(), threads, wings, plan.profile().tolerance());
+        int[] molecules = plan.species().molecules().stream().mapToInt(Integer::intValue).toArray();
+        this.selection = new LineSelection(molecules, plan.species().isotopologues().toArray(new int[0][]));
+        List<WidthSource> order = new ArrayList<>();
+        for (String label : plan.widths().order()) {
+            order.add(WidthSource.byLabel(label));
+        }
+        WidthOptions w = WidthOptions.DEFAULTS.withOrder(order);
+        this.widths = plan.widths().forbidDefaults() ? w.withDefaultsForbidden() : w;
+    }
+
+    /** The factory the build command and the demo use. */
+    public static TableBuilder.CalculatorFactory factory() {
+        return CalculatorBlocks::new;
+    }
+
+    @Override
+    public BlockResult compute(WavenumberGrid blockGrid, double pressureAtm, double temperatureK, double lineMinCm1,
+                               double lineMaxCm1) {
+        CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm, plan.composition(), blockGrid,
+                wings, plan.profile().shape(), plan.profile().thresholdCmPerMolecule(), selection, widths);
+        // the calculator's range is half-open [low, high); the block's reach is closed
+        CrossSectionResult r = calculator.compute(request, engine, lineMinCm1, Math.nextUp(lineMaxCm1),
+                ProgressListener.NONE);
+        Map<String, Long> counts = new LinkedHashMap<>();
+        WidthSourceTally tally = r.widthSources();
+        for (BackgroundGas gas : BackgroundGas.values()) {
+            for (WidthSource source : WidthSource.values()) {
+                long n = tally.widths(gas, source);
+                if (n > 0) {
+                    counts.put("width." + gas.label() + "." + source.label(), n);
+                }
+            }
+        }
+        return new BlockResult(r.sigmaCm2PerMolecule(), r.linesUsed(), r.linesBelowThreshold(), counts,
+                r.estimatedRelativeError(), r.warnings());
+    }
+
+    @Override
+    public Map<String, String> describe() {
+        Map<String, String> m = new LinkedHashMap<>();
+        m.put("engine", engine.id());
+        engine.describe().forEach((k, v) -> m.put("engine." + k, v));
+        wings.describe().forEach((k, v) -> m.put("wings." + k, v));
+        m.put("selection", selection.describe());
+        m.put("widths", widths.describe());
+        return m;
+    }
+
+    @Override
+    public void close() {
+        engine.close();
+    }
+}

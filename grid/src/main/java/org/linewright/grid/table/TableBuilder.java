@@ -1,0 +1,313 @@
+package org.linewright.grid.table;
+
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+import org.linewright.grid.manifest.BlockLayout;
+import org.linewright.grid.manifest.BlockStore;
+import org.linewright.grid.manifest.BuildManifest;
+import org.linewright.grid.manifest.LineReachHasher;
+import org.linewright.grid.plan.LineCache;
+import org.linewright.grid.plan.TablePlan;
+import org.linewright.ingest.InputException;
+import org.linewright.ingest.ToolVersion;
+import org.linewright.ingest.partition.PartitionSums;
+import org.linewright.ingest.partition.TableSpec;
+import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.store.LineQuery;
+import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.store.SourceMetadata;
+
+/**
+ * Builds a plan's table block by block, reusing what an earlier build computed.
+ *
+ * <p>The grid is cut into fixed blocks ({@link BlockLayout}); each (p, T, block) cell is computed alone from the
+ * lines whose centres lie within the block's reach (the wing cutoff plus a margin for pressure shifts), so a cell
+ * is the same bit for bit whether computed in a full build, a rebuild or a resumed build. Each cell has an input
+ * hash — SHA-256 over the tool version, every parameter of the plan and of the calculator, the partition-sum
+ * files, the cell's p, T and grid indices and the hash of the lines within its reach ({@link LineReachHasher}) —
+ * and its result is kept under that hash in the work folder {@code TABLE.work/} ({@link BlockStore}). A build
+ * computes only the cells whose result is not there yet: after a line list changes only the blocks that see a
+ * change are recomputed; after an interruption the build resumes with the cells not yet saved.
+ */
+public final class TableBuilder {
+    /**
+     * Extra reach per atm of pressure beyond the cutoff, cm⁻¹/atm: lines pushed into a block by their pressure
+     * shift. The same margin the cross-section calculator reads beyond its cutoff (measured shifts are below
+     * 0.1 cm⁻¹/atm, from memory), so a table cell sees the lines a single cross section of the whole grid sees.
+     */
+    public static final double SHIFT_MARGIN_CM1_PER_ATM = 1.0;
+
+    private TableBuilder() {
+    }
+
+    /** Makes the calculator for a build once the plan's stores are open. */
+    @FunctionalInterface
+    public interface CalculatorFactory {
+        /**
+         * @param plan     the plan
+         * @param stores   the plan's line stores, in plan order
+         * @param registry the registry with the plan's partition-sum tables and molecule data attached
+         * @param threads  threads the engine may use
+         */
+        BlockCalculator create(TablePlan plan, List<LineStore> stores, MoleculeRegistry registry, int threads)
+                throws IOException;
+    }
+
+    /** The work folder of a table: {@code TABLE.work} beside it. */
+    public static Path workDir(Path table) {
+        return table.resolveSibling(table.getFileName() + ".work");
+    }
+
+    /** The registry a plan asks for: built-in, plus its molecule data and partition-sum tables. */
+    public static MoleculeRegistry registry(TablePlan plan) throws IOException {
+        MoleculeRegistry base = MoleculeRegistry.builtIn();
+        if (plan.moleculeDataOrNull() != null) {
+            base = base.withUserFile(plan.moleculeDataOrNull());
+        }
+        return PartitionSums.of(base).withTables(plan.partitionTables()).attachedRegistry();
+    }
+
+    /**
+     * Builds (or, with {@code dryRun}, only plans) the table of {@code plan}.
+     *
+     * @param factory   the calculator
+     * @param threads   threads for the engine (results are the same for any count)
+     * @param dryRun    hash and count, compute and write nothing
+     * @param listener  progress
+     */
+    public static BuildReport build(TablePlan plan, CalculatorFactory factory, int threads, boolean dryRun,
+                                    BuildListener listener) throws IOException {
+        long t0 = System.nanoTime();
+        MoleculeRegistry registry = registry(plan);
+        LineCache.Loaded loaded = LineCache.load(plan.sources(), plan.baseDir().resolve(LineCache.CACHE_DIR),
+                registry, listener);
+        double maxPressureAtm = plan.pressuresAtm()[plan.pressuresBar().length - 1];
+        double reach = plan.profile().cutoffCm1() + SHIFT_MARGIN_CM1_PER_ATM * maxPressureAtm;
+        BlockLayout layout = new BlockLayout(plan.grid(), plan.blockPoints(), reach);
+        LineReachHasher.Result lineHashes = LineReachHasher.hash(loaded.stores(), speciesQuery(plan), layout);
+        long linesInStores = 0;
+        for (LineStore s : loaded.stores()) {
+            linesInStores += s.totalLines();
+        }
+        Path work = workDir(plan.outputTable());
+        try (BlockCalculator calculator = factory.create(plan, loaded.stores(), registry, threads)) {
+            Map<String, String> parameters = parameters(plan, calculator);
+            String parametersHash = sha256Hex(parameters.toString().getBytes(StandardCharsets.UTF_8));
+            int np = plan.pressuresBar().length;
+            int nt = plan.temperaturesK().length;
+            int nb = layout.blocks();
+            String[][][] cellHash = new String[np][nt][nb];
+            BuildManifest manifest = BuildManifest.create();
+            manifest.put("table", plan.outputTable().getFileName().toString());
+            manifest.put("tool_version", ToolVersion.get());
+            manifest.put("parameters_sha256", parametersHash);
+            manifest.put("blocks", Integer.toString(nb));
+            manifest.put("block_points", Integer.toString(layout.blockPoints()));
+            manifest.put("reach_cm1", Double.toString(reach));
+            for (int b = 0; b < nb; b++) {
+                manifest.put("block." + b + ".range_cm1", layout.slice(b).firstCm1() + " " + layout.slice(b).lastCm1());
+                manifest.put("block." + b + ".lines", Long.toString(lineHashes.lines()[b]));
+                manifest.put("block." + b + ".lines_sha256", lineHashes.hashes()[b]);
+            }
+            BlockStore blocks = dryRun ? null : new BlockStore(work);
+            List<String> pending = new ArrayList<>();
+            long pendingPoints = 0;
+            for (int p = 0; p < np; p++) {
+                for (int t = 0; t < nt; t++) {
+                    for (int b = 0; b < nb; b++) {
+                        String h = cellHash(parametersHash, lineHashes.hashes()[b], plan.pressuresBar()[p],
+                                plan.temperaturesK()[t], layout.fromIndex(b), layout.toIndex(b));
+                        cellHash[p][t][b] = h;
+                        manifest.put(BuildManifest.cellKey(p, t, b), h);
+                        boolean done = dryRun ? java.nio.file.Files.isRegularFile(work.resolve("blocks").resolve(h + ".blk"))
+                                : blocks.has(h);
+                        if (!done) {
+                            pending.add(describeCell(plan, layout, p, t, b));
+                            pendingPoints += layout.toIndex(b) - layout.fromIndex(b);
+                        }
+                    }
+                }
+            }
+            int cells = np * nt * nb;
+            listener.planned(cells, pending.size(), pendingPoints);
+            if (dryRun) {
+                return new BuildReport(plan.outputTable(), true, cells, pending.size(), cells - pending.size(),
+                        pending, linesInStores, 0, Map.of(), 0, List.of(), null, loaded.ingested(),
+                        (System.nanoTime() - t0) * 1e-9);
+            }
+            manifest.write(work);
+            long linesUsed = 0;
+            double maxError = 0;
+            Map<String, Long> counts = new TreeMap<>();
+            java.util.Set<String> warnings = new java.util.LinkedHashSet<>();
+            double[] pressuresAtm = plan.pressuresAtm();
+            int gridSize = plan.grid().size();
+            // A table that fits in memory is assembled while its blocks are read for their counts (one read each)
+            boolean inMemory = (long) np * nt * gridSize * Double.BYTES <= TableWriter.CACHE_BYTES;
+            double[][][] rows = inMemory ? new double[np][nt][] : null;
+            for (int p = 0; p < np; p++) {
+                for (int t = 0; t < nt; t++) {
+                    if (inMemory) {
+                        rows[p][t] = new double[gridSize];
+                    }
+                    for (int b = 0; b < nb; b++) {
+                        String h = cellHash[p][t][b];
+                        BlockResult r;
+                        if (blocks.has(h)) {
+                            r = inMemory ? blocks.load(h) : blocks.loadSummary(h);
+                        } else {
+                            r = calculator.compute(layout.slice(b), pressuresAtm[p], plan.temperaturesK()[t],
+                                    layout.lineMinCm1(b), layout.lineMaxCm1(b));
+                            if (r.sigmaCm2PerMolecule().length != layout.toIndex(b) - layout.fromIndex(b)) {
+                                throw new IllegalStateException("calculator returned " + r.sigmaCm2PerMolecule().length
+                                        + " values for a block of " + (layout.toIndex(b) - layout.fromIndex(b)));
+                            }
+                            blocks.save(h, r);
+                            listener.computed(p, t, b, r.sigmaCm2PerMolecule().length);
+                        }
+                        if (inMemory) {
+                            double[] s = r.sigmaCm2PerMolecule();
+                            if (s.length != layout.toIndex(b) - layout.fromIndex(b)) {
+                                throw new InputException(work + ": block file of cell " + BuildManifest.cellKey(p, t, b)
+                                        + " holds " + s.length + " points (expected "
+                                        + (layout.toIndex(b) - layout.fromIndex(b)) + "; delete the work folder)");
+                            }
+                            System.arraycopy(s, 0, rows[p][t], layout.fromIndex(b), s.length);
+                        }
+                        linesUsed += r.linesUsed();
+                        maxError = Math.max(maxError, r.estimatedRelativeError());
+                        r.counts().forEach((k, v) -> counts.merge(k, v, Long::sum));
+                        counts.merge("lines_below_threshold", r.linesBelowThreshold(), Long::sum);
+                        warnings.addAll(r.warnings());
+                    }
+                }
+            }
+            listener.writing();
+            Map<String, String> metadata = new LinkedHashMap<>();
+            metadata.put("tool_version", ToolVersion.get());
+            metadata.put("created_utc", Instant.now().toString());
+            metadata.put("plan_file", plan.planFile().getFileName().toString());
+            loaded.inputSha256().forEach((name, sha) -> metadata.put("input." + name + ".sha256", sha));
+            parameters.forEach((k, v) -> metadata.put(k, v));
+            metadata.put("pressure_bar_values", join(plan.pressuresBar()));
+            metadata.put("temperature_K_values", join(plan.temperaturesK()));
+            metadata.put("lines_in_stores", Long.toString(linesInStores));
+            metadata.put("lines_used_summed_over_cells", Long.toString(linesUsed));
+            counts.forEach((k, v) -> metadata.put("count." + k, Long.toString(v)));
+            metadata.put("estimated_relative_error", Double.toString(maxError));
+            metadata.put("build_cells", Integer.toString(cells));
+            int w = 0;
+            for (String text : warnings) {
+                metadata.put("warning." + (++w), text);
+            }
+            final BlockStore store = blocks;
+            SigmaSource sigma = inMemory ? (p, t) -> rows[p][t] : (p, t) -> {
+                double[] row = new double[gridSize];
+                for (int b = 0; b < nb; b++) {
+                    double[] s = store.load(cellHash[p][t][b]).sigmaCm2PerMolecule();
+                    System.arraycopy(s, 0, row, layout.fromIndex(b), s.length);
+                }
+                return row;
+            };
+            TableWriter.Written written = TableWriter.write(plan.outputTable(), new TableContent(
+                    plan.grid().pointsCm1(), plan.pressuresBar(), plan.temperaturesK(), sigma, plan.precision(),
+                    metadata));
+            manifest.put("table_sha256", written.fileSha256());
+            manifest.put("sigma_sha256", written.sigmaSha256());
+            manifest.write(work);
+            Set<String> keep = new HashSet<>();
+            for (String[][] byT : cellHash) {
+                for (String[] byB : byT) {
+                    keep.addAll(List.of(byB));
+                }
+            }
+            blocks.prune(keep);
+            return new BuildReport(plan.outputTable(), false, cells, pending.size(), cells - pending.size(), pending,
+                    linesInStores, linesUsed, counts, maxError, List.copyOf(warnings), written, loaded.ingested(),
+                    (System.nanoTime() - t0) * 1e-9);
+        }
+    }
+
+    /** The plan's species selection as a line query (every line when none is set). */
+    static LineQuery speciesQuery(TablePlan plan) {
+        LineQuery q = LineQuery.all();
+        int[] molecules = plan.species().molecules().stream().mapToInt(Integer::intValue).toArray();
+        if (molecules.length > 0) {
+            q = q.withMolecules(molecules);
+        }
+        for (int[] iso : plan.species().isotopologues()) {
+            q = q.withIsotopologue(iso[0], iso[1]);
+        }
+        return q;
+    }
+
+    /** Every parameter that affects σ: the plan's, the calculator's (threads excluded) and the partition files'. */
+    private static Map<String, String> parameters(TablePlan plan, BlockCalculator calculator) throws IOException {
+        Map<String, String> m = new LinkedHashMap<>();
+        m.put("tool_version", ToolVersion.get());
+        plan.describe().forEach((k, v) -> m.put("param." + k, v));
+        calculator.describe().forEach((k, v) -> {
+            if (!k.toLowerCase(Locale.ROOT).contains("thread")) {
+                m.put("calc." + k, v);
+            }
+        });
+        for (TableSpec t : plan.partitionTables()) {
+            m.put("partition_table." + t.moleculeId() + "/" + t.isotopologue() + ".sha256", SourceMetadata.sha256(t.file()));
+        }
+        if (plan.moleculeDataOrNull() != null) {
+            m.put("molecule_data.sha256", SourceMetadata.sha256(plan.moleculeDataOrNull()));
+        }
+        return m;
+    }
+
+    private static String cellHash(String parametersHash, String linesHash, double pressureBar, double temperatureK,
+                                   int fromIndex, int toIndex) {
+        ByteBuffer b = ByteBuffer.allocate(24);
+        b.putLong(Double.doubleToLongBits(pressureBar)).putLong(Double.doubleToLongBits(temperatureK))
+                .putInt(fromIndex).putInt(toIndex);
+        MessageDigest d = sha256();
+        d.update(parametersHash.getBytes(StandardCharsets.US_ASCII));
+        d.update(linesHash.getBytes(StandardCharsets.US_ASCII));
+        d.update(b.array());
+        return HexFormat.of().formatHex(d.digest());
+    }
+
+    private static String describeCell(TablePlan plan, BlockLayout layout, int p, int t, int b) {
+        return String.format(Locale.ROOT, "p=%s bar, T=%s K, %.6f-%.6f cm-1", plan.pressuresBar()[p],
+                plan.temperaturesK()[t], layout.slice(b).firstCm1(), layout.slice(b).lastCm1());
+    }
+
+    private static String join(double[] values) {
+        StringBuilder b = new StringBuilder();
+        for (double v : values) {
+            b.append(b.length() == 0 ? "" : " ").append(v);
+        }
+        return b.toString();
+    }
+
+    private static String sha256Hex(byte[] bytes) {
+        return HexFormat.of().formatHex(sha256().digest(bytes));
+    }
+
+    private static MessageDigest sha256() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
+        }
+    }
+}
