@@ -1,12 +1,18 @@
 package org.linewright.cli;
 
 import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
+import org.linewright.cli.impact.TableImpact;
+import org.linewright.cli.impact.TableImpactWriter;
 import org.linewright.cli.units.QuantityConverters;
 import org.linewright.cli.units.Wavenumber;
+import org.linewright.grid.plan.PlanReader;
+import org.linewright.grid.plan.TablePlan;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.reference.compare.CompareOptions;
@@ -40,7 +46,8 @@ import picocli.CommandLine.Model.CommandSpec;
             "",
             "Example:",
             "  linewright compare stores/co-2016 stores/co-2020 --report co-changes.csv --format csv",
-            "  linewright compare old.par new.par --window 0.1cm-1"
+            "  linewright compare old.par new.par --window 0.1cm-1",
+            "  linewright compare stores/co-2016 stores/co-2020 --plan plans/co-h2he.toml"
         })
 public final class CompareCommand implements Callable<Integer> {
     @Spec
@@ -74,6 +81,15 @@ public final class CompareCommand implements Callable<Integer> {
             description = "Changes listed one by one in the report; all are counted (default: ${DEFAULT-VALUE}).")
     private int maxListed;
 
+    @Option(names = "--plan", paramLabel = "PLAN.toml",
+            description = "Also report which (p, T, wavenumber-block) cells of this plan's table the changes reach and "
+                    + "the largest change of the cross section in each (the plan's sources are not read).")
+    private Path plan;
+
+    @Option(names = "--threads", paramLabel = "N",
+            description = "Threads for the cross sections of --plan (default: the processors; same results for any count).")
+    private Integer threads;
+
     @Mixin
     private SpeciesDataOptions speciesData;
 
@@ -91,19 +107,39 @@ public final class CompareCommand implements Callable<Integer> {
         if (maxListed < 0) {
             throw new InputException("--max-listed: " + maxListed + " (expected a whole number >= 0)");
         }
-        CompareOptions options = new CompareOptions(windowCm1, toleranceCm1, maxListed);
+        if (threads != null && threads < 1) {
+            throw new InputException("--threads: " + threads + " (expected a positive number)");
+        }
+        TablePlan tablePlan = plan == null ? null : PlanReader.read(plan);
+        // the plan's cells follow from every change, so with --plan every change is kept
+        CompareOptions options = new CompareOptions(windowCm1, toleranceCm1, plan == null ? maxListed : Integer.MAX_VALUE);
         MoleculeRegistry registry = speciesData.registry();
         ComparisonReport report;
+        List<TableImpact.Cell> cells = null;
         try (LineListInput older = LineListInput.open(oldList, registry);
              LineListInput newer = LineListInput.open(newList, registry)) {
             report = new LineListComparer(options).compare(older.store(), oldList.toString(), newer.store(),
                     newList.toString());
+            if (tablePlan != null) {
+                cells = TableImpact.assess(tablePlan, older.store(), newer.store(), report,
+                        threads == null ? Runtime.getRuntime().availableProcessors() : threads);
+            }
         }
         PrintWriter out = spec.commandLine().getOut();
+        List<TableImpact.Cell> planCells = cells;
+        ReportFiles.Content content = w -> {
+            if (planCells == null) {
+                ComparisonReportWriter.write(report, reportFormat, w);
+            } else {
+                StringWriter comparison = new StringWriter();
+                ComparisonReportWriter.write(report, reportFormat, comparison);
+                TableImpactWriter.write(comparison.toString(), plan, planCells, reportFormat, w);
+            }
+        };
         if (reportFile == null) {
-            ComparisonReportWriter.write(report, reportFormat, out);
+            content.writeTo(out);
         } else {
-            ReportFiles.write(reportFile, w -> ComparisonReportWriter.write(report, reportFormat, w));
+            ReportFiles.write(reportFile, content);
             if (!root.globalOptions().quiet()) {
                 out.printf(Locale.ROOT, "%s -> %s: %d unchanged, %d changed, %d added, %d removed; report %s%n",
                         oldList, newList, report.unchanged(), report.changed(), report.added(), report.removed(),

@@ -169,6 +169,58 @@ class VerifyCompareCommandsTest {
         assertTrue(compare.out().contains("5492 unchanged, 0 changed, 0 added, 0 removed"), compare.out());
     }
 
+    /**
+     * {@code compare --plan}: the CO 1-0 R(0) line of the real CO sample (2147.081134 cm-1) with its intensity
+     * doubled reaches only the block around it, and there σ changes by a factor close to 2 at the grid point
+     * nearest the line (σ is linear in S, common practice; the line dominates near its centre).
+     */
+    @Test
+    void comparePlanReportsTheCellsReached() throws IOException {
+        List<String> records = new ArrayList<>(Files.readAllLines(sample("sample_CO.par"), StandardCharsets.US_ASCII));
+        int index = -1;
+        for (int i = 0; i < records.size(); i++) {
+            if (records.get(i).substring(3, 15).trim().equals("2147.081134")) {
+                index = i;
+            }
+        }
+        assertTrue(index >= 0, "the CO sample holds R(0) of the 1-0 band");
+        List<String> newer = new ArrayList<>(records);
+        newer.set(index, doubled(newer.get(index)));
+        Path newFile = Files.write(temp.resolve("co-new.par"), newer, StandardCharsets.US_ASCII);
+        Path plan = Files.writeString(temp.resolve("plan.toml"), String.join("\n",
+                "[lines]",
+                "sources = [\"co-new.par\"]",
+                "[grid]",
+                "wavenumber = { from = 2100.0, to = 2200.0, step = 0.01 }",
+                "pressures_bar = [1e-3, 1.0]",
+                "temperatures_K = [296.0]",
+                "[background]",
+                "air = 1.0",
+                "[profile]",
+                "engine = \"exact\"",
+                "cutoff_cm1 = 1.0",
+                "[build]",
+                "block_points = 2000",
+                "[output]",
+                "table = \"unused.arrow\"", ""));
+        Path report = temp.resolve("plan-report.json");
+        Run r = run("compare", sample("sample_CO.par").toString(), newFile.toString(), "--plan", plan.toString(),
+                "--threads", "1", "--format", "json", "--report", report.toString());
+        assertEquals(ExitCodes.CHECK_FOUND_PROBLEMS, r.code(), r.err());
+        String json = Files.readString(report);
+        // blocks of 2000 points (20 cm-1) from 2100 cm-1: 2147.08 lies in block 2, more than the reach from its edges
+        assertEquals(2, json.split("\"block\": 2,", -1).length - 1, json);
+        assertEquals(2, json.split("\"block\": ", -1).length - 1, "one cell per pressure: " + json);
+        for (String cell : json.substring(json.indexOf("\"plan_cells\"")).split("\\{")) {
+            if (cell.contains("max_relative_change")) {
+                double rel = Double.parseDouble(cell.replaceAll("(?s).*\"max_relative_change\": ([^,]+),.*", "$1"));
+                double at = Double.parseDouble(cell.replaceAll("(?s).*\"at_wavenumber_cm1\": ([^}]+)}.*", "$1"));
+                assertTrue(rel > 0.5 && rel < 1.0 + 1e-9, cell);
+                assertEquals(2147.08, at, 0.02, cell);
+            }
+        }
+    }
+
     @Test
     void compareBadInputIsOneLineAndExitCode2() {
         assertOneErrorLine(run("compare", temp.resolve("a.par").toString(), temp.resolve("b.par").toString()));
