@@ -13,7 +13,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "linewright",
         mixinStandardHelpOptions = true,
         versionProvider = LinewrightCommand.Version.class,
-        subcommands = {IngestCommand.class, LinesCommand.class, SigmaCommand.class, BuildCommand.class, DemoCommand.class,
+        subcommands = {IngestCommand.class, LinesCommand.class, SigmaCommand.class, BuildCommand.class,
+            VerifyCommand.class, CompareCommand.class, DemoCommand.class,
             CompletionCommand.class},
         description = {
             "Turns spectral line lists into absorption cross-section tables (cm^2/molecule over wavenumber, "

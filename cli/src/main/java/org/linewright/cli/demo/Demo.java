@@ -13,7 +13,7 @@ import java.util.List;
  * {@code report.txt} and {@code report.html} into the output folder.
  *
  * <p>{@link #availableSteps()} lists the steps this build runs, in order: stage the shipped synthetic data,
- * ingest it into a line store, draw the stick spectrum (and, with the table builder, build and plot the plan's
+ * ingest it into a line store, verify the store, draw the stick spectrum (and, with the table builder, build and plot the plan's
  * table).
  */
 public final class Demo {
@@ -35,9 +35,10 @@ public final class Demo {
         this.quiet = quiet;
     }
 
-    /** The steps this build runs: stage the data, take the synthetic lines, draw the stick spectrum. */
+    /** The steps this build runs: stage the data, ingest the lines, verify them, draw the stick spectrum, build the table. */
     public static List<DemoStep> availableSteps() {
-        return List.of(new StageDataStep(), new IngestStep(), new StickSpectrumStep(), new TableStep());
+        return List.of(new StageDataStep(), new IngestStep(), new VerifyStep(), new StickSpectrumStep(),
+                new TableStep());
     }
 
     /**

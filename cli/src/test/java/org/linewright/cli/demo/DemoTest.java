@@ -24,7 +24,11 @@ class DemoTest {
     void demoWritesReportsAndStickPlot(@TempDir Path out) throws IOException {
         Assumptions.assumeTrue(Files.isRegularFile(SHIPPED.resolve("plan.toml")), "shipped demo folder not found");
         DemoReport report = new Demo(SHIPPED, out, Demo.availableSteps(), true).run(Demo.StepListener.NONE);
-        assertEquals(4, report.steps().size());
+        assertEquals(5, report.steps().size());
+        // the synthetic lines are generated from the S-A relation (Simeckova et al. 2006) with the registry's
+        // Q(296 K) and abundances: the verify step must pass them
+        assertTrue(Files.readString(out.resolve(VerifyStep.REPORT_FILE)).contains("result: PASSED"));
+        assertTrue(Files.isRegularFile(out.resolve(VerifyStep.PLOT_FILE)));
         String text = Files.readString(out.resolve("report.txt"));
         String html = Files.readString(out.resolve("report.html"));
         assertTrue(text.contains("INVENTED"), text);
