@@ -34,7 +34,8 @@ final class PngCharts {
         Path parent = pngFile.toAbsolutePath().getParent();
         Files.createDirectories(parent);
         byte[] png = BitmapEncoder.getBitmapBytes(chart, BitmapEncoder.BitmapFormat.PNG);
-        Path tmp = Files.createTempFile(parent, "." + pngFile.getFileName(), ".tmp");
+        // A plain file (not createTempFile, which makes it owner-only): plots get the usual permissions.
+        Path tmp = parent.resolve("." + pngFile.getFileName() + ".partial");
         try {
             Files.write(tmp, png);
             Files.move(tmp, pngFile, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
