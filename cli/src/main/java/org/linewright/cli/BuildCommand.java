@@ -65,6 +65,9 @@ public final class BuildCommand implements Callable<Integer> {
             description = "Also plot σ at the table's temperatures and pressures.")
     private Path plot;
 
+    @Option(names = "--plot-wavelength", description = "Draw the plot against wavelength (µm) instead of wavenumber.")
+    private boolean plotWavelength;
+
     @Override
     public Integer call() throws Exception {
         int threadCount = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
@@ -114,7 +117,8 @@ public final class BuildCommand implements Callable<Integer> {
             return ExitCodes.OK;
         }
         if (plot != null) {
-            TablePlot.write(CrossSectionTable.open(report.table()), plot, plan.outputTable().getFileName().toString());
+            TablePlot.write(CrossSectionTable.open(report.table()), plot, plan.outputTable().getFileName().toString(),
+                    plotWavelength);
         }
         if (!quiet) {
             out.printf(Locale.ROOT, "blocks: %d computed, %d reused (of %d); %d raw line list(s) ingested%n",

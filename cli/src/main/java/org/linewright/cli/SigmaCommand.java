@@ -140,6 +140,9 @@ public final class SigmaCommand implements Callable<Integer> {
     @Option(names = "--plot", paramLabel = "FILE.png", description = "Also draw σ on a log axis to this PNG file.")
     private Path plot;
 
+    @Option(names = "--plot-wavelength", description = "Draw the plot against wavelength (µm) instead of wavenumber.")
+    private boolean plotWavelength;
+
     @Mixin
     private SpeciesDataOptions speciesData;
 
@@ -176,7 +179,7 @@ public final class SigmaCommand implements Callable<Integer> {
             CrossSectionPlot.write(plot, PlotStyle.of(String.format(Locale.ROOT, "T = %s K, p = %s bar, %s",
                             fmt(temperature.kelvin()), fmt(pressure.bar()), composition)),
                     grid.pointsCm1(), List.of(new CrossSectionPlot.Series(
-                            "T = " + fmt(temperature.kelvin()) + " K", result.sigmaCm2PerMolecule())), false);
+                            "T = " + fmt(temperature.kelvin()) + " K", result.sigmaCm2PerMolecule())), plotWavelength);
         }
         if (!quiet) {
             summary(spec.commandLine().getOut(), result, grid);

@@ -23,6 +23,11 @@ public final class TablePlot {
 
     /** Writes the plot of {@code table} to {@code png}. */
     public static void write(CrossSectionTable table, Path png, String title) throws IOException {
+        write(table, png, title, false);
+    }
+
+    /** As {@link #write(CrossSectionTable, Path, String)}, with the x axis in wavelength (µm) when asked. */
+    public static void write(CrossSectionTable table, Path png, String title, boolean wavelengthAxis) throws IOException {
         double[] nu = table.wavenumberCm1();
         double[] p = table.pressureBar();
         double[] t = table.temperatureK();
@@ -37,7 +42,7 @@ public final class TablePlot {
                 series.add(new CrossSectionPlot.Series(label(p[i], t[tm]), reduce(table.sigma(i, tm))));
             }
         }
-        CrossSectionPlot.write(png, PlotStyle.of(title), reduceAxis(nu), series, false);
+        CrossSectionPlot.write(png, PlotStyle.of(title), reduceAxis(nu), series, wavelengthAxis);
     }
 
     private static String label(double pressureBar, double temperatureK) {
