@@ -14,6 +14,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
  * The ingest and lines commands end to end on the real HITRAN2020 record samples (../shared/reference-data; see
@@ -37,10 +38,7 @@ class IngestAndLinesCommandTest {
     }
 
     private static Path sample(String name) {
-        String dir = System.getProperty("linewright.referenceDir", "../shared/reference-data");
-        Path p = Paths.get(dir, "hitran2020-samples", name);
-        assumeTrue(Files.isRegularFile(p), "reference sample " + p + " not found");
-        return p;
+        return ReferenceSamples.hitranSample(name);
     }
 
     @Test

@@ -16,6 +16,7 @@ import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
  * {@code linewright sigma} end to end on the HITRAN2020 CO sample (Gordon et al. 2022, JQSRT 277, 107949; read
@@ -43,17 +44,7 @@ class SigmaCommandTest {
 
     @BeforeAll
     static void ingest() {
-        String property = System.getProperty("linewright.referenceDir");
-        Path dir = null;
-        for (String candidate : new String[] {property, "../shared/reference-data", "../../shared/reference-data"}) {
-            if (candidate != null && Files.isDirectory(Paths.get(candidate, "hitran2020-samples"))) {
-                dir = Paths.get(candidate, "hitran2020-samples");
-                break;
-            }
-        }
-        assumeTrue(dir != null, "shared reference data not found (linewright.referenceDir=" + property + ")");
-        sample = dir.resolve("sample_CO.par");
-        assumeTrue(Files.isRegularFile(sample), sample + " is absent");
+        sample = ReferenceSamples.hitranSample("sample_CO.par");
         store = tmp.resolve("store");
         Run r = run("ingest", sample.toString(), "--store", store.toString(), "-q");
         assertEquals(0, r.code(), r.err());

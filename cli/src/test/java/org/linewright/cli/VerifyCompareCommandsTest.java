@@ -19,6 +19,7 @@ import java.util.Locale;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
  * {@code linewright verify} and {@code linewright compare} on the real HITRAN2020 samples and on modified copies of
@@ -40,14 +41,7 @@ class VerifyCompareCommandsTest {
 
     /** A HITRAN2020 sample, or a visible skip when the shared reference data are absent. */
     private static Path sample(String name) {
-        String property = System.getProperty("linewright.referenceDir");
-        for (String base : new String[] {property, "../shared/reference-data", "../../shared/reference-data"}) {
-            if (base != null && Files.isRegularFile(Paths.get(base, "hitran2020-samples", name))) {
-                return Paths.get(base, "hitran2020-samples", name);
-            }
-        }
-        assumeTrue(false, "HITRAN2020 sample " + name + " not found (linewright.referenceDir=" + property + ")");
-        throw new AssertionError("unreachable");
+        return ReferenceSamples.hitranSample(name);
     }
 
     /** Columns 16–25 of a 160-character record hold S as E10.3 (common practice). */

@@ -10,6 +10,7 @@ import java.util.List;
 import org.linewright.ingest.hitran.HitranRecordReader;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.source.ReadOptions;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
  * Reads the HITRAN2020 samples of {@code reference-data/hitran2020-samples} (README there): the records with the
@@ -25,7 +26,7 @@ public final class HitranSamples {
 
     /** The folder of the samples, or a visible skip. */
     public static Path folder() {
-        return ReferenceData.require("hitran2020-samples");
+        return ReferenceSamples.dir("hitran2020-samples");
     }
 
     /** Every record of {@code sample_<name>.par} in one batch. */

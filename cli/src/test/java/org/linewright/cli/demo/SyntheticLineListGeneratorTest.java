@@ -22,6 +22,7 @@ import org.linewright.ingest.hitran.HitranRecordReader;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.source.ReadOptions;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
  * The synthetic demo lists against published spectroscopy: line positions, level energies, partition sums and
@@ -90,7 +91,7 @@ class SyntheticLineListGeneratorTest {
     @Test
     void carbonMonoxideLinesMatchRealHitran2020Lines() throws IOException {
         // Real data: HITRAN2020 sample records (Gordon et al., JQSRT 277 (2022) 107949), read-only shared data.
-        Path sample = ReferenceData.hitranSample("sample_CO.par");
+        Path sample = ReferenceSamples.hitranSample("sample_CO.par");
         Map<String, double[]> reference = new HashMap<>();
         for (String r : Files.readAllLines(sample, StandardCharsets.US_ASCII)) {
             int iso = r.charAt(2) - '0';
@@ -155,7 +156,7 @@ class SyntheticLineListGeneratorTest {
 
     /** Energies E'' of the sample's 12C16O2 (iso 1) or 13C16O2 (iso 2) levels with the given global quanta. */
     private static Map<String, Double> carbonDioxideLevels(int iso, String lowerGlobalQuanta) throws IOException {
-        Path sample = ReferenceData.hitranSample("sample_CO2.par");
+        Path sample = ReferenceSamples.hitranSample("sample_CO2.par");
         Map<String, Double> levels = new HashMap<>();
         for (String r : Files.readAllLines(sample, StandardCharsets.US_ASCII)) {
             if (r.startsWith(" 2" + iso) && r.substring(82, 97).equals(lowerGlobalQuanta)) {

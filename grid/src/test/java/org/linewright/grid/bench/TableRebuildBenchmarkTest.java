@@ -19,7 +19,7 @@ import org.linewright.grid.table.BuildListener;
 import org.linewright.grid.table.BuildReport;
 import org.linewright.grid.table.CalculatorBlocks;
 import org.linewright.grid.table.TableBuilder;
-import org.linewright.grid.testsupport.ReferenceData;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
  * Target: after 1 % of a line list's lines change (consecutive in wavenumber, as a band update would), the table
@@ -36,7 +36,7 @@ class TableRebuildBenchmarkTest {
     private Path plan(String folder, double toCm1) throws IOException {
         Path d = Files.createDirectories(dir.resolve(folder));
         for (String s : new String[] {"sample_CO.par", "sample_CO2.par", "sample_N2O.par"}) {
-            Files.copy(ReferenceData.hitranSample(s), d.resolve(s), StandardCopyOption.REPLACE_EXISTING);
+            Files.copy(ReferenceSamples.hitranSample(s), d.resolve(s), StandardCopyOption.REPLACE_EXISTING);
         }
         Path plan = d.resolve("plan.toml");
         Files.writeString(plan, """

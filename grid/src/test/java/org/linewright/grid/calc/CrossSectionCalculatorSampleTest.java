@@ -18,10 +18,10 @@ import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.ChiFactorKind;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.engine.exact.ExactEngine;
-import org.linewright.grid.testsupport.ReferenceData;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
  * The calculator with the exact engine on real HITRAN2020 samples (Gordon et al. 2022, JQSRT 277, 107949;
@@ -39,10 +39,10 @@ class CrossSectionCalculatorSampleTest {
 
     @BeforeAll
     static void ingest() throws IOException {
-        coSample = ReferenceData.hitranSample("sample_CO.par");
-        co2Sample = ReferenceData.hitranSample("sample_CO2.par");
-        coStore = LineStore.open(ReferenceData.ingest(tmp.resolve("co"), coSample));
-        co2Store = LineStore.open(ReferenceData.ingest(tmp.resolve("co2"), co2Sample));
+        coSample = ReferenceSamples.hitranSample("sample_CO.par");
+        co2Sample = ReferenceSamples.hitranSample("sample_CO2.par");
+        coStore = LineStore.open(ReferenceSamples.ingest(tmp.resolve("co"), coSample));
+        co2Store = LineStore.open(ReferenceSamples.ingest(tmp.resolve("co2"), co2Sample));
     }
 
     /** {ν, S(296 K), γ_air} of every record, from the fixed columns of the 160-character format. */

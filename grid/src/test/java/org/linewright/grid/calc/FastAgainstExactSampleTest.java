@@ -16,11 +16,11 @@ import org.linewright.broadening.wings.WingCutoff;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.EngineFactory;
-import org.linewright.grid.testsupport.ReferenceData;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.partition.PartitionSums;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
  * The fast engine against the exact one on real lines — the HITRAN2020 CO and CO2 samples
@@ -37,8 +37,8 @@ class FastAgainstExactSampleTest {
 
     @BeforeAll
     static void ingest() throws IOException {
-        store = LineStore.open(ReferenceData.ingest(tmp.resolve("store"), ReferenceData.hitranSample("sample_CO.par"),
-                ReferenceData.hitranSample("sample_CO2.par")));
+        store = LineStore.open(ReferenceSamples.ingest(tmp.resolve("store"), ReferenceSamples.hitranSample("sample_CO.par"),
+                ReferenceSamples.hitranSample("sample_CO2.par")));
     }
 
     @ParameterizedTest(name = "p = {0} atm, T = {1} K, background {2}")

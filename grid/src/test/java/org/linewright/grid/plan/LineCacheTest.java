@@ -11,10 +11,10 @@ import java.util.HexFormat;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.linewright.grid.testsupport.ReferenceData;
 import org.linewright.ingest.ToolVersion;
 import org.linewright.ingest.pipeline.IngestListener;
 import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /** Raw line lists are ingested once per content (SHA-256) and tool version; store folders are used as they are. */
 class LineCacheTest {
@@ -23,9 +23,9 @@ class LineCacheTest {
 
     @Test
     void rawListIsIngestedOnceAndStoreFoldersAreUsedAsTheyAre() throws Exception {
-        Path sample = ReferenceData.hitranSample("sample_CO.par");
+        Path sample = ReferenceSamples.hitranSample("sample_CO.par");
         Path raw = Files.copy(sample, dir.resolve("co.par"));
-        Path store = ReferenceData.ingest(dir.resolve("co2-store"), ReferenceData.hitranSample("sample_CO2.par"));
+        Path store = ReferenceSamples.ingest(dir.resolve("co2-store"), ReferenceSamples.hitranSample("sample_CO2.par"));
         Path cache = dir.resolve(LineCache.CACHE_DIR);
         MoleculeRegistry registry = MoleculeRegistry.builtIn();
 

@@ -19,7 +19,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.linewright.grid.plan.PlanReader;
 import org.linewright.grid.plan.TablePlan;
 import org.linewright.grid.testsupport.InterruptingCalculator;
-import org.linewright.grid.testsupport.ReferenceData;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
  * Incremental rebuilds and resumed builds on real lines (HITRAN2020 CO sample, Gordon et al. 2022, JQSRT 277,
@@ -79,7 +79,7 @@ class IncrementalBuildTest {
 
     @Test
     void rebuildAfterChangingOnePercentOfLinesRecomputesOnlyReachedBlocksAndMatchesAFreshBuild() throws IOException {
-        Path sample = ReferenceData.hitranSample("sample_CO.par");
+        Path sample = ReferenceSamples.hitranSample("sample_CO.par");
         List<String> records = Files.readAllLines(sample, StandardCharsets.US_ASCII);
         // 1 % of the lines, consecutive in wavenumber from 2150 cm-1 on (a band update): new air widths
         int change = records.size() / 100;
@@ -145,7 +145,7 @@ class IncrementalBuildTest {
 
     @Test
     void interruptedBuildResumesWithTheBlocksItHadNotSaved() throws IOException {
-        Path sample = ReferenceData.hitranSample("sample_CO.par");
+        Path sample = ReferenceSamples.hitranSample("sample_CO.par");
         Path resumed = plan("resumed", sample);
         int interruptAfter = 7;
         IOException e = assertThrows(IOException.class, () -> build(resumed, interruptAfter));

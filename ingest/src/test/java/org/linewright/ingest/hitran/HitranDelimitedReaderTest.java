@@ -52,7 +52,7 @@ class HitranDelimitedReaderTest {
     @ParameterizedTest
     @CsvSource({"CO,','", "CO2,'\t'", "N2O,','", "PH3,'\t'"})
     void delimitedCopiesOfTheSamplesGiveEveryValue(String molecule, char delimiter) throws IOException {
-        List<String> lines = ReferenceSamples.lines(ReferenceSamples.hitran("sample_" + molecule + "_out.par"));
+        List<String> lines = ReferenceSamples.lines(ReferenceSamples.hitranSample("sample_" + molecule + "_out.par"));
         String[] extra = broadenerColumns(molecule);
         StringBuilder csv = new StringBuilder();
         List<String> header = new ArrayList<>(List.of(BASE));

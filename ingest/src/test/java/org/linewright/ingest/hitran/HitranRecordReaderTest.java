@@ -31,7 +31,7 @@ class HitranRecordReaderTest {
         {55, 59}, {59, 67}, {146, 153}, {153, 160}};
 
     static List<String> records(String file) throws IOException {
-        return ReferenceSamples.lines(ReferenceSamples.hitran(file));
+        return ReferenceSamples.lines(ReferenceSamples.hitranSample(file));
     }
 
     static HitranRecordReader reader(String text, ReadOptions options) {
@@ -60,7 +60,7 @@ class HitranRecordReaderTest {
     void everySampleRecordParsesIntoEveryField(String file, int count, int molecule, String isotopologues) throws IOException {
         List<String> lines = records(file);
         TreeSet<Integer> isos = new TreeSet<>();
-        HitranRecordReader r = new HitranRecordReader(java.nio.file.Files.newInputStream(ReferenceSamples.hitran(file)), file, STRICT);
+        HitranRecordReader r = new HitranRecordReader(java.nio.file.Files.newInputStream(ReferenceSamples.hitranSample(file)), file, STRICT);
         forEachRow(r, (b, row, i) -> {
             String rec = lines.get(i);
             assertEquals(molecule, b.moleculeId[row]);
@@ -107,7 +107,7 @@ class HitranRecordReaderTest {
         double c = PhysicalConstants.SPEED_OF_LIGHT_CM_PER_S;
         double t = 296.0;
         int[] checked = {0};
-        HitranRecordReader r = new HitranRecordReader(java.nio.file.Files.newInputStream(ReferenceSamples.hitran(file)), file, STRICT);
+        HitranRecordReader r = new HitranRecordReader(java.nio.file.Files.newInputStream(ReferenceSamples.hitranSample(file)), file, STRICT);
         forEachRow(r, (b, row, i) -> {
             double q = iso.partitionSum(b.moleculeId[row], b.isotopologue[row], t);
             double ia = iso.naturalAbundance(b.moleculeId[row], b.isotopologue[row]);

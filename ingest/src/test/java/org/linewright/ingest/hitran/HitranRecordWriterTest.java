@@ -27,7 +27,7 @@ class HitranRecordWriterTest {
     @CsvSource({"sample_CO.par,SIX_DECIMALS", "sample_CO2.par,SIX_DECIMALS", "sample_N2O.par,SIX_DECIMALS",
         "sample_PH3.par,EXTENDED_BELOW_100"})
     void everySampleRecordRoundTripsByteForByte(String file, HitranRecordWriter.WavenumberDigits digits) throws IOException {
-        Path p = ReferenceSamples.hitran(file);
+        Path p = ReferenceSamples.hitranSample(file);
         byte[] original = Files.readAllBytes(p);
         HitranRecordReader r = new HitranRecordReader(Files.newInputStream(p), file, ReadOptions.strict(new SampleIsotopologues()));
         HitranRecordWriter w = new HitranRecordWriter(digits);

@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.nio.file.Paths;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 class EinsteinCoefficientsTest {
 
@@ -69,8 +70,7 @@ class EinsteinCoefficientsTest {
      */
     @Test
     void everyCarbonMonoxideRecordOfThePublishedSample() throws IOException {
-        Path sample = referenceDir().resolve("hitran2020-samples/sample_CO.par");
-        Assumptions.assumeTrue(Files.isReadable(sample), "reference data not found: " + sample);
+        Path sample = ReferenceSamples.hitranSample("sample_CO.par");
         int checked = 0;
         try (BufferedReader r = Files.newBufferedReader(sample, StandardCharsets.ISO_8859_1)) {
             String line;
@@ -95,12 +95,4 @@ class EinsteinCoefficientsTest {
         assertTrue(checked > 1000, "records checked: " + checked);
     }
 
-    static Path referenceDir() {
-        String property = System.getProperty("linewright.referenceDir");
-        if (property != null && Files.isDirectory(Paths.get(property))) {
-            return Paths.get(property);
-        }
-        Path one = Paths.get("../shared/reference-data");
-        return Files.isDirectory(one) ? one : Paths.get("../../shared/reference-data");
-    }
 }

@@ -40,8 +40,8 @@ class IngestPipelineTest {
 
     @Test
     void allFourSamplesAreStoredWithCountsAndDigests() throws Exception {
-        List<Path> samples = List.of(ReferenceSamples.hitran("sample_CO.par"), ReferenceSamples.hitran("sample_CO2.par"),
-                ReferenceSamples.hitran("sample_N2O.par"), ReferenceSamples.hitran("sample_PH3.par"));
+        List<Path> samples = List.of(ReferenceSamples.hitranSample("sample_CO.par"), ReferenceSamples.hitranSample("sample_CO2.par"),
+                ReferenceSamples.hitranSample("sample_N2O.par"), ReferenceSamples.hitranSample("sample_PH3.par"));
         Path store = tmp.resolve("store");
         IngestReport report = IngestPipeline.run(samples, store, IngestOptions.strict(REGISTRY), IngestListener.NONE);
 
@@ -82,7 +82,7 @@ class IngestPipelineTest {
 
     @Test
     void compressedSourceGivesTheSameLinesAndTheDigestOfTheCompressedBytes() throws Exception {
-        Path sample = ReferenceSamples.hitran("sample_PH3.par");
+        Path sample = ReferenceSamples.hitranSample("sample_PH3.par");
         Path bz2 = tmp.resolve("ph3.par.bz2");
         try (OutputStream out = new BZip2CompressorOutputStream(Files.newOutputStream(bz2))) {
             Files.copy(sample, out);
@@ -97,7 +97,7 @@ class IngestPipelineTest {
 
     @Test
     void strictIngestStopsAtTheFirstBadRecordAndLeavesTheStoreAsItWas() throws Exception {
-        Path sample = ReferenceSamples.hitran("sample_CO.par");
+        Path sample = ReferenceSamples.hitranSample("sample_CO.par");
         List<String> lines = ReferenceSamples.lines(sample);
         Path store = tmp.resolve("store");
         Path good = tmp.resolve("co.par");
@@ -124,7 +124,7 @@ class IngestPipelineTest {
 
     @Test
     void lenientIngestWritesEveryRejectVerbatimWithItsReason() throws Exception {
-        List<String> lines = ReferenceSamples.lines(ReferenceSamples.hitran("sample_CO.par"));
+        List<String> lines = ReferenceSamples.lines(ReferenceSamples.hitranSample("sample_CO.par"));
         List<String> bad = new java.util.ArrayList<>(lines.subList(0, 200));
         String shortRecord = bad.get(9).substring(0, 120);
         bad.set(9, shortRecord);

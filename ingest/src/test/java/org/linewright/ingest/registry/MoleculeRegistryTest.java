@@ -19,6 +19,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormatException;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 
 class MoleculeRegistryTest {
     private final MoleculeRegistry registry = MoleculeRegistry.builtIn();
@@ -112,7 +113,7 @@ class MoleculeRegistryTest {
 
     @Test
     void abundancesAndQ296ReproduceTheSampleReadmeTable() throws IOException {
-        Path readme = ReferenceData.hitranSamples().resolve("README.md");
+        Path readme = ReferenceSamples.dir(ReferenceSamples.HITRAN_SAMPLES).resolve("README.md");
         int rows = 0;
         for (String line : Files.readAllLines(readme, StandardCharsets.UTF_8)) {
             String[] cells = line.split("\\|");
@@ -141,7 +142,7 @@ class MoleculeRegistryTest {
         // Published relation (Šimečková et al. 2006, JQSRT 98, 130) between S, A, g', E'' at 296 K:
         // S = Ia·A·g'/(8πcν²)·exp(−c2E''/T)·(1−exp(−c2ν/T))/Q(T). The median of Ia/Q implied by each
         // isotopologue's records must agree with the registry's Ia/Q(296) to 2e-3 (README: confirmed to 2e-3).
-        Path dir = ReferenceData.hitranSamples();
+        Path dir = ReferenceSamples.dir(ReferenceSamples.HITRAN_SAMPLES);
         double c2 = 1.438776877;
         double c = 2.99792458e10;
         double t = 296.0;

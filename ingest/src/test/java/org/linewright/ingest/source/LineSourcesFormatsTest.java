@@ -94,7 +94,7 @@ class LineSourcesFormatsTest {
     @ParameterizedTest
     @ValueSource(strings = {"none", "gzip", "bzip2", "xz", "zstd", "zip"})
     void hitran160(String kind) throws Exception {
-        List<String> sample = ReferenceSamples.lines(ReferenceSamples.hitran("sample_CO.par"));
+        List<String> sample = ReferenceSamples.lines(ReferenceSamples.hitranSample("sample_CO.par"));
         StringBuilder text = new StringBuilder();
         for (String line : sample) {
             for (double nu : NU) {

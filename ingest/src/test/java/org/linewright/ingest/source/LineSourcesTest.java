@@ -40,7 +40,7 @@ class LineSourcesTest {
 
     @BeforeAll
     static void readPlain() throws IOException {
-        plain = Files.readAllBytes(ReferenceSamples.hitran("sample_CO.par"));
+        plain = Files.readAllBytes(ReferenceSamples.hitranSample("sample_CO.par"));
         plainSum = wavenumberSum(new HitranRecordReader(new java.io.ByteArrayInputStream(plain), "p", STRICT));
     }
 

@@ -7,11 +7,16 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.Paths;
 import java.util.List;
+import org.linewright.ingest.pipeline.IngestListener;
+import org.linewright.ingest.pipeline.IngestOptions;
+import org.linewright.ingest.pipeline.IngestPipeline;
+import org.linewright.ingest.registry.MoleculeRegistry;
 
 /**
  * Locates the read-only real reference data beside the project (never copied into the repository):
  * system property {@code linewright.referenceDir}, else {@code ../shared/reference-data}, else
- * {@code ../../shared/reference-data}. Tests that need it are skipped with a visible reason when absent.
+ * {@code ../../shared/reference-data}. Tests that need it are skipped with a visible reason when absent. The one
+ * locator of every module's tests (published in the ingest module's test jar).
  */
 public final class ReferenceSamples {
     /** The samples of the 160-character line lists (see the README beside them). */
@@ -36,10 +41,21 @@ public final class ReferenceSamples {
     }
 
     /** A file of the 160-character samples, e.g. {@code sample_CO.par}, or a skipped test. */
-    public static Path hitran(String fileName) {
+    public static Path hitranSample(String fileName) {
         Path p = dir(HITRAN_SAMPLES).resolve(fileName);
         assumeTrue(Files.isRegularFile(p), "reference sample " + p + " not found");
         return p;
+    }
+
+    /**
+     * Ingests sample files into a line store with the built-in registry (strict), for tests of later stages.
+     *
+     * @return {@code storeDir}
+     */
+    public static Path ingest(Path storeDir, Path... samples) throws IOException {
+        IngestPipeline.run(List.of(samples), storeDir, IngestOptions.strict(MoleculeRegistry.builtIn()),
+                IngestListener.NONE);
+        return storeDir;
     }
 
     /** The lines of a sample file (ASCII). */

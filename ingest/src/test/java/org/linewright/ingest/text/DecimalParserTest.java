@@ -30,7 +30,7 @@ class DecimalParserTest {
         int[][] columns = {{3, 15}, {15, 25}, {25, 35}, {35, 40}, {40, 45}, {45, 55}, {55, 59}, {59, 67}, {146, 153}, {153, 160}};
         int fields = 0;
         for (String f : new String[] {"sample_CO.par", "sample_CO2.par", "sample_N2O.par", "sample_PH3.par"}) {
-            List<String> lines = ReferenceSamples.lines(ReferenceSamples.hitran(f));
+            List<String> lines = ReferenceSamples.lines(ReferenceSamples.hitranSample(f));
             for (String line : lines) {
                 byte[] b = line.getBytes(StandardCharsets.ISO_8859_1);
                 for (int[] c : columns) {

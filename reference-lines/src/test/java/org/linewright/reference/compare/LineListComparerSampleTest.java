@@ -13,9 +13,9 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 import org.linewright.reference.input.LineListInput;
 import org.linewright.reference.testsupport.ParFiles;
-import org.linewright.reference.testsupport.ReferenceData;
 
 /**
  * Comparison of modified copies (in a temporary folder) of the real HITRAN2020 samples: the changes planted are
@@ -36,7 +36,7 @@ class LineListComparerSampleTest {
     @ParameterizedTest
     @ValueSource(strings = {"sample_CO.par", "sample_PH3.par"})
     void identicalListsShowNoChange(String name) throws IOException {
-        Path sample = ReferenceData.hitranSample(name);
+        Path sample = ReferenceSamples.hitranSample(name);
         ComparisonReport r = compare(sample, sample, CompareOptions.defaults());
         assertTrue(r.identical(), () -> r.changes().subList(0, Math.min(5, r.changes().size())).toString());
         assertEquals(ParFiles.records(sample).size(), r.unchanged());
@@ -51,7 +51,7 @@ class LineListComparerSampleTest {
     @ParameterizedTest
     @ValueSource(strings = {"sample_CO.par", "sample_CO2.par", "sample_N2O.par", "sample_PH3.par"})
     void shiftedRemovedAndAddedLinesAreExactlyTheChanges(String name) throws IOException {
-        List<String> records = ParFiles.records(ReferenceData.hitranSample(name));
+        List<String> records = ParFiles.records(ReferenceSamples.hitranSample(name));
         int shiftedIndex = records.size() / 3;
         int removedIndex = records.size() / 2;
         int addedIndex = 2 * records.size() / 3;

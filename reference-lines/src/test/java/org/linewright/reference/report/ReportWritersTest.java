@@ -13,13 +13,13 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 import org.linewright.reference.compare.CompareOptions;
 import org.linewright.reference.compare.ComparisonReport;
 import org.linewright.reference.compare.LineListComparer;
 import org.linewright.reference.data.ReferenceLines;
 import org.linewright.reference.input.LineListInput;
 import org.linewright.reference.testsupport.ParFiles;
-import org.linewright.reference.testsupport.ReferenceData;
 import org.linewright.reference.verify.LineListVerifier;
 import org.linewright.reference.verify.VerificationReport;
 import org.linewright.reference.verify.VerifyOptions;
@@ -85,13 +85,13 @@ class ReportWritersTest {
 
     @Test
     void verificationAndComparisonReportsAreWellFormed() throws IOException {
-        List<String> records = ParFiles.records(ReferenceData.hitranSample("sample_CO2.par"));
+        List<String> records = ParFiles.records(ReferenceSamples.hitranSample("sample_CO2.par"));
         records.set(7, ParFiles.withIntensity(records.get(7), 3 * ParFiles.intensity(records.get(7))));
         Path changed = ParFiles.write(temp.resolve("co2.par"), records);
         MoleculeRegistry registry = MoleculeRegistry.builtIn();
         VerificationReport v;
         ComparisonReport c;
-        try (LineListInput a = LineListInput.open(ReferenceData.hitranSample("sample_CO2.par"), registry);
+        try (LineListInput a = LineListInput.open(ReferenceSamples.hitranSample("sample_CO2.par"), registry);
              LineListInput b = LineListInput.open(changed, registry)) {
             v = new LineListVerifier(registry, ReferenceLines.builtIn(), VerifyOptions.defaults()).verify(b.store(), "x,\"y\"");
             c = new LineListComparer(CompareOptions.defaults()).compare(a.store(), "a", b.store(), "b");

@@ -11,10 +11,10 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 import org.linewright.reference.data.ReferenceLines;
 import org.linewright.reference.input.LineListInput;
 import org.linewright.reference.testsupport.ParFiles;
-import org.linewright.reference.testsupport.ReferenceData;
 
 /** Faults planted in modified copies (in a temporary folder) of the real HITRAN2020 samples are found exactly. */
 class LineListVerifierFaultTest {
@@ -34,7 +34,7 @@ class LineListVerifierFaultTest {
      */
     @Test
     void doubledIntensityIsFlaggedAtThatLine() throws IOException {
-        List<String> records = ParFiles.records(ReferenceData.hitranSample("sample_CO.par"));
+        List<String> records = ParFiles.records(ReferenceSamples.hitranSample("sample_CO.par"));
         int index = 1234;
         String original = records.get(index);
         records.set(index, ParFiles.withIntensity(original, 2 * ParFiles.intensity(original)));
@@ -58,7 +58,7 @@ class LineListVerifierFaultTest {
      */
     @Test
     void allIntensitiesScaledIsOneRegistryFinding() throws IOException {
-        List<String> records = ParFiles.records(ReferenceData.hitranSample("sample_PH3.par"));
+        List<String> records = ParFiles.records(ReferenceSamples.hitranSample("sample_PH3.par"));
         records.replaceAll(r -> ParFiles.withIntensity(r, 2 * ParFiles.intensity(r)));
         VerificationReport report = verify(ParFiles.write(temp.resolve("ph3-doubled.par"), records));
         assertEquals(1, report.count(Check.REGISTRY_VALUES), () -> report.findings().toString());
@@ -70,7 +70,7 @@ class LineListVerifierFaultTest {
     /** A negative E″ (a convention for "unknown" in some lists) and a duplicated record are both reported. */
     @Test
     void negativeLowerEnergyAndDuplicateAreReported() throws IOException {
-        List<String> records = ParFiles.records(ReferenceData.hitranSample("sample_PH3.par"));
+        List<String> records = ParFiles.records(ReferenceSamples.hitranSample("sample_PH3.par"));
         String duplicated = records.get(100);
         records.add(101, duplicated);
         String r = records.get(2000);
@@ -94,7 +94,7 @@ class LineListVerifierFaultTest {
     /** A reference line moved beyond its tolerance fails the position check. */
     @Test
     void misplacedReferenceLineFails() throws IOException {
-        List<String> records = ParFiles.records(ReferenceData.hitranSample("sample_PH3.par"));
+        List<String> records = ParFiles.records(ReferenceSamples.hitranSample("sample_PH3.par"));
         boolean moved = false;
         for (int i = 0; i < records.size(); i++) {
             // PH3 J=1-0 at 266.9445 GHz = 8.9043 cm-1 (common practice); move it by +0.01 cm-1

@@ -11,9 +11,9 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 import org.linewright.reference.data.ReferenceLines;
 import org.linewright.reference.input.LineListInput;
-import org.linewright.reference.testsupport.ReferenceData;
 
 /** Verification of the real HITRAN2020 samples (../shared/reference-data/hitran2020-samples, see its README). */
 class LineListVerifierSampleTest {
@@ -28,7 +28,7 @@ class LineListVerifierSampleTest {
     @ParameterizedTest
     @ValueSource(strings = {"sample_CO.par", "sample_CO2.par", "sample_N2O.par", "sample_PH3.par"})
     void everySamplePasses(String name) throws IOException {
-        Path sample = ReferenceData.hitranSample(name);
+        Path sample = ReferenceSamples.hitranSample(name);
         VerificationReport report;
         try (LineListInput in = LineListInput.open(sample, MoleculeRegistry.builtIn())) {
             report = new LineListVerifier(MoleculeRegistry.builtIn(), ReferenceLines.builtIn(), VerifyOptions.defaults())

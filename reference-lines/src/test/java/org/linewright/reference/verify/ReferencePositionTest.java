@@ -10,16 +10,16 @@ import java.util.stream.Collectors;
 
 import org.junit.jupiter.api.Test;
 import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 import org.linewright.reference.data.ReferenceLines;
 import org.linewright.reference.input.LineListInput;
-import org.linewright.reference.testsupport.ReferenceData;
 
 /** The built-in reference lines found in the real HITRAN2020 samples at their published positions. */
 class ReferencePositionTest {
     private static final double GHZ_PER_CM1 = 29.9792458; // c in units of GHz·cm (exact, SI definition)
 
     private static Map<String, ReferenceMatch> matches(String sample) throws IOException {
-        try (LineListInput in = LineListInput.open(ReferenceData.hitranSample(sample), MoleculeRegistry.builtIn())) {
+        try (LineListInput in = LineListInput.open(ReferenceSamples.hitranSample(sample), MoleculeRegistry.builtIn())) {
             VerificationReport report = new LineListVerifier(MoleculeRegistry.builtIn(), ReferenceLines.builtIn(),
                     VerifyOptions.defaults()).verify(in.store(), sample);
             return report.references().stream().collect(Collectors.toMap(m -> m.reference().label(), Function.identity()));
