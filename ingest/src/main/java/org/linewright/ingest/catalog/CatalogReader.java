@@ -1,8 +1,13 @@
 package org.linewright.ingest.catalog;
 
 import java.io.InputStream;
+import java.util.Collections;
+import java.util.EnumSet;
+import java.util.Set;
+import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.DuplicateTracker;
 import org.linewright.ingest.source.IsotopologueLookup;
@@ -307,6 +312,32 @@ public final class CatalogReader extends RecordPerLineReader implements Duplicat
     @Override
     public long duplicatesSeen() {
         return duplicates.duplicates();
+    }
+
+    @Override
+    public Set<LineColumn> columnsProvided() {
+        return COLUMNS_PROVIDED;
+    }
+
+    /**
+     * What a catalog record carries: no pressure broadening or shift, no lower-state degeneracy, no K, no global
+     * labels, uncertainty codes or line-mixing flag (the species tag goes to the reference codes).
+     */
+    private static final Set<LineColumn> COLUMNS_PROVIDED;
+
+    static {
+        EnumSet<LineColumn> columns = EnumSet.allOf(LineColumn.class);
+        for (Broadener b : Broadener.values()) {
+            for (LineColumn c : LineColumn.foreignColumns(b)) {
+                columns.remove(c);
+            }
+        }
+        for (LineColumn c : new LineColumn[] {LineColumn.AIR_WIDTH, LineColumn.SELF_WIDTH, LineColumn.AIR_WIDTH_EXPONENT,
+                LineColumn.AIR_SHIFT, LineColumn.LOWER_DEGENERACY, LineColumn.UPPER_K, LineColumn.UPPER_GLOBAL_QUANTA,
+                LineColumn.LOWER_GLOBAL_QUANTA, LineColumn.UNCERTAINTY_CODES, LineColumn.LINE_MIXING_FLAG}) {
+            columns.remove(c);
+        }
+        COLUMNS_PROVIDED = Collections.unmodifiableSet(columns);
     }
 
     @Override

@@ -4,12 +4,15 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Path;
 import java.util.Collections;
+import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.partition.PartitionTable;
 import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.DuplicateTracker;
@@ -350,6 +353,29 @@ public final class ExomolReader implements LineReader, DuplicateCounter {
     @Override
     public long duplicatesSeen() {
         return duplicates.duplicates();
+    }
+
+    @Override
+    public Set<LineColumn> columnsProvided() {
+        EnumSet<LineColumn> columns = EnumSet.allOf(LineColumn.class);
+        // Never filled from a state/transition set: shifts, K, and the HITRAN-style codes and flag.
+        columns.remove(LineColumn.AIR_SHIFT);
+        columns.remove(LineColumn.UPPER_K);
+        columns.remove(LineColumn.UNCERTAINTY_CODES);
+        columns.remove(LineColumn.REFERENCE_CODES);
+        columns.remove(LineColumn.LINE_MIXING_FLAG);
+        if (!hasUncertainty) {
+            columns.remove(LineColumn.WAVENUMBER_UNCERTAINTY);
+        }
+        for (Broadener b : Broadener.values()) {
+            LineColumn[] foreignColumns = LineColumn.foreignColumns(b);
+            columns.remove(foreignColumns[2]);
+            if (foreign[b.ordinal()] == null) {
+                columns.remove(foreignColumns[0]);
+                columns.remove(foreignColumns[1]);
+            }
+        }
+        return Collections.unmodifiableSet(columns);
     }
 
     @Override

@@ -6,10 +6,13 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
+import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Set;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.line.TextColumn;
 import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.DuplicateTracker;
@@ -161,6 +164,27 @@ public final class HitranDelimitedReader extends RecordPerLineReader implements 
                     "missing required column(s) " + String.join(", ", missing)
                             + " (the header must name molec_id, local_iso_id, nu, sw, elower, gamma_air, n_air)");
         }
+    }
+
+    /**
+     * Every column but the upper-state energy and the wavenumber uncertainty as a number (no header names them),
+     * and a foreign broadener's width, exponent or shift only when the header has that column.
+     */
+    @Override
+    public Set<LineColumn> columnsProvided() {
+        EnumSet<LineColumn> columns = EnumSet.allOf(LineColumn.class);
+        columns.remove(LineColumn.UPPER_ENERGY);
+        columns.remove(LineColumn.WAVENUMBER_UNCERTAINTY);
+        for (Broadener b : Broadener.values()) {
+            LineColumn[] foreign = LineColumn.foreignColumns(b);
+            Parameter[] parameters = {FOREIGN_WIDTH[b.ordinal()], FOREIGN_EXPONENT[b.ordinal()], FOREIGN_SHIFT[b.ordinal()]};
+            for (int k = 0; k < foreign.length; k++) {
+                if (columnOf[parameters[k].ordinal()] < 0) {
+                    columns.remove(foreign[k]);
+                }
+            }
+        }
+        return Collections.unmodifiableSet(columns);
     }
 
     /** Header names the reader does not know; their values are ignored. */

@@ -2,7 +2,13 @@ package org.linewright.ingest.hitran;
 
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
+import java.util.Collections;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Set;
+import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.source.DuplicateCounter;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormat;
@@ -206,6 +212,27 @@ public final class HitranRecordReader extends RecordPerLineReader implements Dup
     @Override
     public long duplicatesSeen() {
         return duplicates;
+    }
+
+    @Override
+    public Set<LineColumn> columnsProvided() {
+        return COLUMNS_PROVIDED;
+    }
+
+    /**
+     * Every column but the foreign-broadener ones, the upper-state energy and the wavenumber uncertainty as a
+     * number: a 160-character record has no field for them.
+     */
+    private static final Set<LineColumn> COLUMNS_PROVIDED;
+
+    static {
+        EnumSet<LineColumn> columns = EnumSet.allOf(LineColumn.class);
+        for (Broadener b : Broadener.values()) {
+            columns.removeAll(List.of(LineColumn.foreignColumns(b)));
+        }
+        columns.remove(LineColumn.UPPER_ENERGY);
+        columns.remove(LineColumn.WAVENUMBER_UNCERTAINTY);
+        COLUMNS_PROVIDED = Collections.unmodifiableSet(columns);
     }
 
     @Override

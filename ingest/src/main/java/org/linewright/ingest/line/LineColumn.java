@@ -91,6 +91,16 @@ public enum LineColumn {
         return (TextColumn) array.apply(batch);
     }
 
+    /** The columns of a foreign broadener: width, width exponent, shift (in that order). */
+    public static LineColumn[] foreignColumns(Broadener broadener) {
+        return switch (broadener) {
+            case H2 -> new LineColumn[] {H2_WIDTH, H2_WIDTH_EXPONENT, H2_SHIFT};
+            case HE -> new LineColumn[] {HE_WIDTH, HE_WIDTH_EXPONENT, HE_SHIFT};
+            case CO2 -> new LineColumn[] {CO2_WIDTH, CO2_WIDTH_EXPONENT, CO2_SHIFT};
+            case H2O -> new LineColumn[] {H2O_WIDTH, H2O_WIDTH_EXPONENT, H2O_SHIFT};
+        };
+    }
+
     /** The column with this store/CSV name, or null. */
     public static LineColumn byName(String columnName) {
         for (LineColumn c : values()) {

@@ -63,6 +63,13 @@ public final class TextColumn {
         rows++;
     }
 
+    /** Appends {@code count} empty values (one fill of the offsets). */
+    public void appendEmpty(int count) {
+        ensureRows(rows + count);
+        Arrays.fill(offsets, rows + 1, rows + count + 1, offsets[rows]);
+        rows += count;
+    }
+
     public int rows() {
         return rows;
     }

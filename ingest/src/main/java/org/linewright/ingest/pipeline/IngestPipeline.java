@@ -87,7 +87,8 @@ public final class IngestPipeline {
             parameters.put("format_requested", options.formatOrNull() == null ? "detect" : options.formatOrNull().id());
             parameters.put("compression", opened.compression());
             SourceMetadata metadata = SourceMetadata.of(opened.fileName(), "", opened.format().id(), parameters);
-            try (LineStoreWriter writer = LineStoreWriter.create(storeDir, name, metadata)) {
+            try (LineStoreWriter writer = LineStoreWriter.create(storeDir, name, metadata,
+                    opened.reader().columnsProvided())) {
                 new BatchHandoff(opened.reader(), batchCapacity).drainInto(writer, records -> listener.recordsRead(source, records));
                 long read = opened.reader().recordsRead();
                 long rejected = opened.reader().recordsRejected();

@@ -2,7 +2,10 @@ package org.linewright.ingest.source;
 
 import java.io.Closeable;
 import java.io.IOException;
+import java.util.EnumSet;
+import java.util.Set;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
 
 /**
  * Streams the lines of one source (one line-list file, or one state/transition set) in batches.
@@ -30,6 +33,17 @@ public interface LineReader extends Closeable {
     /** Lines delivered so far. */
     default long linesKept() {
         return recordsRead() - recordsRejected();
+    }
+
+    /**
+     * The columns this reader can fill for its source. Rule: a column is listed when some line of the source may
+     * carry a value in it; a column left out holds NaN (numbers) or an empty text in every line the reader
+     * delivers, so a store may leave it out of the file and read it back as NaN or empty with nothing lost.
+     * Known once the reader is open (a delimited file's header, a state/transition set's definition), constant
+     * afterwards. The default lists every column.
+     */
+    default Set<LineColumn> columnsProvided() {
+        return EnumSet.allOf(LineColumn.class);
     }
 
     /** The format this reader parses. */

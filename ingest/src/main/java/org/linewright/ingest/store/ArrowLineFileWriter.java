@@ -14,6 +14,7 @@ import org.apache.arrow.memory.RootAllocator;
 import org.apache.arrow.vector.VectorSchemaRoot;
 import org.apache.arrow.vector.ipc.ArrowFileWriter;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
 
 /**
  * Writes one Arrow IPC file of lines whose wavenumbers never decrease, one record batch per
@@ -25,6 +26,8 @@ final class ArrowLineFileWriter implements AutoCloseable {
     private static final int ISO_SLOTS = 1024;
 
     private final Path path;
+    /** The columns written, in schema order. */
+    private final LineColumn[] columns;
     private final BufferAllocator allocator;
     private final VectorSchemaRoot root;
     private final FileChannel channel;
@@ -39,13 +42,18 @@ final class ArrowLineFileWriter implements AutoCloseable {
     private double lastWavenumberCm1 = Double.NEGATIVE_INFINITY;
     private boolean closed;
 
-    ArrowLineFileWriter(Path path, Map<String, String> schemaMetadata) throws IOException {
+    /**
+     * @param columns the columns the file holds, in schema (declaration) order; the batch's other columns are not
+     *                written (readers see them as NaN or empty)
+     */
+    ArrowLineFileWriter(Path path, Map<String, String> schemaMetadata, LineColumn[] columns) throws IOException {
         this.path = path;
+        this.columns = columns.clone();
         BufferAllocator a = new RootAllocator();
         VectorSchemaRoot r = null;
         FileChannel ch = null;
         try {
-            r = VectorSchemaRoot.create(StoreColumns.schema(schemaMetadata), a);
+            r = VectorSchemaRoot.create(StoreColumns.schema(schemaMetadata, this.columns), a);
             ch = FileChannel.open(path, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
             ArrowFileWriter w = new CompletedSchemaFileWriter(r, ch, completion);
             w.start();
@@ -106,7 +114,7 @@ final class ArrowLineFileWriter implements AutoCloseable {
                 }
             }
         }
-        StoreColumns.fill(root, batch);
+        StoreColumns.fill(root, batch, columns);
         writer.writeBatch();
         if (lines == 0) {
             minWavenumberCm1 = wn[0];

@@ -129,9 +129,7 @@ public final class LineCursor implements AutoCloseable {
             TextColumn d = c.text(dst);
             if (s.rows() == 0 && src.size > 0) {
                 // Column absent from this file: empty texts keep the rows aligned.
-                for (int i = 0; i < n; i++) {
-                    d.appendEmpty();
-                }
+                d.appendEmpty(n);
                 continue;
             }
             d.appendRows(s, from, n);

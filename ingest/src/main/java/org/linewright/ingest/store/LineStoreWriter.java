@@ -14,6 +14,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Set;
 import java.util.TreeMap;
 import java.util.UUID;
 import org.linewright.ingest.line.LineBatch;
@@ -32,6 +33,11 @@ import org.linewright.ingest.line.TextColumn;
  * {@link #commit} forces the finished file to disk, renames it over the source's file (replacing an earlier
  * ingest of the same source name) and then updates the store index atomically. A crash or {@link #abort()}
  * never leaves a file the store would list; the earlier file stays intact until the rename.
+ *
+ * <p>Columns: the file holds the columns the source provides (given at {@code create}, normally the reader's
+ * {@link org.linewright.ingest.source.LineReader#columnsProvided()}) plus molecule, isotopologue, wavenumber and
+ * source line, which every file holds; the temporary runs of the external sort hold the same columns. Columns
+ * not stored read back as NaN (numbers) or empty (text). Without a column set, every column is stored.
  *
  * <p>Use: {@code create}, {@code write} batches, {@code commit(counts)}; {@code close()} without commit
  * aborts. Not thread-safe.
@@ -52,6 +58,7 @@ public final class LineStoreWriter implements AutoCloseable {
     static final int DEFAULT_MERGE_FAN_IN = 128;
     /** Smallest slice per run, whatever the number of runs (keeps reads efficient). */
     private static final int MIN_MERGE_SLICE_ROWS = 1024;
+    private static final Set<LineColumn> ALL_COLUMNS = Set.of(LineColumn.values());
 
     private final Path storeDir;
     private final String sourceName;
@@ -61,6 +68,8 @@ public final class LineStoreWriter implements AutoCloseable {
     /** Most runs merged at once; more runs are merged in several passes. */
     private final int mergeFanIn;
     private final Map<String, String> schemaMetadata;
+    /** The columns the file and its runs hold, in declaration order. */
+    private final LineColumn[] columns;
     /** The file being streamed (final when no line came out of order, else the first run). */
     private ArrowLineFileWriter stream;
     private final List<Path> runs = new ArrayList<>();
@@ -71,8 +80,10 @@ public final class LineStoreWriter implements AutoCloseable {
     private long linesWritten;
     private boolean done;
 
-    private LineStoreWriter(Path storeDir, String sourceName, SourceMetadata metadata, int runLines, int mergeFanIn) {
+    private LineStoreWriter(Path storeDir, String sourceName, SourceMetadata metadata, Set<LineColumn> columnsProvided,
+                            int runLines, int mergeFanIn) {
         this.storeDir = storeDir;
+        this.columns = StoreColumns.stored(columnsProvided);
         this.sourceName = sourceName;
         this.metadata = metadata;
         this.runLines = runLines;
@@ -91,32 +102,56 @@ public final class LineStoreWriter implements AutoCloseable {
         this.schemaMetadata = m;
     }
 
-    /** Starts writing source {@code sourceName} into the store directory (created if missing). */
+    /** Starts writing source {@code sourceName} into the store directory (created if missing), storing every column. */
     public static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata) throws IOException {
         return create(storeDir, sourceName, metadata, DEFAULT_RUN_LINES);
+    }
+
+    /**
+     * As {@link #create(Path, String, SourceMetadata)}, storing only {@code columnsProvided} (the columns the source
+     * can fill, e.g. {@link org.linewright.ingest.source.LineReader#columnsProvided()}) plus the columns every
+     * store file holds (molecule, isotopologue, wavenumber, source line). Values of other columns in the written
+     * batches are not stored: they read back as NaN or empty.
+     */
+    public static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata,
+                                         Set<LineColumn> columnsProvided) throws IOException {
+        return create(storeDir, sourceName, metadata, columnsProvided, DEFAULT_RUN_LINES);
     }
 
     /** As {@link #create(Path, String, SourceMetadata)} with the maximum lines per sorted run of the external sort. */
     public static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata, int runLines)
             throws IOException {
+        return create(storeDir, sourceName, metadata, ALL_COLUMNS, runLines);
+    }
+
+    /** As {@link #create(Path, String, SourceMetadata, Set)} with the maximum lines per sorted run of the external sort. */
+    public static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata,
+                                         Set<LineColumn> columnsProvided, int runLines) throws IOException {
         Objects.requireNonNull(metadata, "metadata");
+        Objects.requireNonNull(columnsProvided, "columnsProvided");
         if (sourceName == null || sourceName.isBlank()) {
             throw new IllegalArgumentException("source name must not be blank");
         }
         if (runLines < 1) {
             throw new IllegalArgumentException("runLines must be positive: " + runLines);
         }
-        return create(storeDir, sourceName, metadata, runLines, DEFAULT_MERGE_FAN_IN);
+        return create(storeDir, sourceName, metadata, columnsProvided, runLines, DEFAULT_MERGE_FAN_IN);
     }
 
     /** As {@link #create(Path, String, SourceMetadata, int)} with the most runs merged at once (≥ 2). */
     static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata, int runLines, int mergeFanIn)
             throws IOException {
+        return create(storeDir, sourceName, metadata, ALL_COLUMNS, runLines, mergeFanIn);
+    }
+
+    /** As {@link #create(Path, String, SourceMetadata, Set, int)} with the most runs merged at once (≥ 2). */
+    static LineStoreWriter create(Path storeDir, String sourceName, SourceMetadata metadata, Set<LineColumn> columnsProvided,
+                                  int runLines, int mergeFanIn) throws IOException {
         if (mergeFanIn < 2) {
             throw new IllegalArgumentException("mergeFanIn must be at least 2: " + mergeFanIn);
         }
         Files.createDirectories(storeDir);
-        return new LineStoreWriter(storeDir, sourceName, metadata, runLines, mergeFanIn);
+        return new LineStoreWriter(storeDir, sourceName, metadata, columnsProvided, runLines, mergeFanIn);
     }
 
     /**
@@ -150,7 +185,7 @@ public final class LineStoreWriter implements AutoCloseable {
         }
         if (runBuffer == null && ascending) {
             if (stream == null) {
-                stream = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
+                stream = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata, columns);
             }
             stream.write(batch);
         } else {
@@ -183,7 +218,7 @@ public final class LineStoreWriter implements AutoCloseable {
         int[] order = StableOrder.permutation(runBuffer.wavenumberCm1, n, orderA, orderB);
         Path path = partialPath("run");
         runs.add(path);
-        try (ArrowLineFileWriter run = new ArrowLineFileWriter(path, schemaMetadata)) {
+        try (ArrowLineFileWriter run = new ArrowLineFileWriter(path, schemaMetadata, columns)) {
             for (int from = 0; from < n; from += gather.capacity()) {
                 int m = Math.min(gather.capacity(), n - from);
                 gather.clear();
@@ -225,7 +260,7 @@ public final class LineStoreWriter implements AutoCloseable {
         try {
             if (runBuffer == null) {
                 if (stream == null) {
-                    stream = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
+                    stream = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata, columns);
                 }
                 finished = stream;
                 finished.finish(completion);
@@ -276,8 +311,8 @@ public final class LineStoreWriter implements AutoCloseable {
                 if (group.size() > 1) {
                     // Listed at once so that an abort deletes it too.
                     runs.add(merged);
-                    try (ArrowLineFileWriter w = new ArrowLineFileWriter(merged, schemaMetadata)) {
-                        mergeInto(group, w, spillBatch);
+                    try (ArrowLineFileWriter w = new ArrowLineFileWriter(merged, schemaMetadata, columns)) {
+                        mergeInto(group, w, spillBatch, columns);
                         w.finish(Map.of());
                     }
                     for (Path p : group) {
@@ -290,23 +325,24 @@ public final class LineStoreWriter implements AutoCloseable {
                 runs.add(merged);
             }
         }
-        ArrowLineFileWriter out = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata);
+        ArrowLineFileWriter out = new ArrowLineFileWriter(partialPath("lines"), schemaMetadata, columns);
         stream = out;
-        mergeInto(runs, out, new LineBatch(OUTPUT_BATCH_LINES));
+        mergeInto(runs, out, new LineBatch(OUTPUT_BATCH_LINES), columns);
         out.finish(completion);
         deleteRuns();
         return out;
     }
 
     /** k-way merges the sorted run files into {@code out} (ties in run order). */
-    private static void mergeInto(List<Path> runFiles, ArrowLineFileWriter out, LineBatch batch) throws IOException {
+    private static void mergeInto(List<Path> runFiles, ArrowLineFileWriter out, LineBatch batch, LineColumn[] columns)
+            throws IOException {
         List<ArrowLineFile> files = new ArrayList<>();
         for (Path run : runFiles) {
             files.add(ArrowLineFile.open(run));
         }
         // Each run's scanner holds a slice of its lines: the slices together stay within MERGE_HEAP_BYTES.
         int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS, MERGE_HEAP_BYTES / (files.size() * BYTES_PER_LINE_ESTIMATE));
-        try (LineCursor cursor = new LineCursor(files, LineQuery.all(), sliceRows)) {
+        try (LineCursor cursor = new LineCursor(files, LineQuery.all().withColumns(List.of(columns)), sliceRows)) {
             while (cursor.read(batch)) {
                 out.write(batch);
             }

@@ -3,7 +3,9 @@ package org.linewright.ingest.store;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.List;
+import java.util.Set;
 import java.util.Map;
 import org.apache.arrow.vector.BigIntVector;
 import org.apache.arrow.vector.BitVectorHelper;
@@ -22,8 +24,11 @@ import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.line.TextColumn;
 
 /**
- * The Arrow schema of a store file, derived from {@link LineColumn} (one field per column, in declaration
+ * The Arrow schema of a store file, derived from {@link LineColumn} (one field per stored column, in declaration
  * order, units in the field metadata), and the metadata keys of the store format.
+ *
+ * <p>A store file holds the columns its source can fill ({@link org.linewright.ingest.source.LineReader#columnsProvided()})
+ * plus the {@link #ALWAYS_STORED} ones; readers see a column the file lacks as NaN (numbers) or empty (text).
  */
 final class StoreColumns {
     /** Version of the store file layout, in the schema metadata. */
@@ -59,12 +64,32 @@ final class StoreColumns {
 
     static final LineColumn[] COLUMNS = LineColumn.values();
 
+    /**
+     * Columns every store file holds whatever its source provides: the species and wavenumber (the sort key and
+     * the columns a store reader requires) and the source line (an integer column, which has no "missing" value).
+     */
+    static final Set<LineColumn> ALWAYS_STORED = Set.copyOf(EnumSet.of(LineColumn.MOLECULE, LineColumn.ISOTOPOLOGUE,
+            LineColumn.WAVENUMBER, LineColumn.SOURCE_LINE));
+
     private StoreColumns() {
     }
 
+    /** The columns a file for a source providing {@code provided} holds: those plus {@link #ALWAYS_STORED}, in declaration order. */
+    static LineColumn[] stored(Set<LineColumn> provided) {
+        EnumSet<LineColumn> set = EnumSet.copyOf(ALWAYS_STORED);
+        set.addAll(provided);
+        return set.toArray(new LineColumn[0]);
+    }
+
+    /** The schema holding every column. */
     static Schema schema(Map<String, String> schemaMetadata) {
-        List<Field> fields = new ArrayList<>(COLUMNS.length);
-        for (LineColumn c : COLUMNS) {
+        return schema(schemaMetadata, COLUMNS);
+    }
+
+    /** The schema holding {@code columns} (in the given order, which is declaration order for store files). */
+    static Schema schema(Map<String, String> schemaMetadata, LineColumn[] columns) {
+        List<Field> fields = new ArrayList<>(columns.length);
+        for (LineColumn c : columns) {
             Map<String, String> fieldMeta = c.unit().isEmpty() ? null : Map.of(FIELD_UNIT, c.unit());
             fields.add(new Field(c.columnName(), new FieldType(false, arrowType(c.kind()), null, fieldMeta), null));
         }
@@ -91,9 +116,16 @@ final class StoreColumns {
      * buffers; no per-row objects) and sets the row count.
      */
     static void fill(VectorSchemaRoot root, LineBatch batch) {
+        fill(root, batch, COLUMNS);
+    }
+
+    /**
+     * As {@link #fill(VectorSchemaRoot, LineBatch)} for a root whose vectors are {@code columns}, in that order.
+     */
+    static void fill(VectorSchemaRoot root, LineBatch batch, LineColumn[] columns) {
         int n = batch.size;
-        for (int i = 0; i < COLUMNS.length; i++) {
-            LineColumn c = COLUMNS[i];
+        for (int i = 0; i < columns.length; i++) {
+            LineColumn c = columns[i];
             FieldVector v = root.getVector(i);
             switch (c.kind()) {
                 case INT -> {

@@ -1,6 +1,7 @@
 package org.linewright.ingest.hitran;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -14,6 +15,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.source.LineFormatException;
 import org.linewright.ingest.source.ReadOptions;
 import org.linewright.ingest.testsupport.ReferenceSamples;
@@ -142,6 +144,23 @@ class HitranDelimitedReaderTest {
     }
 
     private static final String HEADER = "molec_id,local_iso_id,nu,sw,elower,gamma_air,n_air,gamma_self,delta_H2,local_lower_quanta\n";
+
+    @Test
+    void providesTheBroadenerColumnsItsHeaderNamesOnly() throws IOException {
+        HitranDelimitedReader r = reader(HEADER + "5,1,2100.5,1.0E-20,10.0,0.05,0.7,,-0.002,\"R 1, synthetic\"\n", STRICT);
+        java.util.Set<LineColumn> provided = r.columnsProvided();
+        // The header above names delta_H2 and no other broadener column.
+        assertTrue(provided.contains(LineColumn.H2_SHIFT));
+        for (LineColumn absent : List.of(LineColumn.H2_WIDTH, LineColumn.H2_WIDTH_EXPONENT, LineColumn.HE_WIDTH,
+                LineColumn.HE_SHIFT, LineColumn.CO2_WIDTH, LineColumn.H2O_WIDTH_EXPONENT, LineColumn.UPPER_ENERGY,
+                LineColumn.WAVENUMBER_UNCERTAINTY)) {
+            assertFalse(provided.contains(absent), absent.columnName());
+        }
+        for (LineColumn present : List.of(LineColumn.MOLECULE, LineColumn.WAVENUMBER, LineColumn.AIR_WIDTH,
+                LineColumn.LOWER_LOCAL_QUANTA, LineColumn.SOURCE_LINE)) {
+            assertTrue(provided.contains(present), present.columnName());
+        }
+    }
 
     @Test
     void missingOptionalValuesAreNaNAndQuotedCommasStay() throws IOException {

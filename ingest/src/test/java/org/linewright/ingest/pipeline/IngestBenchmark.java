@@ -48,6 +48,13 @@ public final class IngestBenchmark {
         }
         System.out.printf(Locale.ROOT, "ingest: %d records (%.0f MB) in %.2f s = %.2f M records/s, peak heap %d MB (max %d MB)%n",
                 records, Files.size(file) / 1e6, s, records / s / 1e6, peakHeapMb(), Runtime.getRuntime().maxMemory() >> 20);
+        long storeBytes = 0;
+        try (java.util.stream.Stream<Path> files = Files.list(store)) {
+            for (Path f : (Iterable<Path>) files.filter(f -> f.getFileName().toString().endsWith(".arrow"))::iterator) {
+                storeBytes += Files.size(f);
+            }
+        }
+        System.out.printf(Locale.ROOT, "store file: %.0f MB = %.0f bytes/line%n", storeBytes / 1e6, (double) storeBytes / records);
         LineStore opened = LineStore.open(store);
         for (int rep = 0; rep < 3; rep++) {
             reload(opened, LineQuery.all().withColumns(LineQuery.CROSS_SECTION_COLUMNS), "cross-section columns");

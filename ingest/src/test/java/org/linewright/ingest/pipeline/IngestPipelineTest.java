@@ -8,18 +8,27 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.io.OutputStream;
+import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
 import java.security.MessageDigest;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+import org.apache.arrow.memory.BufferAllocator;
+import org.apache.arrow.memory.RootAllocator;
+import org.apache.arrow.vector.ipc.ArrowFileReader;
+import org.apache.arrow.vector.types.pojo.Field;
 import org.apache.commons.compress.compressors.bzip2.BZip2CompressorOutputStream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.source.LineFormatException;
 import org.linewright.ingest.store.LineCursor;
@@ -78,6 +87,62 @@ class IngestPipelineTest {
             }
         }
         assertEquals(opened.totalLines(), n);
+    }
+
+    @Test
+    void recordStoreFileLeavesOutTheColumnsA160CharacterRecordCannotFill() throws Exception {
+        Path sample = ReferenceSamples.hitran("sample_CO.par");
+        Path store = tmp.resolve("store");
+        IngestPipeline.run(List.of(sample), store, IngestOptions.strict(REGISTRY), IngestListener.NONE);
+        Path file;
+        try (Stream<Path> files = Files.list(store)) {
+            file = files.filter(p -> p.getFileName().toString().startsWith("lines-")).findFirst().orElseThrow();
+        }
+        // The 160-character record (HITRAN2004+ layout, common practice) has no fields for H2/He/CO2/H2O
+        // broadening nor an upper-state energy or a numeric position uncertainty.
+        List<String> absent = List.of("h2_width_cm1_per_atm", "h2_width_exponent", "h2_shift_cm1_per_atm",
+                "he_width_cm1_per_atm", "he_width_exponent", "he_shift_cm1_per_atm", "co2_width_cm1_per_atm",
+                "co2_width_exponent", "co2_shift_cm1_per_atm", "h2o_width_cm1_per_atm", "h2o_width_exponent",
+                "h2o_shift_cm1_per_atm", "upper_energy_cm1", "wavenumber_uncertainty_cm1");
+        List<String> fields;
+        try (FileChannel ch = FileChannel.open(file, StandardOpenOption.READ);
+             BufferAllocator allocator = new RootAllocator();
+             ArrowFileReader reader = new ArrowFileReader(ch, allocator)) {
+            // Arrow's own reader: the schema in the file's footer.
+            fields = reader.getVectorSchemaRoot().getSchema().getFields().stream().map(Field::getName)
+                    .collect(Collectors.toList());
+        }
+        for (String name : absent) {
+            assertFalse(fields.contains(name), name + " in " + fields);
+        }
+        for (String name : List.of("molecule", "isotopologue", "wavenumber_cm1", "intensity_cm_per_molecule",
+                "air_width_cm1_per_atm", "lower_energy_cm1", "upper_global_quanta", "line_mixing_flag", "source_line")) {
+            assertTrue(fields.contains(name), name + " missing from " + fields);
+        }
+        assertEquals(LineColumn.values().length - absent.size(), fields.size());
+
+        // Read back: absent columns are NaN; present ones hold the record's fields (gamma_air in columns
+        // 36-40 and E'' in columns 46-55 of the record, common practice).
+        List<String> records = ReferenceSamples.lines(sample);
+        long n = 0;
+        LineBatch batch = new LineBatch(1000);
+        try (LineCursor cursor = LineStore.open(store).cursor(LineQuery.all())) {
+            while (cursor.read(batch)) {
+                for (int i = 0; i < batch.size; i++, n++) {
+                    String record = records.get((int) batch.sourceLine[i] - 1);
+                    assertEquals(Double.parseDouble(record.substring(35, 40)), batch.airWidthCm1PerAtm[i], record);
+                    assertEquals(Double.parseDouble(record.substring(45, 55)), batch.lowerEnergyCm1[i], record);
+                    assertTrue(Double.isNaN(batch.upperEnergyCm1[i]) && Double.isNaN(batch.wavenumberUncertaintyCm1[i]));
+                    for (int k = 0; k < batch.foreignWidthCm1PerAtm.length; k++) {
+                        assertTrue(Double.isNaN(batch.foreignWidthCm1PerAtm[k][i])
+                                && Double.isNaN(batch.foreignWidthExponent[k][i])
+                                && Double.isNaN(batch.foreignShiftCm1PerAtm[k][i]));
+                    }
+                }
+            }
+        }
+        // Record count from the samples' README table.
+        assertEquals(5381, n);
     }
 
     @Test
