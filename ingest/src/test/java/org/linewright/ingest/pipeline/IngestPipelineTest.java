@@ -91,7 +91,7 @@ class IngestPipelineTest {
 
     @Test
     void recordStoreFileLeavesOutTheColumnsA160CharacterRecordCannotFill() throws Exception {
-        Path sample = ReferenceSamples.hitran("sample_CO.par");
+        Path sample = ReferenceSamples.hitranSample("sample_CO.par");
         Path store = tmp.resolve("store");
         IngestPipeline.run(List.of(sample), store, IngestOptions.strict(REGISTRY), IngestListener.NONE);
         Path file;
