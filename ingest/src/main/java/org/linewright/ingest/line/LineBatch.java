@@ -128,6 +128,24 @@ public final class LineBatch {
     }
 
     /**
+     * Sets every optional numeric field of every row to NaN (the foreign-broadener columns, upper energy, position
+     * uncertainty, J and K): one sequential fill per column, for readers that clear a whole batch at once rather
+     * than row by row.
+     */
+    public void clearOptional() {
+        for (int b = 0; b < foreignWidthCm1PerAtm.length; b++) {
+            java.util.Arrays.fill(foreignWidthCm1PerAtm[b], Double.NaN);
+            java.util.Arrays.fill(foreignWidthExponent[b], Double.NaN);
+            java.util.Arrays.fill(foreignShiftCm1PerAtm[b], Double.NaN);
+        }
+        java.util.Arrays.fill(upperEnergyCm1, Double.NaN);
+        java.util.Arrays.fill(wavenumberUncertaintyCm1, Double.NaN);
+        java.util.Arrays.fill(upperJ, Double.NaN);
+        java.util.Arrays.fill(lowerJ, Double.NaN);
+        java.util.Arrays.fill(upperK, Double.NaN);
+    }
+
+    /**
      * Sets every optional numeric field of row {@code row} to NaN (the foreign-broadener columns, upper
      * energy, position uncertainty, J and K). Readers call it before filling what their format carries.
      */

@@ -42,9 +42,14 @@ public abstract class RecordPerLineReader implements LineReader {
      */
     protected abstract LineFormatException parseRecord(LineBatch batch, int row);
 
+    /** Called once per batch before its first record; readers that clear columns batch-wide do it here. */
+    protected void startBatch(LineBatch batch) {
+    }
+
     @Override
     public final boolean read(LineBatch batch) throws IOException {
         batch.clear();
+        startBatch(batch);
         while (!batch.isFull() && lines.next()) {
             if (lines.isBlank()) {
                 continue;
