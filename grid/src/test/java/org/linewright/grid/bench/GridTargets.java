@@ -319,7 +319,7 @@ public final class GridTargets {
         StringJoiner j = new StringJoiner(", ");
         for (String key : new String[] {"fast.oversampling", "fast.internal_step_cm1", "fast.fft_length",
                 "fast.slices"}) {
-            j.add(key + " = " + r.metadata().get(key));
+            j.add(key + " = " + r.metadata().get("engine." + key));
         }
         return j.toString();
     }
