@@ -1,0 +1,410 @@
+package org.linewright.grid.bench;
+
+import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Locale;
+import java.util.StringJoiner;
+import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.sources.WidthOptions;
+import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.wings.WingKernel;
+import org.linewright.broadening.wings.WingTreatment;
+import org.linewright.grid.calc.CrossSectionCalculator;
+import org.linewright.grid.calc.CrossSectionRequest;
+import org.linewright.grid.calc.CrossSectionResult;
+import org.linewright.grid.calc.LineSelection;
+import org.linewright.grid.calc.ProgressListener;
+import org.linewright.grid.engine.CrossSectionEngine;
+import org.linewright.grid.engine.EngineFactory;
+import org.linewright.grid.engine.LineChunk;
+import org.linewright.grid.engine.fast.FastEngine;
+import org.linewright.grid.plan.PlanReader;
+import org.linewright.grid.table.BuildListener;
+import org.linewright.grid.table.BuildReport;
+import org.linewright.grid.table.CalculatorBlocks;
+import org.linewright.grid.table.TableBuilder;
+import org.linewright.grid.wavenumber.WavenumberGrid;
+import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.partition.PartitionSums;
+import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.store.LineCursor;
+import org.linewright.ingest.store.LineQuery;
+import org.linewright.ingest.store.LineStore;
+
+/**
+ * The grid module's end-to-end targets on {@link SyntheticLines} (synthetic, invented lines), one target per run
+ * of {@code main} so that each runs in a JVM of its own with the heap limit under test:
+ * {@code java -Xmx2g ... GridTargets TARGET LINES WORKDIR}, TARGET one of {@code calc}, {@code table},
+ * {@code incremental}, {@code exact}. Prints its figures, the phases and the peak heap (sum of the heap pools'
+ * peak usage, an upper bound). Exits non-zero on a wrong result (no line used, σ not positive, a rebuild that
+ * recomputed the whole table); the figures themselves are judged by {@link GridTargetsBenchmarkTest}.
+ */
+public final class GridTargets {
+    /** Engine threads: the target machine has 2 cores. */
+    static final int THREADS = 2;
+    /** Background for every target: air at mole fraction 1. */
+    static final String BACKGROUND = "air=1";
+
+    /** The incremental target's smaller table: 2 pressures × 2 temperatures. */
+    static final double[] PRESSURES_2X2_BAR = {0.01, 1.0};
+    static final double[] TEMPERATURES_2X2_K = {296.0, 1000.0};
+
+    private GridTargets() {
+    }
+
+    public static void main(String[] args) throws IOException {
+        String target = args[0];
+        long lines = Long.parseLong(args[1]);
+        Path work = Path.of(args[2]);
+        switch (target) {
+            case "calc" -> calc(lines, work);
+            case "table" -> table(lines, work);
+            case "incremental" -> incremental(lines, work);
+            case "exact" -> exact(lines, work);
+            default -> throw new IllegalArgumentException("unknown target " + target);
+        }
+        System.out.printf(Locale.ROOT, "peak heap %d MB (max heap %d MB), %d cores, java %s%n", peakHeapMb(),
+                Runtime.getRuntime().maxMemory() >> 20, Runtime.getRuntime().availableProcessors(),
+                System.getProperty("java.version"));
+    }
+
+    /** The grid that covers every line: one point per line spacing from the first centre to past the last. */
+    static WavenumberGrid fullGrid(long lines) {
+        return WavenumberGrid.uniform(SyntheticLines.FIRST_CM1,
+                SyntheticLines.FIRST_CM1 + lines * SyntheticLines.SPACING_CM1, SyntheticLines.SPACING_CM1);
+    }
+
+    private static MoleculeRegistry registry() {
+        return PartitionSums.of(MoleculeRegistry.builtIn()).attachedRegistry();
+    }
+
+    private static CrossSectionRequest request(WavenumberGrid grid, double pressureAtm, double temperatureK) {
+        return new CrossSectionRequest(temperatureK, pressureAtm, Composition.parse(BACKGROUND), grid,
+                WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0, LineSelection.ALL, WidthOptions.DEFAULTS);
+    }
+
+    /** Target 1: fast engine, one (p, T), through the calculator from a store; three runs (first one cold). */
+    static void calc(long lines, Path work) throws IOException {
+        long t0 = System.nanoTime();
+        LineStore store = new SyntheticLines().writeStore(work.resolve("store"), lines);
+        System.out.printf(Locale.ROOT, "store of %d lines written in %.2f s (not part of the target)%n", lines,
+                seconds(t0));
+        resetPeaks();
+        WavenumberGrid grid = fullGrid(lines);
+        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store), registry());
+        CrossSectionRequest request = request(grid, 1.0, 296.0);
+        double readSeconds = readOnly(store, LineQuery.all().withColumns(LineQuery.CROSS_SECTION_COLUMNS));
+        for (int run = 0; run < 3; run++) {
+            long r0 = System.nanoTime();
+            CrossSectionResult result;
+            try (CrossSectionEngine engine = EngineFactory.create("fast", THREADS, request.wings(),
+                    FastEngine.DEFAULT_TOLERANCE)) {
+                result = calc.compute(request, engine, ProgressListener.NONE);
+            }
+            double s = seconds(r0);
+            check(result);
+            System.out.printf(Locale.ROOT, "calc fast run %d: %d lines on %d points, p = 1 atm, T = 296 K, tolerance %g:"
+                            + " %.2f s end to end (estimated error %.2e)%n", run, result.linesUsed(), grid.size(),
+                    FastEngine.DEFAULT_TOLERANCE, s, result.estimatedRelativeError());
+            if (run == 0) {
+                System.out.println("fast engine plan: " + fastPlan(result));
+            }
+        }
+        System.out.printf(Locale.ROOT, "phase: reading the 15 cross-section columns of the store alone %.2f s%n",
+                readSeconds);
+        // engine alone: the same lines through the engine with no store reading, S(T) or widths
+        phaseEngineOnly(store, grid, request);
+    }
+
+    private static void phaseEngineOnly(LineStore store, WavenumberGrid grid, CrossSectionRequest request)
+            throws IOException {
+        // Collect the calculator's engine input once with a recording engine, then time the engine on it.
+        Recorder rec = new Recorder();
+        long p0 = System.nanoTime();
+        new CrossSectionCalculator(List.of(store), registry()).compute(request, rec, ProgressListener.NONE);
+        double prepare = seconds(p0);
+        try (CrossSectionEngine engine = EngineFactory.create("fast", THREADS, request.wings(),
+                FastEngine.DEFAULT_TOLERANCE)) {
+            for (int run = 0; run < 2; run++) {
+                double[] sigma = new double[grid.size()];
+                long e0 = System.nanoTime();
+                engine.begin(grid, request.pressureAtm(), request.temperatureK());
+                for (LineChunk c : rec.chunks) {
+                    engine.accumulate(c, sigma);
+                }
+                engine.finish(sigma);
+                System.out.printf(Locale.ROOT, "phase: read + S(T) + widths (calculator with a no-op engine) %.2f s; "
+                        + "fast engine alone on the same %d chunks, run %d: %.2f s%n", prepare, rec.chunks.size(), run,
+                        seconds(e0));
+            }
+        }
+    }
+
+    /** Target 2: the 10×10 table through the table builder, from the 160-character file. */
+    static void table(long lines, Path work) throws IOException {
+        Path dir = Files.createDirectories(work.resolve("table"));
+        long g0 = System.nanoTime();
+        new SyntheticLines().writeRecords(dir.resolve("synthetic-co.par"), lines, 0, 0);
+        System.out.printf(Locale.ROOT, "file of %d records written in %.2f s (not part of the target)%n", lines,
+                seconds(g0));
+        double[] pressuresBar = new double[10];
+        double[] temperaturesK = new double[10];
+        for (int i = 0; i < 10; i++) {
+            pressuresBar[i] = Math.pow(10, -4 + 6.0 * i / 9); // 1e-4 .. 100 bar, log-spaced
+            temperaturesK[i] = 200 + 200 * i;                 // 200 .. 2000 K
+        }
+        Path plan = writePlan(dir, lines, pressuresBar, temperaturesK);
+        resetPeaks();
+        BuildReport report = build(plan, "table 10x10");
+        if (report.computed() != report.cells()) {
+            throw new IllegalStateException("from scratch, yet " + report.reused() + " cells reused");
+        }
+        System.out.printf(Locale.ROOT, "table 10x10: %d cells (%d blocks each), %d lines, %d points: %.1f s, "
+                        + "table file %d MB, estimated error %.2e%n", 100, report.cells() / 100, lines,
+                fullGrid(lines).size(), report.seconds(), Files.size(report.table()) >> 20,
+                report.estimatedRelativeError());
+    }
+
+    /** Target 3: 2×2 table from scratch, then after a 1 % update of the list (three times, median). */
+    static void incremental(long lines, Path work) throws IOException {
+        Path dir = Files.createDirectories(work.resolve("incremental"));
+        Path file = dir.resolve("synthetic-co.par");
+        SyntheticLines gen = new SyntheticLines();
+        long updateFrom = lines / 2;
+        long updateTo = updateFrom + lines / 100;
+        Path plan = writePlan(dir, lines, PRESSURES_2X2_BAR, TEMPERATURES_2X2_K);
+        // warm-up on a tenth of the list, in a folder of its own, so the timed builds run compiled code
+        Path warm = Files.createDirectories(work.resolve("warm-up"));
+        gen.writeRecords(warm.resolve("synthetic-co.par"), lines / 10, 0, 0);
+        build(writePlan(warm, lines / 10, PRESSURES_2X2_BAR, TEMPERATURES_2X2_K),
+                "warm-up");
+        gen.writeRecords(file, lines, 0, 0);
+        resetPeaks();
+        BuildReport scratch = build(plan, "from scratch");
+        double[] rebuild = new double[3];
+        int computed = 0;
+        for (int k = 0; k < rebuild.length; k++) {
+            // updated, back to the original, updated again: each rebuild recomputes the same blocks
+            boolean updated = k % 2 == 0;
+            gen.writeRecords(file, lines, updated ? updateFrom : 0, updated ? updateTo : 0);
+            BuildReport r = build(plan, updated ? "after the 1 % update" : "back to the original");
+            if (r.computed() * 5 > scratch.computed()) {
+                throw new IllegalStateException("rebuild recomputed " + r.computed() + " of " + r.cells() + " cells");
+            }
+            rebuild[k] = r.seconds();
+            computed = r.computed();
+        }
+        double median = java.util.Arrays.stream(rebuild).sorted().toArray()[1];
+        System.out.printf(Locale.ROOT, "incremental 2x2: lines %d..%d of %d updated (air widths x%.1f, %.3f..%.3f "
+                        + "cm-1); from scratch %.2f s (%d block cells); rebuilds %.2f / %.2f / %.2f s (%d block cells "
+                        + "each), median %.2f s: %.1fx faster%n", updateFrom, updateTo - 1, lines,
+                SyntheticLines.UPDATE_WIDTH_FACTOR, SyntheticLines.centreCm1(updateFrom),
+                SyntheticLines.centreCm1(updateTo - 1), scratch.seconds(), scratch.computed(), rebuild[0], rebuild[1],
+                rebuild[2], computed, median, scratch.seconds() / median);
+    }
+
+    /**
+     * Target 4: exact engine through the calculator on a 2 cm⁻¹ part of the list (every line within 25 cm⁻¹), 1 and 2 threads. One
+     * evaluation = one line at one grid point within its cutoff; counted from the stored centres (the pressure
+     * shift, ≤ 0.01 cm⁻¹ at 1 atm, moves at most one point per line edge).
+     */
+    static void exact(long lines, Path work) throws IOException {
+        LineStore store = new SyntheticLines().writeStore(work.resolve("store"), lines);
+        WavenumberGrid grid = WavenumberGrid.uniform(2200.0, 2202.0, SyntheticLines.SPACING_CM1);
+        CrossSectionRequest request = request(grid, 1.0, 296.0);
+        double cutoffCm1 = 25.0; // WingTreatment.defaults(): fixed 25 cm-1 cutoff
+        double[] p = grid.pointsCm1();
+        long evaluations = 0;
+        for (long i = 0; i < lines; i++) {
+            double c = SyntheticLines.centreCm1(i);
+            if (c < grid.firstCm1() - cutoffCm1 - 1 || c > p[p.length - 1] + cutoffCm1 + 1) {
+                continue;
+            }
+            int lo = WingKernel.firstIndexAtOrAbove(p, 0, p.length, c - cutoffCm1);
+            evaluations += WingKernel.firstIndexAbove(p, lo, p.length, c + cutoffCm1) - lo;
+        }
+        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store), registry());
+        for (int threads : new int[] {1, 2, 1, 2}) {
+            double best = 0;
+            long used = 0;
+            try (CrossSectionEngine engine = EngineFactory.create("exact", threads, request.wings(), 0)) {
+                for (int run = 0; run < 2; run++) {
+                    long t0 = System.nanoTime();
+                    CrossSectionResult r = calc.compute(request, engine, ProgressListener.NONE);
+                    double s = seconds(t0);
+                    check(r);
+                    used = r.linesUsed();
+                    best = Math.max(best, evaluations / s);
+                }
+            }
+            System.out.printf(Locale.ROOT, "exact via calculator, %d thread(s): %d lines, %d evaluations, best of 2 "
+                    + "runs %.1f million evaluations/s%n", threads, used, evaluations, best / 1e6);
+        }
+    }
+
+    private static Path writePlan(Path dir, long lines, double[] pressuresBar, double[] temperaturesK)
+            throws IOException {
+        Path plan = dir.resolve("plan.toml");
+        Files.writeString(plan, String.format(Locale.ROOT, """
+                [lines]
+                sources = ["synthetic-co.par"]
+                [grid]
+                wavenumber = { from = %s, to = %s, step = %s }
+                pressures_bar = %s
+                temperatures_K = %s
+                [background]
+                air = 1.0
+                [profile]
+                engine = "fast"
+                [output]
+                table = "out/table.arrow"
+                """, SyntheticLines.FIRST_CM1, SyntheticLines.FIRST_CM1 + lines * SyntheticLines.SPACING_CM1,
+                SyntheticLines.SPACING_CM1, list(pressuresBar), list(temperaturesK)));
+        return plan;
+    }
+
+    private static String list(double[] values) {
+        StringJoiner j = new StringJoiner(", ", "[", "]");
+        for (double v : values) {
+            j.add(Double.toString(v));
+        }
+        return j.toString();
+    }
+
+    /** Builds the plan's table, printing the phases (ingest, hashing, computing, writing) as they start. */
+    private static BuildReport build(Path plan, String what) throws IOException {
+        long t0 = System.nanoTime();
+        BuildListener phases = new BuildListener() {
+            @Override
+            public void sourceStarted(Path source, long fileBytes) {
+                System.out.printf(Locale.ROOT, "  %s %.2f s: ingest %s%n", what, seconds(t0), source.getFileName());
+            }
+
+            @Override
+            public void planned(int cells, int toCompute, long pointsToCompute) {
+                System.out.printf(Locale.ROOT, "  %s %.2f s: lines hashed, %d of %d block cells to compute%n", what,
+                        seconds(t0), toCompute, cells);
+            }
+
+            private int cells;
+
+            @Override
+            public void computed(int pressureIndex, int temperatureIndex, int block, int points) {
+                if (++cells % 50 == 0) {
+                    System.out.printf(Locale.ROOT, "  %s %.2f s: %d block cells computed (last p%d T%d)%n", what,
+                            seconds(t0), cells, pressureIndex, temperatureIndex);
+                }
+            }
+
+            @Override
+            public void writing() {
+                System.out.printf(Locale.ROOT, "  %s %.2f s: writing the table%n", what, seconds(t0));
+            }
+        };
+        BuildReport r = TableBuilder.build(PlanReader.read(plan), CalculatorBlocks.factory(), THREADS, false, phases);
+        System.out.printf(Locale.ROOT, "  %s %.2f s: done (%d computed, %d reused)%n", what, seconds(t0), r.computed(),
+                r.reused());
+        return r;
+    }
+
+    /** The fast engine's choices (oversampling, internal step, FFT length, slices) from the result's metadata. */
+    static String fastPlan(CrossSectionResult r) {
+        StringJoiner j = new StringJoiner(", ");
+        for (String key : new String[] {"fast.oversampling", "fast.internal_step_cm1", "fast.fft_length",
+                "fast.slices"}) {
+            j.add(key + " = " + r.metadata().get("engine." + key));
+        }
+        return j.toString();
+    }
+
+    private static double readOnly(LineStore store, LineQuery query) throws IOException {
+        long t0 = System.nanoTime();
+        LineBatch b = new LineBatch(CrossSectionCalculator.CHUNK_LINES);
+        try (LineCursor c = store.cursor(query)) {
+            while (c.read(b)) {
+                // reading only
+            }
+        }
+        return seconds(t0);
+    }
+
+    private static void check(CrossSectionResult r) {
+        double[] sigma = r.sigmaCm2PerMolecule();
+        if (r.linesUsed() == 0 || !(sigma[sigma.length / 2] > 0)) {
+            throw new IllegalStateException("no cross section: " + r.linesUsed() + " lines used");
+        }
+    }
+
+    private static double seconds(long t0) {
+        return (System.nanoTime() - t0) * 1e-9;
+    }
+
+    private static void resetPeaks() {
+        System.gc();
+        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) {
+            p.resetPeakUsage();
+        }
+    }
+
+    private static long peakHeapMb() {
+        long sum = 0;
+        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) {
+            if (p.getType() == MemoryType.HEAP) {
+                sum += p.getPeakUsage().getUsed();
+            }
+        }
+        return sum >> 20;
+    }
+
+    /** An engine that only keeps a copy of its input, to time the calculator's own work and replay it. */
+    private static final class Recorder implements CrossSectionEngine {
+        final List<LineChunk> chunks = new ArrayList<>();
+
+        @Override
+        public void begin(WavenumberGrid grid, double pressureAtm, double temperatureK) {
+            chunks.clear();
+        }
+
+        @Override
+        public void accumulate(LineChunk chunk, double[] sigmaCm2PerMolecule) {
+            LineChunk copy = new LineChunk(chunk.size);
+            System.arraycopy(chunk.centerCm1, 0, copy.centerCm1, 0, chunk.size);
+            System.arraycopy(chunk.intensityCmPerMolecule, 0, copy.intensityCmPerMolecule, 0, chunk.size);
+            System.arraycopy(chunk.dopplerHwhmCm1, 0, copy.dopplerHwhmCm1, 0, chunk.size);
+            System.arraycopy(chunk.lorentzHwhmCm1, 0, copy.lorentzHwhmCm1, 0, chunk.size);
+            System.arraycopy(chunk.chiFactor, 0, copy.chiFactor, 0, chunk.size);
+            copy.size = chunk.size;
+            chunks.add(copy);
+        }
+
+        @Override
+        public void finish(double[] sigmaCm2PerMolecule) {
+        }
+
+        @Override
+        public String id() {
+            return "recorder";
+        }
+
+        @Override
+        public Map<String, String> describe() {
+            return Map.of();
+        }
+
+        @Override
+        public double estimatedRelativeError() {
+            return 0;
+        }
+
+        @Override
+        public void close() {
+        }
+    }
+}

@@ -1,0 +1,105 @@
+package org.linewright.grid.bench;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The grid module's end-to-end performance targets (excluded from the default build), each in a child JVM with
+ * {@code -Xmx2g} running {@link GridTargets} on 1,000,000 synthetic, invented lines (system property
+ * {@code linewright.benchmark.lines}) and a 1,000,000-point grid. Figures are printed; record them in
+ * docs/performance.md. Run one with {@code ./mvnw -B -Pbenchmark -pl grid -am verify
+ * -Dtest=GridTargetsBenchmarkTest#fastOneStateEndToEnd -Dsurefire.failIfNoSpecifiedTests=false}.
+ * A child that runs out of heap exits non-zero and fails the test; a missed time target fails it too, with the
+ * figure in the message.
+ */
+@Tag("benchmark")
+class GridTargetsBenchmarkTest {
+    private static final long LINES = Long.getLong("linewright.benchmark.lines", 1_000_000L);
+
+    /** Target 1: ≤ 5 s on 2 cores, heap ≤ 2 GB (best of three runs, the first one cold, is judged). */
+    @Test
+    void fastOneStateEndToEnd() throws Exception {
+        String out = run("calc");
+        double best = Double.POSITIVE_INFINITY;
+        Matcher m = Pattern.compile("calc fast run \\d: .*: ([0-9.]+) s end to end").matcher(out);
+        while (m.find()) {
+            best = Math.min(best, Double.parseDouble(m.group(1)));
+        }
+        assertTrue(best <= 5.0, "fast, one (p, T): " + best + " s (target 5 s)");
+    }
+
+    /** Target 2: 10×10 (p, T) table, fast engine: ≤ 5 minutes, heap ≤ 2 GB. */
+    @Test
+    void tenByTenTable() throws Exception {
+        String out = run("table");
+        double seconds = number(out, "table 10x10: .*: ([0-9.]+) s,");
+        assertTrue(seconds <= 300, "10x10 table: " + seconds + " s (target 300 s)");
+    }
+
+    /** Target 3: a 1 % list update rebuilds ≥ 10× faster than from scratch (2×2 table). */
+    @Test
+    void incrementalRebuild() throws Exception {
+        String out = run("incremental");
+        double speedup = number(out, "([0-9.]+)x faster");
+        assertTrue(speedup >= 10, "rebuild after a 1 % update: " + speedup + "x faster (target 10x)");
+    }
+
+    /** Target 4: exact engine through the calculator, ≥ 100 million evaluations/s with 2 threads. */
+    @Test
+    void exactEvaluationsPerSecond() throws Exception {
+        String out = run("exact");
+        double best = 0;
+        Matcher m = Pattern.compile("2 thread\\(s\\): .* runs ([0-9.]+) million").matcher(out);
+        while (m.find()) {
+            best = Math.max(best, Double.parseDouble(m.group(1)));
+        }
+        assertTrue(best >= 100, "exact, 2 threads: " + best + " million evaluations/s (target 100 million)");
+    }
+
+    private static double number(String out, String regex) {
+        Matcher m = Pattern.compile(regex).matcher(out);
+        assertTrue(m.find(), "no figure matching " + regex);
+        return Double.parseDouble(m.group(1));
+    }
+
+    private static String run(String target) throws IOException, InterruptedException {
+        Path dir = Files.createTempDirectory("lw-grid-bench-");
+        try {
+            String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+            Process p = new ProcessBuilder(List.of(java, "-Xmx2g", "--add-opens=java.base/java.nio=ALL-UNNAMED",
+                    "-cp", System.getProperty("surefire.test.class.path", System.getProperty("java.class.path")),
+                    GridTargets.class.getName(), target, Long.toString(LINES), dir.toString()))
+                    .redirectErrorStream(true).start();
+            StringBuilder out = new StringBuilder();
+            try (var r = p.inputReader(StandardCharsets.UTF_8)) {
+                String line;
+                while ((line = r.readLine()) != null) {
+                    System.out.println(line); // as it comes, so a long run shows its phases
+                    out.append(line).append('\n');
+                }
+            }
+            // non-zero on OutOfMemoryError or a wrong result
+            assertEquals(0, p.waitFor(), out.toString());
+            System.out.printf(Locale.ROOT, "load average after the run: %s%n",
+                    Files.readString(Path.of("/proc/loadavg")).trim());
+            return out.toString();
+        } finally {
+            try (Stream<Path> walk = Files.walk(dir)) {
+                walk.sorted(Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
+            }
+        }
+    }
+}

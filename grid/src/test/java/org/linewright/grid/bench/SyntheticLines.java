@@ -1,0 +1,124 @@
+package org.linewright.grid.bench;
+
+import java.io.BufferedOutputStream;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Random;
+import org.linewright.ingest.hitran.HitranRecordWriter;
+import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.store.IngestCounts;
+import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.store.LineStoreWriter;
+import org.linewright.ingest.store.SourceMetadata;
+
+/**
+ * Synthetic, invented CO lines (molecule 5, isotopologues 1–6) for the grid benchmarks, in the manner of the
+ * ingest benchmark's generator: a block of 20,000 varied lines (S(296 K) 10⁻³⁰–10⁻²⁰ cm/molecule, air width
+ * 0–0.1 cm⁻¹/atm, self width 0–1 cm⁻¹/atm, E'' 0–10,000 cm⁻¹, n 0–0.99, shift 0 to −0.01 cm⁻¹/atm), repeated
+ * with rising centres {@value #FIRST_CM1} + i·{@value #SPACING_CM1} cm⁻¹ (10⁶ lines span 2000–2500 cm⁻¹, a
+ * fundamental band's region; the spacing is below the Doppler HWHM there, ≈ 0.002 cm⁻¹ at 200–300 K). Every value is rounded to what the
+ * 160-character record holds, so the generated store and the generated file carry the same lines.
+ *
+ * <p>A "list update" multiplies the air-broadened widths of a contiguous slice of lines by
+ * {@value #UPDATE_WIDTH_FACTOR} (rounded to the record's 4 decimals).
+ */
+final class SyntheticLines {
+    /** Lines per generated block. */
+    static final int BLOCK = 20_000;
+    /** Centre of line 0, cm⁻¹. */
+    static final double FIRST_CM1 = 2000.0;
+    /** Distance between consecutive centres, cm⁻¹. */
+    static final double SPACING_CM1 = 0.0005;
+    /** Factor applied to the air widths of the updated slice. */
+    static final double UPDATE_WIDTH_FACTOR = 1.1;
+    /** HITRAN molecule number of CO (common practice). */
+    static final int CO = 5;
+
+    private final LineBatch template = new LineBatch(BLOCK);
+    private final double[] airWidth = new double[BLOCK];
+
+    SyntheticLines() {
+        Random random = new Random(7);
+        LineBatch b = template;
+        for (int i = 0; i < BLOCK; i++) {
+            b.clearOptional(i);
+            b.moleculeId[i] = CO;
+            b.isotopologue[i] = 1 + random.nextInt(6);
+            b.intensityCmPerMolecule[i] = Double.parseDouble(String.format(Locale.ROOT, "%.3E",
+                    Math.pow(10, -20 - 10 * random.nextDouble())));
+            b.einsteinAS1[i] = Double.parseDouble(String.format(Locale.ROOT, "%.3E",
+                    Math.pow(10, -3 + 3 * random.nextDouble())));
+            b.airWidthCm1PerAtm[i] = random.nextInt(1000) / 1e4;
+            airWidth[i] = b.airWidthCm1PerAtm[i];
+            b.selfWidthCm1PerAtm[i] = random.nextInt(1000) / 1e3;
+            b.lowerEnergyCm1[i] = random.nextInt(100_000_000) / 1e4;
+            b.airWidthExponent[i] = random.nextInt(100) / 1e2;
+            b.airShiftCm1PerAtm[i] = -random.nextInt(10_000) / 1e6;
+            b.upperDegeneracy[i] = 2 * random.nextInt(100) + 1;
+            b.lowerDegeneracy[i] = 2 * random.nextInt(100) + 1;
+            boolean rBranch = random.nextBoolean();
+            int j = 1 + random.nextInt(60);
+            b.lowerJ[i] = j;
+            b.upperJ[i] = rBranch ? j + 1 : j - 1;
+            b.upperGlobalQuanta.append("              1");
+            b.lowerGlobalQuanta.append("              0");
+            b.upperLocalQuanta.append("               ");
+            b.lowerLocalQuanta.append(String.format(Locale.ROOT, "     %s%3d      ", rBranch ? "R" : "P", j));
+            b.uncertaintyCodes.append("475663");
+            b.referenceCodes.append(" 5 8 5 5 1 8");
+            b.lineMixingFlag.append(" ");
+        }
+    }
+
+    /** Centre of line {@code index}, cm⁻¹ (rounded to the record's 6 decimals). */
+    static double centreCm1(long index) {
+        return Math.round((FIRST_CM1 + index * SPACING_CM1) * 1e6) / 1e6;
+    }
+
+    /** Receives each generated block. */
+    interface BlockSink {
+        void accept(LineBatch batch) throws IOException;
+    }
+
+    /**
+     * Generates {@code lines} lines block by block; lines with index in [{@code updateFrom}, {@code updateTo})
+     * get updated air widths (an empty range for the original list).
+     */
+    void generate(long lines, long updateFrom, long updateTo, BlockSink sink) throws IOException {
+        LineBatch b = template;
+        for (long done = 0; done < lines; done += BLOCK) {
+            int n = (int) Math.min(BLOCK, lines - done);
+            for (int i = 0; i < n; i++) {
+                long index = done + i;
+                b.wavenumberCm1[i] = centreCm1(index);
+                b.sourceLine[i] = index + 1;
+                b.airWidthCm1PerAtm[i] = index >= updateFrom && index < updateTo
+                        ? Math.round(airWidth[i] * UPDATE_WIDTH_FACTOR * 1e4) / 1e4 : airWidth[i];
+            }
+            b.size = n;
+            sink.accept(b);
+        }
+    }
+
+    /** Writes the lines as 160-character records to {@code file}. */
+    void writeRecords(Path file, long lines, long updateFrom, long updateTo) throws IOException {
+        HitranRecordWriter writer = new HitranRecordWriter();
+        try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(file), 1 << 20)) {
+            generate(lines, updateFrom, updateTo, batch -> writer.write(batch, out));
+        }
+    }
+
+    /** Writes the original lines straight into a line store at {@code storeDir} and opens it. */
+    LineStore writeStore(Path storeDir, long lines) throws IOException {
+        try (LineStoreWriter writer = LineStoreWriter.create(storeDir, "synthetic",
+                SourceMetadata.of("synthetic-co.par", "", "hitran160", Map.of("generator", "SyntheticLines")))) {
+            generate(lines, 0, 0, writer::write);
+            writer.commit(new IngestCounts(lines, lines, 0, 0));
+        }
+        return LineStore.open(storeDir);
+    }
+}
