@@ -5,15 +5,14 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.Map;
-import java.util.Random;
 import org.linewright.ingest.hitran.HitranRecordWriter;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.store.IngestCounts;
 import org.linewright.ingest.store.LineStore;
 import org.linewright.ingest.store.LineStoreWriter;
 import org.linewright.ingest.store.SourceMetadata;
+import org.linewright.ingest.testsupport.SyntheticRecords;
 
 /**
  * Synthetic, invented CO lines (molecule 5, isotopologues 1–6) for the grid benchmarks, in the manner of the
@@ -38,40 +37,12 @@ final class SyntheticLines {
     /** HITRAN molecule number of CO (common practice). */
     static final int CO = 5;
 
-    private final LineBatch template = new LineBatch(BLOCK);
+    private final LineBatch template;
     private final double[] airWidth = new double[BLOCK];
 
     SyntheticLines() {
-        Random random = new Random(7);
-        LineBatch b = template;
-        for (int i = 0; i < BLOCK; i++) {
-            b.clearOptional(i);
-            b.moleculeId[i] = CO;
-            b.isotopologue[i] = 1 + random.nextInt(6);
-            b.intensityCmPerMolecule[i] = Double.parseDouble(String.format(Locale.ROOT, "%.3E",
-                    Math.pow(10, -20 - 10 * random.nextDouble())));
-            b.einsteinAS1[i] = Double.parseDouble(String.format(Locale.ROOT, "%.3E",
-                    Math.pow(10, -3 + 3 * random.nextDouble())));
-            b.airWidthCm1PerAtm[i] = random.nextInt(1000) / 1e4;
-            airWidth[i] = b.airWidthCm1PerAtm[i];
-            b.selfWidthCm1PerAtm[i] = random.nextInt(1000) / 1e3;
-            b.lowerEnergyCm1[i] = random.nextInt(100_000_000) / 1e4;
-            b.airWidthExponent[i] = random.nextInt(100) / 1e2;
-            b.airShiftCm1PerAtm[i] = -random.nextInt(10_000) / 1e6;
-            b.upperDegeneracy[i] = 2 * random.nextInt(100) + 1;
-            b.lowerDegeneracy[i] = 2 * random.nextInt(100) + 1;
-            boolean rBranch = random.nextBoolean();
-            int j = 1 + random.nextInt(60);
-            b.lowerJ[i] = j;
-            b.upperJ[i] = rBranch ? j + 1 : j - 1;
-            b.upperGlobalQuanta.append("              1");
-            b.lowerGlobalQuanta.append("              0");
-            b.upperLocalQuanta.append("               ");
-            b.lowerLocalQuanta.append(String.format(Locale.ROOT, "     %s%3d      ", rBranch ? "R" : "P", j));
-            b.uncertaintyCodes.append("475663");
-            b.referenceCodes.append(" 5 8 5 5 1 8");
-            b.lineMixingFlag.append(" ");
-        }
+        template = SyntheticRecords.block(BLOCK, 7);
+        System.arraycopy(template.airWidthCm1PerAtm, 0, airWidth, 0, BLOCK);
     }
 
     /** Centre of line {@code index}, cm⁻¹ (rounded to the record's 6 decimals). */

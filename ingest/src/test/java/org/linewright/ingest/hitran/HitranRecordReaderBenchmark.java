@@ -12,13 +12,13 @@ import org.apache.commons.compress.compressors.bzip2.BZip2CompressorOutputStream
 import org.apache.commons.compress.compressors.gzip.GzipCompressorOutputStream;
 import org.apache.commons.compress.compressors.zstandard.ZstdCompressorOutputStream;
 import org.junit.jupiter.api.io.TempDir;
-import java.util.Random;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.source.LineSources;
 import org.linewright.ingest.source.OpenedSource;
 import org.linewright.ingest.source.ReadOptions;
+import org.linewright.ingest.testsupport.SyntheticRecords;
 import org.linewright.ingest.testsupport.SampleIsotopologues;
 
 /**
@@ -65,30 +65,10 @@ class HitranRecordReaderBenchmark {
     }
 
     static byte[] syntheticBlock() throws IOException {
-        Random random = new Random(42);
-        LineBatch b = new LineBatch(DISTINCT_RECORDS);
+        LineBatch b = SyntheticRecords.block(DISTINCT_RECORDS, 42);
         for (int i = 0; i < DISTINCT_RECORDS; i++) {
-            b.moleculeId[i] = 5;
-            b.isotopologue[i] = 1 + random.nextInt(6);
             b.wavenumberCm1[i] = Math.round((10 + i * 0.37) * 1e6) / 1e6;
-            b.intensityCmPerMolecule[i] = Double.parseDouble(String.format("%.3E", Math.pow(10, -20 - 10 * random.nextDouble())));
-            b.einsteinAS1[i] = Double.parseDouble(String.format("%.3E", Math.pow(10, -3 + 3 * random.nextDouble())));
-            b.airWidthCm1PerAtm[i] = random.nextInt(1000) / 1e4;
-            b.selfWidthCm1PerAtm[i] = random.nextInt(1000) / 1e3;
-            b.lowerEnergyCm1[i] = random.nextInt(100_000_000) / 1e4;
-            b.airWidthExponent[i] = random.nextInt(100) / 1e2;
-            b.airShiftCm1PerAtm[i] = -random.nextInt(10_000) / 1e6;
-            b.upperDegeneracy[i] = 2 * random.nextInt(100) + 1;
-            b.lowerDegeneracy[i] = 2 * random.nextInt(100) + 1;
-            b.upperGlobalQuanta.append("              1");
-            b.lowerGlobalQuanta.append("              0");
-            b.upperLocalQuanta.append("               ");
-            b.lowerLocalQuanta.append(String.format("     %s%3d      ", random.nextBoolean() ? "P" : "R", 1 + random.nextInt(60)));
-            b.uncertaintyCodes.append("475663");
-            b.referenceCodes.append(" 5 8 5 5 1 8");
-            b.lineMixingFlag.append(" ");
         }
-        b.size = DISTINCT_RECORDS;
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         new HitranRecordWriter().write(b, out);
         return out.toByteArray();

@@ -10,13 +10,13 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import java.util.Random;
 import org.linewright.ingest.hitran.HitranRecordWriter;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineCursor;
 import org.linewright.ingest.store.LineQuery;
 import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.testsupport.SyntheticRecords;
 
 /**
  * End-to-end ingest benchmark: an uncompressed file of generated (synthetic, invented) 160-character records,
@@ -65,28 +65,7 @@ public final class IngestBenchmark {
 
     /** Writes {@code records} sorted records: a block of varied records repeated with rising wavenumbers. */
     static void generate(Path file, long records) throws IOException {
-        Random random = new Random(7);
-        LineBatch b = new LineBatch(BLOCK);
-        for (int i = 0; i < BLOCK; i++) {
-            b.moleculeId[i] = 5;
-            b.isotopologue[i] = 1 + random.nextInt(6);
-            b.intensityCmPerMolecule[i] = Double.parseDouble(String.format(Locale.ROOT, "%.3E", Math.pow(10, -20 - 10 * random.nextDouble())));
-            b.einsteinAS1[i] = Double.parseDouble(String.format(Locale.ROOT, "%.3E", Math.pow(10, -3 + 3 * random.nextDouble())));
-            b.airWidthCm1PerAtm[i] = random.nextInt(1000) / 1e4;
-            b.selfWidthCm1PerAtm[i] = random.nextInt(1000) / 1e3;
-            b.lowerEnergyCm1[i] = random.nextInt(100_000_000) / 1e4;
-            b.airWidthExponent[i] = random.nextInt(100) / 1e2;
-            b.airShiftCm1PerAtm[i] = -random.nextInt(10_000) / 1e6;
-            b.upperDegeneracy[i] = 2 * random.nextInt(100) + 1;
-            b.lowerDegeneracy[i] = 2 * random.nextInt(100) + 1;
-            b.upperGlobalQuanta.append("              1");
-            b.lowerGlobalQuanta.append("              0");
-            b.upperLocalQuanta.append("               ");
-            b.lowerLocalQuanta.append(String.format(Locale.ROOT, "     %s%3d      ", random.nextBoolean() ? "P" : "R", 1 + random.nextInt(60)));
-            b.uncertaintyCodes.append("475663");
-            b.referenceCodes.append(" 5 8 5 5 1 8");
-            b.lineMixingFlag.append(" ");
-        }
+        LineBatch b = SyntheticRecords.block(BLOCK, 7);
         HitranRecordWriter writer = new HitranRecordWriter();
         try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(file), 1 << 20)) {
             for (long done = 0; done < records; ) {
