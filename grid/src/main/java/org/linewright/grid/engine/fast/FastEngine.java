@@ -45,7 +45,22 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * interpolation costs e_ν again). The width axes share B = 0.8·(ε − position error) − round-off allowance: the
  * Doppler log step is the largest whose error at the family's most Gaussian width ratio is within B/2, the Lorentz
  * log step the largest whose error at the most Lorentzian ratio is within B minus the Doppler axis's actual error.
- * {@link #estimatedRelativeError()} is the sum of the measured errors at the chosen steps plus a round-off allowance
+ *
+ * <p><b>Lorentz floor and the Doppler-dominated family.</b> Lorentz widths far below the Doppler width change the
+ * Voigt profile (even at the criterion's depth) only through the first, smooth terms of its expansion in γL/αD, so
+ * they need no log-spaced nodes of their own; but such lines are the ones whose Doppler axis must be fine (the most
+ * Gaussian lines set the Doppler step, since deep Gaussian wings are the hardest to interpolate). So lines with αD &gt; 0
+ * are split at γ_s = γ_f·e^δ: those below (pure Doppler included) form the Doppler-dominated family, whose Lorentz
+ * axis is one floored stencil {0, γ_f, γ_f·e^δ, γ_f·e^(2δ)} ({@link WidthAxis#floored}: four nodes, whatever the
+ * spread of small widths) and whose Doppler axis is fine; those above keep a log-spaced Lorentz axis from γ_s up and
+ * a Doppler axis chosen at their most Gaussian ratio γ_s/αD,max, much coarser. δ is the Lorentz log step with half
+ * the width budget B at the most Lorentzian ratio; γ_f = r·αD,min is the largest floor (r ≥ {@value #MIN_FLOOR_RATIO})
+ * whose measured first-stencil error ({@link FastErrorModel#flooredLorentzError}, at the smallest αD, the worst
+ * case) is within B/2; the family's Lorentz error counted in the estimate is that error measured at its own smallest
+ * αD. Before, a separate pure-Doppler family existed and the Voigt family's Lorentz axis reached down to its
+ * smallest non-zero γL, so lists with air widths from near 0 spent many slices on widths the profile cannot show.
+ *
+ * <p>{@link #estimatedRelativeError()} is the sum of the measured errors at the chosen steps plus a round-off allowance
  * (64·2⁻⁵²·log₂L/10⁻⁶); it can exceed ε only when m is capped (lines much narrower than the grid spacing).
  *
  * <p><b>Grids.</b> Uniform grids: the internal grid is the output grid refined m times, and σ is read at every
@@ -73,8 +88,9 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * added as zero, since a cross section is never negative; where no line reaches, σ is round-off (about 10⁻¹⁶ of the
  * largest line peak) rather than exactly zero.
  *
- * <p><b>Lines.</b> Families by width kind, each with its own axes: both widths positive; γL = 0 (pure Doppler, an
- * exact Lorentz node at 0); αD = 0 (pure Lorentz); each split again by the χ flag. Lines with S = 0 are skipped.
+ * <p><b>Lines.</b> Families by width kind, each with its own axes: αD &gt; 0 and γL ≥ γ_s (Voigt); αD &gt; 0 and
+ * γL &lt; γ_s (Doppler-dominated, pure Doppler included, floored Lorentz axis); αD = 0 (pure Lorentz); each split
+ * again by the χ flag. Lines with S = 0 are skipped.
  *
  * <p><b>Threads and determinism.</b> The non-empty slices are split into {@value #BLOCKS} fixed contiguous blocks;
  * each block sums its slices' spectra in slice order, and the blocks are summed in block order, so σ is bitwise the
@@ -114,9 +130,11 @@ public final class FastEngine implements CrossSectionEngine {
     private static final int P = FastErrorModel.POSITION_POINTS;
     private static final int SHIFT = P / 2 - 1;
     private static final int BOTH = 0;
-    private static final int DOPPLER_ONLY = 1;
+    private static final int DOPPLER_DOMINATED = 1;
     private static final int LORENTZ_ONLY = 2;
     private static final String[] FAMILY_NAMES = {"voigt", "doppler", "lorentz"};
+    /** Smallest Lorentz floor searched, relative to the smallest Doppler HWHM. */
+    static final double MIN_FLOOR_RATIO = 1e-9;
     /** Families: three width kinds, each without and with the χ factor. */
     private static final int FAMILIES = 6;
 
@@ -135,6 +153,11 @@ public final class FastEngine implements CrossSectionEngine {
     private double[] lorentzCm1 = new double[0];
     private boolean[] chi = new boolean[0];
     private int count;
+    /** Lines with αD &gt; 0 and γL below this go to the Doppler-dominated family (0: none). */
+    private double lowSplitCm1;
+    /** That family's Lorentz floor γ_f and log step δ. */
+    private double lowFloorCm1;
+    private double lowLogStep;
     private double estimate;
     private final Map<String, String> plan = new LinkedHashMap<>();
 
@@ -227,6 +250,8 @@ public final class FastEngine implements CrossSectionEngine {
         WingKernel kernel;
         double dopplerError;
         double lorentzError;
+        /** The floored Lorentz axis's first non-zero node, 0 when the axis is not floored. */
+        double lorentzFloorCm1;
         int firstSlice;
     }
 
@@ -245,6 +270,8 @@ public final class FastEngine implements CrossSectionEngine {
             plan.put("fast.lines", "0");
             return;
         }
+        // first all lines with αD > 0 in one family, to choose the internal step and the split
+        lowSplitCm1 = 0;
         Family[] families = gatherFamilies();
 
         // internal uniform grid: the position error gets a quarter of the tolerance (twice on resolving-power grids,
@@ -256,6 +283,11 @@ public final class FastEngine implements CrossSectionEngine {
                 : (n >= 2 ? points[1] - points[0] : points[0] / grid.resolvingPower());
         int m = chooseOversampling(families, outputStep, tolerance / 4);
         double h = outputStep / m;
+        double widthBudget = widthBudget(families, h, uniform);
+        // Doppler-dominated lines (γL below the split, pure Doppler included) form a family of their own with a
+        // floored Lorentz axis; the others keep a log-spaced Lorentz axis that starts at the split
+        chooseLorentzSplit(families[BOTH], families[BOTH + 3], widthBudget);
+        families = gatherFamilies();
         double positionError = 0;
         for (Family f : families) {
             if (f != null) {
@@ -265,7 +297,7 @@ public final class FastEngine implements CrossSectionEngine {
         double positionTotal = uniform ? positionError : 2 * positionError;
         // the width axes share what is left, with a margin of 20 % for the sampled maxima and round-off
         // (at least a tenth of the tolerance, should the position error alone exceed it: m capped)
-        planAxes(families, Math.max(0.1 * tolerance, 0.8 * (tolerance - positionTotal) - ROUND_OFF_ALLOWANCE));
+        planAxes(families, widthBudget(families, h, uniform));
         // resolving-power grids: a margin of 3 internal points each side for the output interpolation stencil
         double origin = uniform ? points[0] : points[0] - 3 * h;
         long internalPoints = uniform ? (long) (n - 1) * m + 1
@@ -382,6 +414,7 @@ public final class FastEngine implements CrossSectionEngine {
                 plan.put(key + ".doppler_log_step", Double.toString(f.doppler.logStep()));
                 plan.put(key + ".lorentz_nodes", Integer.toString(f.lorentz.size()));
                 plan.put(key + ".lorentz_log_step", Double.toString(f.lorentz.logStep()));
+                plan.put(key + ".lorentz_floor_cm1", Double.toString(f.lorentzFloorCm1));
             }
         }
         plan.put("fast.estimated_relative_error", String.format(Locale.ROOT, "%.3e", estimate));
@@ -406,8 +439,59 @@ public final class FastEngine implements CrossSectionEngine {
         return families;
     }
 
+    /**
+     * The width axes' share B = 0.8·(ε − position error) − round-off allowance, at least ε/10 (should the position
+     * error alone exceed ε: m capped); the position error counted twice on resolving-power grids.
+     */
+    private double widthBudget(Family[] families, double h, boolean uniform) {
+        double positionError = 0;
+        for (Family f : families) {
+            if (f != null) {
+                positionError = Math.max(positionError, FastErrorModel.positionError(h, f.alphaMin, f.gammaMin));
+            }
+        }
+        double positionTotal = uniform ? positionError : 2 * positionError;
+        return Math.max(0.1 * tolerance, 0.8 * (tolerance - positionTotal) - ROUND_OFF_ALLOWANCE);
+    }
+
+    /**
+     * Sets the Lorentz floor γ_f and the split γ_f·e^δ between the Doppler-dominated family and the Voigt family,
+     * from the lines with αD &gt; 0 (both χ kinds): δ is the log step the Voigt family's Lorentz axis would take with
+     * half the width budget (the Doppler axis takes at most the other half, so the Lorentz axis never gets less),
+     * γ_f the largest floor whose first stencil keeps within that half ({@link #lorentzFloorCm1}). No split when
+     * every such line has γL = 0, or none has γL below the split.
+     */
+    private void chooseLorentzSplit(Family plain, Family withChi, double budget) {
+        lowSplitCm1 = 0;
+        lowFloorCm1 = 0;
+        lowLogStep = 0;
+        double alphaMin = Double.POSITIVE_INFINITY;
+        double gammaMin = Double.POSITIVE_INFINITY;
+        double gammaMax = 0;
+        for (Family f : new Family[] {plain, withChi}) {
+            if (f != null) {
+                alphaMin = Math.min(alphaMin, f.alphaMin);
+                gammaMin = Math.min(gammaMin, f.gammaMin);
+                gammaMax = Math.max(gammaMax, f.gammaMax);
+            }
+        }
+        if (!(gammaMax > 0)) {
+            return;
+        }
+        double ratio = alphaMin / gammaMax;
+        double step = FastErrorModel.largestStep(s -> FastErrorModel.lorentzAxisError(s, ratio), budget / 2,
+                MIN_LOG_STEP, MAX_LOG_STEP);
+        double floorCm1 = lorentzFloorCm1(alphaMin, step, budget / 2);
+        double split = floorCm1 * Math.exp(step);
+        if (gammaMin < split) {
+            lowSplitCm1 = split;
+            lowFloorCm1 = floorCm1;
+            lowLogStep = step;
+        }
+    }
+
     /** Chooses each family's width axes: the Doppler axis gets half the budget, the Lorentz axis the rest. */
-    private static void planAxes(Family[] families, double budget) {
+    private void planAxes(Family[] families, double budget) {
         for (int family = 0; family < FAMILIES; family++) {
             Family f = families[family];
             if (f == null) {
@@ -425,8 +509,14 @@ public final class FastEngine implements CrossSectionEngine {
                 f.dopplerError = f.doppler.stencilSize() == 1 ? 0
                         : FastErrorModel.dopplerAxisError(f.doppler.logStep(), ratio);
             }
-            if (kind == DOPPLER_ONLY) {
+            if (f.gammaMax == 0) {
                 f.lorentz = WidthAxis.exact(0.0);
+            } else if (kind == DOPPLER_DOMINATED) {
+                // 0 ≤ γL < γ_f·e^δ: one floored stencil {0, γ_f, γ_f·e^δ, γ_f·e^(2δ)}, its error measured at the
+                // family's own smallest αD (the floor was chosen at the smallest αD of all, within half the budget)
+                f.lorentz = WidthAxis.floored(lowFloorCm1, f.gammaMax, lowLogStep);
+                f.lorentzFloorCm1 = lowFloorCm1;
+                f.lorentzError = FastErrorModel.flooredLorentzError(f.lorentz.logStep(), f.alphaMin / lowFloorCm1);
             } else {
                 // worst case for the Lorentz axis: the most Lorentzian line, smallest αD/γL
                 double ratio = f.alphaMin / f.gammaMax;
@@ -440,9 +530,23 @@ public final class FastEngine implements CrossSectionEngine {
         }
     }
 
-    /** Width kind (both, Doppler only, Lorentz only), plus 3 for lines with the χ factor. */
+    /**
+     * The Lorentz floor γ_f of a family whose narrowest Doppler HWHM is {@code alphaMinCm1}: the largest
+     * γ_f = r·αD,min, r ∈ [{@value #MIN_FLOOR_RATIO}, 1], whose floored first stencil (nodes 0, γ_f, γ_f·e^δ,
+     * γ_f·e^(2δ)) keeps the profile error within {@code budget} ({@link FastErrorModel#flooredLorentzError}, measured
+     * at the smallest αD, the worst case). Below it a line's Lorentz width needs no nodes of its own: its effect on
+     * the Voigt profile, to the criterion's depth, is interpolated from the zero node and the floor's nodes.
+     */
+    static double lorentzFloorCm1(double alphaMinCm1, double logStep, double budget) {
+        double r = FastErrorModel.largestStep(x -> FastErrorModel.flooredLorentzError(logStep, 1 / x), budget,
+                MIN_FLOOR_RATIO, 1.0);
+        return r * alphaMinCm1;
+    }
+
+    /** Width kind (Voigt, Doppler-dominated, pure Lorentz), plus 3 for lines with the χ factor. */
     private int familyOf(int line) {
-        int kind = lorentzCm1[line] == 0 ? DOPPLER_ONLY : (dopplerCm1[line] == 0 ? LORENTZ_ONLY : BOTH);
+        // Doppler-dominated lines (pure Doppler included) below the split get the floored Lorentz axis
+        int kind = dopplerCm1[line] == 0 ? LORENTZ_ONLY : (lorentzCm1[line] < lowSplitCm1 ? DOPPLER_DOMINATED : BOTH);
         return chi[line] ? kind + 3 : kind;
     }
 

@@ -7,6 +7,10 @@ package org.linewright.grid.engine.fast;
  * it. A width is distributed over its stencil with {@link LagrangeWeights#general} in the variable u = w^power:
  * power 2 (the variance) for the Doppler axis, because Gaussians compose by adding variances; power 1 for the
  * Lorentz axis, because Lorentzians compose by adding widths.
+ *
+ * <p>A floored axis ({@link #floored}) replaces the lowest (margin) node by an exact node at width 0: widths from 0
+ * up to the floor's second node share the stencil {0, w_lo, w_lo·e^δ, w_lo·e^(2δ)}, so Lorentz widths far below what
+ * the Doppler width lets one see (pure-Doppler lines included) need no nodes of their own.
  */
 final class WidthAxis {
 
@@ -52,6 +56,32 @@ final class WidthAxis {
         return new WidthAxis(w, lowCm1, step, n, power);
     }
 
+    /**
+     * Nodes {0, floor, floor·e^δ, …} covering [0, max(high, floor·e^δ)] with a log step no larger than
+     * {@code maxLogStep} above the floor; interpolation variable the width itself (power 1).
+     *
+     * @param floorCm1   the first non-zero node, &gt; 0
+     * @param highCm1    the largest width to cover
+     * @param maxLogStep the largest log step between non-zero nodes
+     */
+    static WidthAxis floored(double floorCm1, double highCm1, double maxLogStep) {
+        double span = Math.log(Math.max(highCm1, floorCm1) / floorCm1);
+        int n = Math.max(1, (int) Math.ceil(span / maxLogStep));
+        // one interval: the full allowed step (its error is what was budgeted), covering any span up to it
+        double step = n == 1 ? maxLogStep : span / n;
+        double[] w = new double[n + 3];
+        for (int k = 1; k < w.length; k++) {
+            w[k] = floorCm1 * Math.exp((k - 1) * step);
+        }
+        // w[0] = 0: the exact zero-width node that replaces the margin node below the floor
+        return new WidthAxis(w, floorCm1, step, n, 1);
+    }
+
+    /** @return the lowest node width, cm⁻¹ (0 for a floored axis) */
+    double lowestNodeCm1() {
+        return widthsCm1[0];
+    }
+
     /** @return number of nodes */
     int size() {
         return widthsCm1.length;
@@ -85,7 +115,8 @@ final class WidthAxis {
             out[offset] = 1.0;
             return 0;
         }
-        int j = (int) Math.floor(Math.log(widthCm1 / lowCm1) / logStep);
+        // widths below the floor (zero included) take the first stencil: log of 0 is −∞, clamped to 0 below
+        int j = widthCm1 <= lowCm1 ? 0 : (int) Math.floor(Math.log(widthCm1 / lowCm1) / logStep);
         j = Math.max(0, Math.min(intervals - 1, j));
         double u = power == 2 ? widthCm1 * widthCm1 : widthCm1;
         LagrangeWeights.general(u, variable, j, out, offset);

@@ -14,6 +14,7 @@ import org.linewright.broadening.wings.WingKernel;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.engine.LineChunk;
 import org.linewright.grid.wavenumber.WavenumberGrid;
+import org.linewright.ingest.units.PhysicalConstants;
 
 /**
  * The fast engine against a direct summation of the closed-form Voigt profile ({@link VoigtProfile}, itself
@@ -115,6 +116,56 @@ class FastEngineAccuracyTest {
         WavenumberGrid grid = WavenumberGrid.uniform(1000, 1006, 0.002);
         LineChunk chunk = lines(1, 200, 999.5, 1006.5, 0.002, 0.006, 1.2e-3, 0.1);
         assertWithinTolerance(grid, chunk, NO_CUTOFF);
+    }
+
+    /**
+     * A realistic width spread: 12C16O lines in its fundamental band, air widths drawn uniformly from 0 to 0.1
+     * cm⁻¹/atm (a few exactly 0), Doppler HWHM of each line at a temperature drawn from 296–1000 K. αD = ν/c·
+     * √(2 ln2·kT/m) (common practice); m(12C16O) = 27.9949 u (from memory, AME atomic masses 12C 12 u, 16O
+     * 15.9949 u); constants CODATA 2018. The reference is direct summation of the closed-form Voigt profile.
+     */
+    static LineChunk coBandLines(long seed, int n, double fromCm1, double toCm1, double pressureAtm) {
+        Random random = new Random(seed);
+        LineChunk chunk = lines(seed, n, fromCm1, toCm1, 1, 1, 1, 1);
+        double massKg = 27.9949 * PhysicalConstants.ATOMIC_MASS_CONSTANT_KG;
+        for (int i = 0; i < n; i++) {
+            double temperatureK = 296 + (1000 - 296) * random.nextDouble();
+            chunk.dopplerHwhmCm1[i] = chunk.centerCm1[i] * Math.sqrt(2 * Math.log(2)
+                    * PhysicalConstants.BOLTZMANN_J_PER_K * temperatureK / massKg)
+                    / PhysicalConstants.SPEED_OF_LIGHT_M_PER_S;
+            double airWidthCm1PerAtm = i % 25 == 0 ? 0.0 : 0.1 * random.nextDouble();
+            chunk.lorentzHwhmCm1[i] = airWidthCm1PerAtm * pressureAtm;
+        }
+        return chunk;
+    }
+
+    @Test
+    void realisticWidthSpreadAtOneAtmosphere() {
+        // the grid step the end-to-end benchmark uses (0.0005 cm⁻¹), lines around 2100 cm⁻¹ (αD ≈ 0.0025–0.0045)
+        WavenumberGrid grid = WavenumberGrid.uniform(2100, 2103, 0.0005);
+        LineChunk chunk = coBandLines(21, 150, 2099.8, 2103.2, 1.0);
+        assertWithinTolerance(grid, chunk, NO_CUTOFF);
+    }
+
+    @Test
+    void realisticWidthSpreadAtOneHundredthOfAnAtmosphere() {
+        // γL ≤ 0.001 cm⁻¹ against αD ≈ 0.0025–0.0045 cm⁻¹: Doppler-dominated lines, many far below the floor
+        WavenumberGrid grid = WavenumberGrid.uniform(2100, 2103, 0.0005);
+        LineChunk chunk = coBandLines(22, 150, 2099.9, 2103.1, 0.01);
+        assertWithinTolerance(grid, chunk, NO_CUTOFF);
+        assertFloorUsed(grid, chunk);
+    }
+
+    /** The Doppler-dominated family's floored Lorentz axis is in use (lines with 0 < γL ≪ αD exist here). */
+    private static void assertFloorUsed(WavenumberGrid grid, LineChunk chunk) {
+        try (FastEngine engine = new FastEngine(1, NO_CUTOFF, TOLERANCE)) {
+            double[] sigma = new double[grid.size()];
+            engine.begin(grid, 1.0, 296.0);
+            engine.accumulate(chunk, sigma);
+            engine.finish(sigma);
+            java.util.Map<String, String> plan = engine.describe();
+            assertTrue(Double.parseDouble(plan.get("fast.family.doppler.lorentz_floor_cm1")) > 0, plan.toString());
+        }
     }
 
     @Test

@@ -53,4 +53,15 @@ class FastErrorModelTest {
         assertTrue(FastErrorModel.lorentzAxisError(step, 0.1) <= 2e-4);
         assertTrue(FastErrorModel.lorentzAxisError(step * 1.05, 0.1) > 2e-4 * 1.01);
     }
+
+    @Test
+    void flooredLorentzErrorFallsAsTheFourthPowerOfTheFloor() {
+        // four nodes {0, γf, γf·e^δ, γf·e^2δ}: the remainder scales as γf⁴·∂⁴V/∂γ⁴ (A&S 25.2.3) while γf ≪ αD; the
+        // criterion's depth moves out slowly with γL, so the measured ratio per halving approaches 2⁴ from below
+        double coarse = FastErrorModel.flooredLorentzError(0.3, 160.0);
+        double fine = FastErrorModel.flooredLorentzError(0.3, 320.0);
+        assertEquals(14.0, coarse / fine, 3.0);
+        // and it only falls as αD grows against the floor: the smallest αD of a family is its worst case
+        assertTrue(FastErrorModel.flooredLorentzError(0.3, 10.0) > FastErrorModel.flooredLorentzError(0.3, 20.0));
+    }
 }
