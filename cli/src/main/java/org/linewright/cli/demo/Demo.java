@@ -30,7 +30,7 @@ public final class Demo {
      */
     public Demo(Path demoDir, Path outDir, List<DemoStep> steps, boolean quiet) {
         this.demoDir = demoDir;
-        this.outDir = outDir;
+        this.outDir = outDir.toAbsolutePath().normalize();
         this.steps = List.copyOf(steps);
         this.quiet = quiet;
     }

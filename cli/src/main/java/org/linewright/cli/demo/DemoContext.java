@@ -33,7 +33,7 @@ public final class DemoContext {
      */
     public DemoContext(Path demoDir, Path outDir, boolean quiet) {
         this.demoDir = demoDir;
-        this.outDir = outDir;
+        this.outDir = outDir.toAbsolutePath().normalize();
         this.quiet = quiet;
     }
 

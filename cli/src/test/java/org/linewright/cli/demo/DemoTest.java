@@ -53,6 +53,16 @@ class DemoTest {
     }
 
     @Test
+    void demoRunsIntoARelativeOutputFolder() throws IOException {
+        // The command's default output folder is relative (linewright-out/demo): every step must cope with it.
+        Assumptions.assumeTrue(Files.isRegularFile(SHIPPED.resolve("plan.toml")), "shipped demo folder not found");
+        Path relative = Paths.get("target", "demo-relative-" + System.nanoTime());
+        DemoReport report = new Demo(SHIPPED, relative, Demo.availableSteps(), true).run(Demo.StepListener.NONE);
+        assertEquals(Demo.availableSteps().size(), report.steps().size());
+        assertTrue(Files.isRegularFile(relative.resolve("report.html")));
+    }
+
+    @Test
     void stepsRunInOrderAndAreTimed(@TempDir Path out) throws IOException {
         StringBuilder order = new StringBuilder();
         DemoStep first = step("first", order);
