@@ -73,7 +73,7 @@ public final class CrossSectionCalculator {
      * Extra distance per atm read beyond the cutoff on both sides so that lines pushed into range by their
      * pressure shift are not missed, cm⁻¹/atm. Measured shifts are below 0.1 cm⁻¹/atm (from memory); 1 is safe.
      */
-    static final double SHIFT_MARGIN_CM1_PER_ATM = 1.0;
+    public static final double SHIFT_MARGIN_CM1_PER_ATM = 1.0;
     /**
      * The columns read: every numeric column (S(296 K) or A and g' for S(T), E'', the widths, exponents and
      * shifts of every broadener, the J and K numbers the broadening rules use, the source line for messages).

@@ -16,6 +16,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.manifest.BlockLayout;
 import org.linewright.grid.manifest.BlockStore;
 import org.linewright.grid.manifest.BuildManifest;
@@ -46,10 +47,10 @@ import org.linewright.ingest.store.SourceMetadata;
 public final class TableBuilder {
     /**
      * Extra reach per atm of pressure beyond the cutoff, cm⁻¹/atm: lines pushed into a block by their pressure
-     * shift. The same margin the cross-section calculator reads beyond its cutoff (measured shifts are below
-     * 0.1 cm⁻¹/atm, from memory), so a table cell sees the lines a single cross section of the whole grid sees.
+     * shift. It is the calculator's own margin, so a table cell sees the lines a single cross section of the
+     * whole grid sees.
      */
-    public static final double SHIFT_MARGIN_CM1_PER_ATM = 1.0;
+    public static final double SHIFT_MARGIN_CM1_PER_ATM = CrossSectionCalculator.SHIFT_MARGIN_CM1_PER_ATM;
 
     private TableBuilder() {
     }
