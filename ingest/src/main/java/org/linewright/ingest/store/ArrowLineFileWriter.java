@@ -41,6 +41,26 @@ final class ArrowLineFileWriter implements AutoCloseable {
     private double minWavenumberCm1 = Double.NaN;
     private double lastWavenumberCm1 = Double.NEGATIVE_INFINITY;
     private boolean closed;
+    /** Bytes of the file already handed to the background flush. */
+    private long flushRequestedBytes;
+    /** The background flush in progress, if any. */
+    private java.util.concurrent.Future<?> pendingFlush;
+    /** A failure of a background flush, reported by {@link #finish}. */
+    private volatile IOException flushFailure;
+
+    /**
+     * Written data is flushed to disk in the background every this many bytes, so the disk works while lines are
+     * still being parsed and the final fsync has only the tail left (the kernel would otherwise keep gigabytes of
+     * dirty pages until then).
+     */
+    private static final long FLUSH_STEP_BYTES = 64L << 20;
+    /** One daemon thread for the background flushes of every file. */
+    private static final java.util.concurrent.ExecutorService FLUSHER =
+            java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
+                Thread t = new Thread(r, "linewright-store-flush");
+                t.setDaemon(true);
+                return t;
+            });
 
     /**
      * @param columns the columns the file holds, in schema (declaration) order; the batch's other columns are not
@@ -136,8 +156,42 @@ final class ArrowLineFileWriter implements AutoCloseable {
         completion.put(StoreColumns.KEY_ISOTOPOLOGUES, isotopologueList());
         completion.putAll(extra);
         writer.end();
+        awaitFlush();
+        if (flushFailure != null) {
+            throw flushFailure;
+        }
         channel.force(true);
         close();
+    }
+
+    private void requestFlushIfDue() throws IOException {
+        long written = channel.position();
+        if (written - flushRequestedBytes >= FLUSH_STEP_BYTES && (pendingFlush == null || pendingFlush.isDone())) {
+            flushRequestedBytes = written;
+            pendingFlush = FLUSHER.submit(() -> {
+                try {
+                    channel.force(false);
+                } catch (java.nio.channels.ClosedChannelException closedMeanwhile) {
+                    // the file was discarded; nothing to flush
+                } catch (IOException e) {
+                    flushFailure = e;
+                }
+            });
+        }
+    }
+
+    private void awaitFlush() throws IOException {
+        if (pendingFlush == null) {
+            return;
+        }
+        try {
+            pendingFlush.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new java.io.InterruptedIOException("interrupted while flushing " + path);
+        } catch (java.util.concurrent.ExecutionException e) {
+            throw new IOException("flushing " + path + " failed", e.getCause());
+        }
     }
 
     private String isotopologueList() {
