@@ -1,15 +1,11 @@
 package org.linewright.ingest.registry;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
@@ -18,6 +14,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.source.LineFormatException;
+import org.linewright.ingest.text.TabularDataFile;
 
 /**
  * The molecules and isotopologues linewright knows: numbers, formulas, masses, natural abundances, Q(296 K)
@@ -103,28 +100,12 @@ public final class MoleculeRegistry implements IsotopologueLookup {
     private MoleculeRegistry merged(InputStream in, String fileName) throws IOException {
         TreeMap<Integer, Molecule> mols = new TreeMap<>(molecules);
         TreeMap<Long, Isotopologue> isos = new TreeMap<>(isotopologues);
-        BufferedReader reader = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8));
-        String line;
-        long lineNumber = 0;
-        boolean headerSeen = false;
-        while ((line = reader.readLine()) != null) {
-            lineNumber++;
-            if (line.isBlank() || line.startsWith("#")) {
-                if (line.startsWith("#source") && headerSeen && line.split("\t", -1).length != COLUMNS.size() + 1) {
-                    throw new LineFormatException(fileName, lineNumber, 0, 0, "#source", line,
-                            "one source per column: " + COLUMNS.size() + " tab-separated entries after #source");
-                }
-                continue;
+        TabularDataFile.read(in, fileName, COLUMNS, (lineNumber, line, afterHeader) -> {
+            if (line.startsWith("#source") && afterHeader && line.split("\t", -1).length != COLUMNS.size() + 1) {
+                throw new LineFormatException(fileName, lineNumber, 0, 0, "#source", line,
+                        "one source per column: " + COLUMNS.size() + " tab-separated entries after #source");
             }
-            String[] cells = line.split("\t", -1);
-            if (!headerSeen) {
-                if (!Arrays.asList(cells).equals(COLUMNS)) {
-                    throw new LineFormatException(fileName, lineNumber, 1, line.length(), "header", line,
-                            "the tab-separated header " + String.join(" ", COLUMNS));
-                }
-                headerSeen = true;
-                continue;
-            }
+        }, (lineNumber, line, cells) -> {
             Row row = new Row(fileName, lineNumber, line, cells);
             int moleculeId = row.integer(0);
             String formula = row.text(1);
@@ -159,10 +140,7 @@ public final class MoleculeRegistry implements IsotopologueLookup {
                     aliases, mass, row.fraction(7), row.positive(8), tags, row.isEmpty(11) ? "" : row.text(11));
             mols.put(moleculeId, new Molecule(moleculeId, formula, name));
             isos.put(key(moleculeId, number), iso);
-        }
-        if (!headerSeen) {
-            throw LineFormatException.ofFile(fileName, "no header line (expected " + String.join(" ", COLUMNS) + ")", null);
-        }
+        });
         return new MoleculeRegistry(mols, isos, partitionSums);
     }
 

@@ -1,19 +1,16 @@
 package org.linewright.reference.data;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 
 import org.linewright.ingest.source.LineFormatException;
+import org.linewright.ingest.text.TabularDataFile;
 import org.linewright.ingest.units.PhysicalConstants;
 
 /**
@@ -59,30 +56,9 @@ public final class ReferenceLines {
 
     /** Parses a reference-line file from a stream; {@code fileName} is used in error messages. */
     public static List<ReferenceLine> parse(InputStream in, String fileName) throws IOException {
-        BufferedReader reader = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8));
         List<ReferenceLine> lines = new ArrayList<>();
-        String line;
-        long lineNumber = 0;
-        boolean headerSeen = false;
-        while ((line = reader.readLine()) != null) {
-            lineNumber++;
-            if (line.isBlank() || line.startsWith("#")) {
-                continue;
-            }
-            String[] cells = line.split("\t", -1);
-            if (!headerSeen) {
-                if (!Arrays.asList(cells).equals(COLUMNS)) {
-                    throw new LineFormatException(fileName, lineNumber, 1, line.length(), "header", line,
-                            "the tab-separated header " + String.join(" ", COLUMNS));
-                }
-                headerSeen = true;
-                continue;
-            }
-            lines.add(row(fileName, lineNumber, line, cells));
-        }
-        if (!headerSeen) {
-            throw LineFormatException.ofFile(fileName, "no header line (expected " + String.join(" ", COLUMNS) + ")", null);
-        }
+        TabularDataFile.read(in, fileName, COLUMNS, (lineNumber, line, afterHeader) -> { },
+                (lineNumber, line, cells) -> lines.add(row(fileName, lineNumber, line, cells)));
         return List.copyOf(lines);
     }
 
