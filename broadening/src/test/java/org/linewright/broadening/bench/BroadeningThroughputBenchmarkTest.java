@@ -11,7 +11,7 @@ import org.linewright.broadening.intensity.LineIntensity;
 import org.linewright.broadening.isotopologue.IsotopologueCache;
 import org.linewright.broadening.sources.ResolvedWidths;
 import org.linewright.broadening.sources.WidthResolver;
-import org.linewright.broadening.testsupport.SampleIsotopologues;
+import org.linewright.ingest.testsupport.SampleIsotopologues;
 import org.linewright.broadening.width.DopplerWidth;
 import org.linewright.broadening.width.PressureBroadening;
 import org.linewright.ingest.line.LineBatch;
@@ -44,7 +44,7 @@ class BroadeningThroughputBenchmarkTest {
             b.airWidthCm1PerAtm[i] = 0.06;
             b.airWidthExponent[i] = 0.7;
         }
-        IsotopologueCache isotopologues = new IsotopologueCache(new SampleIsotopologues(), 1000.0);
+        IsotopologueCache isotopologues = new IsotopologueCache(SampleIsotopologues.withLinearRotorQ(), 1000.0);
         WidthResolver resolver = WidthResolver.builder(Composition.parse("H2=0.85,He=0.15")).build();
         ResolvedWidths w = resolver.newResult(BATCH);
         double[] out = new double[BATCH];

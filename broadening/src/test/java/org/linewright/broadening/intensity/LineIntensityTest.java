@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
-import org.linewright.broadening.testsupport.SampleIsotopologues;
+import org.linewright.ingest.testsupport.SampleIsotopologues;
 import org.linewright.ingest.line.LineBatch;
 
 /**
@@ -50,7 +50,7 @@ class LineIntensityTest {
 
     @Test
     void batchUsesIntensityOrEinsteinAAndPartitionSums() {
-        SampleIsotopologues lookup = new SampleIsotopologues();
+        SampleIsotopologues lookup = SampleIsotopologues.withLinearRotorQ();
         LineBatch b = new LineBatch(3);
         b.size = 3;
         for (int i = 0; i < 3; i++) {

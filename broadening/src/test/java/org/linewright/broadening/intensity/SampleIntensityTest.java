@@ -7,7 +7,7 @@ import java.io.IOException;
 
 import org.junit.jupiter.api.Test;
 import org.linewright.broadening.testsupport.HitranSamples;
-import org.linewright.broadening.testsupport.SampleIsotopologues;
+import org.linewright.ingest.testsupport.SampleIsotopologues;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.registry.MoleculeRegistry;
 
@@ -27,7 +27,7 @@ class SampleIntensityTest {
     @Test
     void coIntensityAt1000KFromS296AgreesWithEinsteinA() throws IOException {
         LineBatch b = HitranSamples.records("CO");
-        SampleIsotopologues lookup = new SampleIsotopologues();
+        SampleIsotopologues lookup = SampleIsotopologues.withLinearRotorQ();
         double[] fromS = new double[b.size];
         LineIntensity.atTemperature(b, 1000.0, lookup, fromS);
         // the same lines without S(296 K): the Einstein-A path

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
-import org.linewright.broadening.testsupport.SampleIsotopologues;
+import org.linewright.ingest.testsupport.SampleIsotopologues;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.source.IsotopologueLookup;
 
@@ -13,7 +13,7 @@ class IsotopologueCacheTest {
 
     /** Counts the registry calls of a test lookup. */
     private static final class Counting implements IsotopologueLookup {
-        final SampleIsotopologues inner = new SampleIsotopologues();
+        final SampleIsotopologues inner = SampleIsotopologues.withLinearRotorQ();
         int calls;
 
         @Override public Id byIsotopeFormula(String f) { return null; }
@@ -43,12 +43,12 @@ class IsotopologueCacheTest {
 
     @Test
     void unknownIsotopologuesAndLargeNumbers() {
-        IsotopologueCache cache = new IsotopologueCache(new SampleIsotopologues(), 300.0);
+        IsotopologueCache cache = new IsotopologueCache(SampleIsotopologues.withLinearRotorQ(), 300.0);
         assertTrue(Double.isNaN(cache.massGPerMol(120, 3)), "grows to molecule 120, unknown there");
         assertTrue(Double.isNaN(cache.partitionSum(5, 70)), "isotopologue beyond the slots: direct lookup");
         InputException e = assertThrows(InputException.class, () -> cache.requirePartitionSums(9, 1, 42));
         assertTrue(e.getMessage().contains("molecule 9 isotopologue 1") && e.getMessage().contains("line 42"),
                 e.getMessage());
-        assertThrows(IllegalArgumentException.class, () -> new IsotopologueCache(new SampleIsotopologues(), 0));
+        assertThrows(IllegalArgumentException.class, () -> new IsotopologueCache(SampleIsotopologues.withLinearRotorQ(), 0));
     }
 }

@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import org.junit.jupiter.api.Test;
-import org.linewright.broadening.testsupport.SampleIsotopologues;
+import org.linewright.ingest.testsupport.SampleIsotopologues;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.registry.MoleculeRegistry;
@@ -48,7 +48,7 @@ class DopplerWidthTest {
 
     @Test
     void batchUsesEachIsotopologuesMass() {
-        SampleIsotopologues lookup = new SampleIsotopologues();
+        SampleIsotopologues lookup = SampleIsotopologues.withLinearRotorQ();
         LineBatch b = new LineBatch(3);
         b.size = 3;
         int[] iso = {1, 2, 1};
