@@ -401,11 +401,19 @@ public final class CrossSectionCalculator {
             done = null;
         }
 
+        /** Does the physics on the calling thread unless a worker has started it (then a no-op). */
+        void runHere() {
+            if (done instanceof FutureTask<?> task && !task.isDone()) {
+                task.run();
+            }
+        }
+
         /** Waits for the physics (uninterruptible: a batch's work is short and its buffers must not be reused early). */
         void await() {
             if (done == null) {
                 return;
             }
+            runHere();
             boolean interrupted = false;
             try {
                 while (true) {
@@ -464,6 +472,7 @@ public final class CrossSectionCalculator {
                     }
                 }
                 Batch b = ahead.poll();
+                helpUntilDone(b, all);
                 b.await();
                 current = b;
                 pos = 0;
@@ -473,6 +482,23 @@ public final class CrossSectionCalculator {
                 }
             }
             return true;
+        }
+
+        /**
+         * While {@code b} is still with a worker, does the batches no worker has started yet, earliest first, on
+         * this thread: the calling thread waits (parks) only when every batch in flight is being worked on, which
+         * keeps hand-overs few on a busy machine.
+         */
+        private void helpUntilDone(Batch b, Feed[] all) {
+            b.runHere();
+            for (Feed f : all) {
+                for (Batch other : f.ahead) {
+                    if (b.done == null || b.done.isDone()) {
+                        return;
+                    }
+                    other.runHere();
+                }
+            }
         }
 
         /** Stored wavenumber of the line at {@link #pos} (after {@link #ensure} returned true). */
