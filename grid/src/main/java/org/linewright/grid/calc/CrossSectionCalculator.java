@@ -15,12 +15,12 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.StringJoiner;
 import java.util.concurrent.ConcurrentLinkedQueue;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.Future;
-import java.util.concurrent.FutureTask;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.Executor;
 import java.util.concurrent.LinkedBlockingQueue;
 import java.util.concurrent.ThreadPoolExecutor;
 import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.linewright.broadening.background.BackgroundGas;
 import org.linewright.broadening.background.Composition;
@@ -343,7 +343,7 @@ public final class CrossSectionCalculator {
 
     /**
      * One batch of one store: the lines as read, their physics, and the lines that reach σ. Filled by a worker
-     * (or the calling thread), read by the calling thread once {@link #done} has completed.
+     * (or the calling thread), read by the calling thread once the physics is finished ({@link #await}).
      */
     private static final class Batch {
         final LineBatch lines;
@@ -371,8 +371,15 @@ public final class CrossSectionCalculator {
         double worstSpacingCm1;
         /** The read or physics failure of this batch, thrown when its turn comes. */
         Throwable failure;
-        /** Completion of the physics (null when it ran on the calling thread). */
-        Future<?> done;
+        /**
+         * This use's claim on the physics: whoever sets it first — a worker, or the calling thread while it waits —
+         * does the work (or skips it when the computation is abandoned). Null when nothing is pending. A task left in
+         * the workers' queue holds the claim of its own use, so it can never touch a later use of the buffers.
+         */
+        private AtomicBoolean claim;
+        /** Counted down when the claimed work is finished (or skipped). */
+        private CountDownLatch finished;
+        private Run owner;
 
         Batch(int capacity) {
             lines = new LineBatch(capacity);
@@ -398,40 +405,67 @@ public final class CrossSectionCalculator {
             worstDopplerCm1 = Double.NaN;
             worstSpacingCm1 = Double.NaN;
             failure = null;
-            done = null;
+            claim = null;
+            finished = null;
+            owner = null;
         }
 
-        /** Does the physics on the calling thread unless a worker has started it (then a no-op). */
+        /** Hands the physics to the workers (the calling thread may still do it first, see {@link #runHere}). */
+        void submit(Executor workers, Run run) {
+            AtomicBoolean c = new AtomicBoolean();
+            CountDownLatch f = new CountDownLatch(1);
+            claim = c;
+            finished = f;
+            owner = run;
+            workers.execute(() -> work(c, f, run));
+        }
+
+        private void work(AtomicBoolean c, CountDownLatch f, Run run) {
+            if (c.compareAndSet(false, true)) {
+                try {
+                    run.prepareOrRecord(this);
+                } finally {
+                    f.countDown();
+                }
+            }
+        }
+
+        /** Does the physics on the calling thread unless it has been claimed already (then a no-op). */
         void runHere() {
-            if (done instanceof FutureTask<?> task && !task.isDone()) {
-                task.run();
+            if (claim != null) {
+                work(claim, finished, owner);
+            }
+        }
+
+        /** Whether the physics is finished (or was never handed to the workers). */
+        boolean isDone() {
+            return finished == null || finished.getCount() == 0;
+        }
+
+        /** Gives up the physics unless it has been claimed already: the computation no longer needs it. */
+        void skip() {
+            if (claim != null && claim.compareAndSet(false, true)) {
+                finished.countDown();
             }
         }
 
         /** Waits for the physics (uninterruptible: a batch's work is short and its buffers must not be reused early). */
         void await() {
-            if (done == null) {
+            if (finished == null) {
                 return;
             }
             runHere();
             boolean interrupted = false;
-            try {
-                while (true) {
-                    try {
-                        done.get();
-                        return;
-                    } catch (InterruptedException e) {
-                        interrupted = true;
-                    } catch (ExecutionException e) {
-                        // the task records its own failures; anything else is recorded here
-                        failure = e.getCause();
-                        return;
-                    }
+            while (true) {
+                try {
+                    finished.await();
+                    break;
+                } catch (InterruptedException e) {
+                    interrupted = true;
                 }
-            } finally {
-                if (interrupted) {
-                    Thread.currentThread().interrupt();
-                }
+            }
+            if (interrupted) {
+                Thread.currentThread().interrupt();
             }
         }
     }
@@ -493,7 +527,7 @@ public final class CrossSectionCalculator {
             b.runHere();
             for (Feed f : all) {
                 for (Batch other : f.ahead) {
-                    if (b.done == null || b.done.isDone()) {
+                    if (b.isDone()) {
                         return;
                     }
                     other.runHere();
@@ -532,16 +566,19 @@ public final class CrossSectionCalculator {
                 if (workers == null) {
                     run.prepareOrRecord(b);
                 } else {
-                    Batch batch = b;
-                    FutureTask<Void> task = new FutureTask<>(() -> run.prepareOrRecord(batch), null);
-                    b.done = task;
-                    workers.execute(task);
+                    b.submit(workers, run);
                 }
             }
         }
 
-        /** Waits for the batches still with workers and returns every buffer to the pool. */
+        /**
+         * Skips the batches no worker has started (after a failure), waits for those being worked on and returns
+         * every buffer to the pool.
+         */
         void release() {
+            for (Batch b : ahead) {
+                b.skip();
+            }
             for (Batch b : ahead) {
                 b.await();
                 freeBatches.add(b);
@@ -647,16 +684,18 @@ public final class CrossSectionCalculator {
         /** {@link #prepare} with a thread's tools; a failure is kept with the batch. */
         void prepareOrRecord(Batch b) {
             Physics p = idle.poll();
-            if (p == null) {
-                p = new Physics(lookup, request, chunkLines);
-                made.add(p);
-            }
             try {
+                if (p == null) {
+                    p = new Physics(lookup, request, chunkLines);
+                    made.add(p);
+                }
                 prepare(b, p);
             } catch (RuntimeException | Error e) {
                 b.failure = e;
             } finally {
-                idle.add(p);
+                if (p != null) {
+                    idle.add(p);
+                }
             }
         }
 

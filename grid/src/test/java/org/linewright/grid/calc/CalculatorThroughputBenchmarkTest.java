@@ -48,6 +48,11 @@ class CalculatorThroughputBenchmarkTest {
     /** Wavenumber blocks of the table-like pass (the table builder's 20,000-point blocks are 10 cm⁻¹ here). */
     private static final int BLOCKS = 50;
 
+    private static final com.sun.management.OperatingSystemMXBean PROCESS =
+            (com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+    private static final java.lang.management.ThreadMXBean THREADS =
+            java.lang.management.ManagementFactory.getThreadMXBean();
+
     @TempDir
     Path tmp;
 
@@ -69,12 +74,18 @@ class CalculatorThroughputBenchmarkTest {
         }
         for (int threads : new int[] {1, 2, 1, 2}) {
             double[] seconds = new double[RUNS];
+            double[] processCpu = new double[RUNS];
+            double[] callerCpu = new double[RUNS];
             for (int run = 0; run < seconds.length; run++) {
                 CopyingEngine engine = new CopyingEngine();
+                long c0 = PROCESS.getProcessCpuTime();
+                long k0 = THREADS.getCurrentThreadCpuTime();
                 long t0 = System.nanoTime();
                 CrossSectionResult r = calculator(store, registry, threads).compute(request, engine,
                         ProgressListener.NONE);
                 seconds[run] = (System.nanoTime() - t0) * 1e-9;
+                callerCpu[run] = (THREADS.getCurrentThreadCpuTime() - k0) * 1e-9;
+                processCpu[run] = (PROCESS.getProcessCpuTime() - c0) * 1e-9;
                 assertEquals(lines, r.linesUsed());
                 assertEquals(lines, engine.lines);
             }
@@ -84,6 +95,12 @@ class CalculatorThroughputBenchmarkTest {
                             + "(%.2f M lines/s best); load average %.2f%n", threads, Arrays.toString(round(seconds)),
                     sorted[0], sorted[sorted.length / 2], lines / sorted[0] / 1e6,
                     java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
+            // CPU seconds do not depend on the load as wall time does: the whole process (workers, GC and JIT
+            // included) and the calling thread (reading, merging, reducing), medians
+            Arrays.sort(processCpu);
+            Arrays.sort(callerCpu);
+            System.out.printf(Locale.ROOT, "    cpu: process %.3f s, calling thread %.3f s (medians)%n",
+                    processCpu[RUNS / 2], callerCpu[RUNS / 2]);
         }
         // as the table builder calls it: one computation per wavenumber block, lines within the block's reach
         double span = lines * SPACING_CM1 / BLOCKS;
