@@ -14,6 +14,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.wings.HwhmMultipleCutoff;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.LineChunk;
@@ -72,36 +73,12 @@ class CalculatorThroughputBenchmarkTest {
                     readOnly(store, LineQuery.CROSS_SECTION_COLUMNS),
                     readOnly(store, CrossSectionCalculator.PHYSICS_COLUMNS));
         }
-        for (int threads : new int[] {1, 2, 1, 2}) {
-            double[] seconds = new double[RUNS];
-            double[] processCpu = new double[RUNS];
-            double[] callerCpu = new double[RUNS];
-            for (int run = 0; run < seconds.length; run++) {
-                CopyingEngine engine = new CopyingEngine();
-                long c0 = PROCESS.getProcessCpuTime();
-                long k0 = THREADS.getCurrentThreadCpuTime();
-                long t0 = System.nanoTime();
-                CrossSectionResult r = calculator(store, registry, threads).compute(request, engine,
-                        ProgressListener.NONE);
-                seconds[run] = (System.nanoTime() - t0) * 1e-9;
-                callerCpu[run] = (THREADS.getCurrentThreadCpuTime() - k0) * 1e-9;
-                processCpu[run] = (PROCESS.getProcessCpuTime() - c0) * 1e-9;
-                assertEquals(lines, r.linesUsed());
-                assertEquals(lines, engine.lines);
-            }
-            double[] sorted = seconds.clone();
-            Arrays.sort(sorted);
-            System.out.printf(Locale.ROOT, "  calculator, %d thread(s): runs %s s; best %.3f s, median %.3f s "
-                            + "(%.2f M lines/s best); load average %.2f%n", threads, Arrays.toString(round(seconds)),
-                    sorted[0], sorted[sorted.length / 2], lines / sorted[0] / 1e6,
-                    java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
-            // CPU seconds do not depend on the load as wall time does: the whole process (workers, GC and JIT
-            // included) and the calling thread (reading, merging, reducing), medians
-            Arrays.sort(processCpu);
-            Arrays.sort(callerCpu);
-            System.out.printf(Locale.ROOT, "    cpu: process %.3f s, calling thread %.3f s (medians)%n",
-                    processCpu[RUNS / 2], callerCpu[RUNS / 2]);
-        }
+        wholeGrid(store, registry, request, lines, "fixed 25 cm-1 cutoff");
+        // a cutoff of 20 half widths (at most 25 cm-1): the wing loss of each line is a numerical integral
+        CrossSectionRequest hwhm = new CrossSectionRequest(296.0, 1.0, Composition.parse("air=1"), grid,
+                WingTreatment.defaults().withCutoff(new HwhmMultipleCutoff(20, 25.0)), LineShapeKind.VOIGT, 0.0,
+                LineSelection.ALL, WidthOptions.DEFAULTS);
+        wholeGrid(store, registry, hwhm, lines, "cutoff 20 HWHM");
         // as the table builder calls it: one computation per wavenumber block, lines within the block's reach
         double span = lines * SPACING_CM1 / BLOCKS;
         for (int threads : new int[] {1, 2, 1, 2}) {
@@ -125,6 +102,41 @@ class CalculatorThroughputBenchmarkTest {
             System.out.printf(Locale.ROOT, "  %d blocks of %.0f cm-1 (lines within 26 cm-1), %d thread(s): runs %s s; "
                             + "load average %.2f%n", BLOCKS, span, threads, Arrays.toString(round(seconds)),
                     java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
+        }
+    }
+
+    /** Times the whole grid in {@link #RUNS} runs per thread count, 1, 2, 1, 2 threads. */
+    private static void wholeGrid(LineStore store, MoleculeRegistry registry, CrossSectionRequest request, long lines,
+                                  String what) {
+        for (int threads : new int[] {1, 2, 1, 2}) {
+            double[] seconds = new double[RUNS];
+            double[] processCpu = new double[RUNS];
+            double[] callerCpu = new double[RUNS];
+            for (int run = 0; run < seconds.length; run++) {
+                CopyingEngine engine = new CopyingEngine();
+                long c0 = PROCESS.getProcessCpuTime();
+                long k0 = THREADS.getCurrentThreadCpuTime();
+                long t0 = System.nanoTime();
+                CrossSectionResult r = calculator(store, registry, threads).compute(request, engine,
+                        ProgressListener.NONE);
+                seconds[run] = (System.nanoTime() - t0) * 1e-9;
+                callerCpu[run] = (THREADS.getCurrentThreadCpuTime() - k0) * 1e-9;
+                processCpu[run] = (PROCESS.getProcessCpuTime() - c0) * 1e-9;
+                assertEquals(lines, r.linesUsed());
+                assertEquals(lines, engine.lines);
+            }
+            double[] sorted = seconds.clone();
+            Arrays.sort(sorted);
+            System.out.printf(Locale.ROOT, "  calculator, %s, %d thread(s): runs %s s; best %.3f s, median %.3f s "
+                            + "(%.2f M lines/s best); load average %.2f%n", what, threads, Arrays.toString(round(seconds)),
+                    sorted[0], sorted[sorted.length / 2], lines / sorted[0] / 1e6,
+                    java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
+            // CPU seconds do not depend on the load as wall time does: the whole process (workers, GC and JIT
+            // included) and the calling thread (reading, merging, reducing), medians
+            Arrays.sort(processCpu);
+            Arrays.sort(callerCpu);
+            System.out.printf(Locale.ROOT, "    cpu: process %.3f s, calling thread %.3f s (medians)%n",
+                    processCpu[RUNS / 2], callerCpu[RUNS / 2]);
         }
     }
 
