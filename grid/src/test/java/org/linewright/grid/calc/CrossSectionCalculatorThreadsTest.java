@@ -68,13 +68,20 @@ class CrossSectionCalculatorThreadsTest {
 
     @BeforeAll
     static void stores() throws IOException {
-        coSample = ReferenceSamples.hitranSample("sample_CO.par");
-        co2Sample = ReferenceSamples.hitranSample("sample_CO2.par");
-        n2oSample = ReferenceSamples.hitranSample("sample_N2O.par");
-        samples = List.of(LineStore.open(ReferenceSamples.ingest(tmp.resolve("co"), coSample)),
-                LineStore.open(ReferenceSamples.ingest(tmp.resolve("co2"), co2Sample)),
-                LineStore.open(ReferenceSamples.ingest(tmp.resolve("n2o"), n2oSample)));
         synthetic = writeSynthetic(tmp.resolve("synthetic"));
+    }
+
+    /** The three sample stores, ingested at first use (the test is skipped, visibly, without the reference data). */
+    private static synchronized List<LineStore> samples() throws IOException {
+        if (samples == null) {
+            coSample = ReferenceSamples.hitranSample("sample_CO.par");
+            co2Sample = ReferenceSamples.hitranSample("sample_CO2.par");
+            n2oSample = ReferenceSamples.hitranSample("sample_N2O.par");
+            samples = List.of(LineStore.open(ReferenceSamples.ingest(tmp.resolve("co"), coSample)),
+                    LineStore.open(ReferenceSamples.ingest(tmp.resolve("co2"), co2Sample)),
+                    LineStore.open(ReferenceSamples.ingest(tmp.resolve("n2o"), n2oSample)));
+        }
+        return samples;
     }
 
     /** {molecule, isotopologue, ν, S(296 K)} of every record, from the fixed columns of the 160-character format. */
@@ -177,7 +184,8 @@ class CrossSectionCalculatorThreadsTest {
         double high = 2400.0;
         CrossSectionRequest request = new CrossSectionRequest(500.0, 0.3, Composition.parse("air=0.7,co2=0.2,h2o=0.1"),
                 grid, wings, LineShapeKind.VOIGT, threshold, LineSelection.ALL, WidthOptions.DEFAULTS);
-        Run one = run(new CrossSectionCalculator(samples, REGISTRY, 1, SMALL_CHUNK), request,
+        List<LineStore> stores = samples();
+        Run one = run(new CrossSectionCalculator(stores, REGISTRY, 1, SMALL_CHUNK), request,
                 low, high);
         // lines read = records with low ≤ ν < high of the three files (the reach of the grid covers them all)
         long inRange = 0;
@@ -190,7 +198,7 @@ class CrossSectionCalculatorThreadsTest {
         assertTrue(one.chunks.size() > 10, "chunks: " + one.chunks.size());
         assertTrue(one.result.warnings().stream().anyMatch(w -> w.contains("h2o")), one.result.warnings().toString());
         for (int threads = 2; threads <= 3; threads++) {
-            CrossSectionCalculator calc = new CrossSectionCalculator(samples, REGISTRY, threads,
+            CrossSectionCalculator calc = new CrossSectionCalculator(stores, REGISTRY, threads,
                     SMALL_CHUNK);
             assertSame(one, run(calc, request, low, high), threads + " threads");
             // a second computation reuses the calculator's batch buffers
@@ -257,6 +265,7 @@ class CrossSectionCalculatorThreadsTest {
                         : REGISTRY.partitionSum(moleculeId, isotopologue, temperatureK);
             }
         };
+        List<LineStore> stores = samples();
         double[][] co2 = records(co2Sample);
         int first = -1;
         for (int i = 0; i < co2.length; i++) {
@@ -275,7 +284,7 @@ class CrossSectionCalculatorThreadsTest {
         CrossSectionRequest request = new CrossSectionRequest(1000.0, 1.0, Composition.air(), grid,
                 WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0, LineSelection.ALL, WidthOptions.DEFAULTS);
         for (int threads = 1; threads <= 3; threads++) {
-            CrossSectionCalculator calc = new CrossSectionCalculator(samples, withoutCo2Iso2, threads, SMALL_CHUNK);
+            CrossSectionCalculator calc = new CrossSectionCalculator(stores, withoutCo2Iso2, threads, SMALL_CHUNK);
             InputException e = assertThrows(InputException.class,
                     () -> run(calc, request, low, Double.POSITIVE_INFINITY));
             assertTrue(e.getMessage().contains(expected), threads + " threads: " + e.getMessage());
