@@ -2,20 +2,28 @@ package org.linewright.grid.calc;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
 import java.util.EnumSet;
-import java.util.Set;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Set;
 import java.util.StringJoiner;
+import java.util.concurrent.ConcurrentLinkedQueue;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.Executor;
+import java.util.concurrent.LinkedBlockingQueue;
+import java.util.concurrent.ThreadPoolExecutor;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicInteger;
 import org.linewright.broadening.background.BackgroundGas;
 import org.linewright.broadening.background.Composition;
-import org.linewright.broadening.intensity.IntensityCut;
 import org.linewright.broadening.intensity.LineIntensity;
 import org.linewright.broadening.isotopologue.IsotopologueCache;
 import org.linewright.broadening.sources.ResolvedWidths;
@@ -46,14 +54,15 @@ import org.linewright.ingest.store.LineStore;
  * The one place that turns stored lines into engine input for one (p, T). For a {@link CrossSectionRequest} it
  * reads the lines that can reach the grid — centres within [first point − largest cutoff − shift margin,
  * last point + largest cutoff + shift margin] — from every store, merged in ascending wavenumber order, projected
- * to the numeric columns, a batch of {@value #CHUNK_LINES} lines at a time (bounded memory),
+ * to the columns the physics reads, a batch of {@value #CHUNK_LINES} lines at a time (bounded memory),
  * and per batch computes:
  * <ul>
  *   <li>S(T) with {@link LineIntensity} (partition sums and abundances from an {@link IsotopologueCache});</li>
  *   <li>each background gas's width, exponent and shift with a {@link WidthResolver} (sources tallied), then
  *       γL = p·Σ x_g·γ_g·(296/T)^n_g and δ = p·Σ x_g·δ_g with {@link PressureBroadening};</li>
  *   <li>αD = ν/c·√(2 ln2 kT/m) with {@link DopplerWidth};</li>
- *   <li>the intensity threshold with {@link IntensityCut} (dropped intensity reported);</li>
+ *   <li>the intensity threshold (lines with S(T) below it, or not finite, are dropped and their intensity
+ *       reported);</li>
  *   <li>the χ-factor flag: CO2 lines (molecule 2) when the wing treatment asks for the CO2 χ factor and CO2
  *       (as a foreign gas, or the absorber itself) is in the background.</li>
  * </ul>
@@ -62,9 +71,21 @@ import org.linewright.ingest.store.LineStore;
  * Kept lines fill a reused {@link LineChunk} passed to {@link CrossSectionEngine#accumulate}. Lines reach σ only
  * within their cutoff of the shifted centre (the engines apply the {@link WingKernel}).
  *
- * <p>Concurrent {@code compute} calls are safe when the lookup is (each call opens its own cursors and scratch
- * arrays); an engine serves one computation at a time. Statistics are accumulated with compensated (Neumaier)
- * sums, and the order of lines is fixed by the stores, so results do not depend on timing.
+ * <p><b>Threads.</b> With {@code threads} &gt; 1 the per-batch physics runs on worker threads while the calling
+ * thread reads the stores, merges and feeds the engine: each store is read ahead by up to 2·threads batches (a
+ * fixed number of batches in flight, so memory stays bounded), each batch's physics is one task, and the calling
+ * thread takes the batches back in exactly the order a single thread would prepare them. The statistics are
+ * reduced there, batch after batch and line after line (the same Neumaier sums, counts, width-source tallies and
+ * worst-resolution search as on one thread), and the engine receives the same chunks with the same contents, so
+ * σ and every statistic are bitwise identical for any thread count. A failure — an {@link InputException} from a
+ * width source or the registry, or a read error — is kept with its batch and thrown when that batch's turn comes:
+ * the first failure in line order is the one reported, as on one thread. The workers call the lookup one at a
+ * time (first sight of each isotopologue only), so it need not be thread-safe.
+ *
+ * <p>Concurrent {@code compute} calls are safe when the lookup is (each call opens its own cursors; batch buffers
+ * are taken from a pool the calculator keeps for reuse between calls); an engine serves one computation at a time.
+ * Statistics are accumulated with compensated (Neumaier) sums, and the order of lines is fixed by the stores, so
+ * results do not depend on timing.
  */
 public final class CrossSectionCalculator {
     /** Lines per batch read from a store and per chunk handed to the engine. */
@@ -74,32 +95,93 @@ public final class CrossSectionCalculator {
      * pressure shift are not missed, cm⁻¹/atm. Measured shifts are below 0.1 cm⁻¹/atm (from memory); 1 is safe.
      */
     public static final double SHIFT_MARGIN_CM1_PER_ATM = 1.0;
+    /** Batches read ahead per store and worker thread (the bound on memory in flight). */
+    static final int BATCHES_AHEAD_PER_THREAD = 2;
+    /** Seconds an idle worker thread lives before it ends (no thread outlives a quiet calculator for long). */
+    private static final long WORKER_KEEP_ALIVE_SECONDS = 30;
     /**
-     * The columns read: every numeric column (S(296 K) or A and g' for S(T), E'', the widths, exponents and
-     * shifts of every broadener, the J and K numbers the broadening rules use, the source line for messages).
+     * Every column the physics may read: S(296 K) or A and g' for S(T), E'', the widths, exponents and shifts of
+     * every broadener, the J and K numbers the broadening rules and tables use, the source line for messages.
+     * A request reads only those of its background's gases ({@link #columnsFor}).
      */
-    static final Set<LineColumn> PHYSICS_COLUMNS = numericColumns();
+    static final Set<LineColumn> PHYSICS_COLUMNS = physicsColumns();
     /** HITRAN molecule number of CO2 (common practice), whose lines the CO2 χ factor applies to. */
     static final int CO2_MOLECULE_ID = 2;
 
+    /** Line fates in a prepared batch. */
+    private static final byte BELOW_THRESHOLD = 0;
+    private static final byte WITHOUT_WIDTH = 1;
+    private static final byte USED = 2;
+
     private final List<LineStore> stores;
     private final IsotopologueLookup lookup;
+    private final int threads;
+    private final int chunkLines;
+    /** Worker threads (none for one thread); idle threads end after {@value #WORKER_KEEP_ALIVE_SECONDS} s. */
+    private final ThreadPoolExecutor workers;
+    /** Batch buffers of earlier computations, reused instead of allocated per call. */
+    private final ConcurrentLinkedQueue<Batch> freeBatches = new ConcurrentLinkedQueue<>();
 
     /**
+     * A calculator that prepares the lines on the calling thread.
+     *
      * @param stores line stores read together (their lines merged in wavenumber order; store order breaks ties)
      * @param lookup the registry with masses, abundances and partition sums (user tables included)
      */
     public CrossSectionCalculator(List<LineStore> stores, IsotopologueLookup lookup) {
+        this(stores, lookup, 1);
+    }
+
+    /**
+     * A calculator that prepares the lines (S(T), widths, shifts, threshold) on {@code threads} worker threads —
+     * usually the engine's thread count. The results do not depend on {@code threads}, bit for bit.
+     *
+     * @param stores  line stores read together (their lines merged in wavenumber order; store order breaks ties)
+     * @param lookup  the registry with masses, abundances and partition sums (user tables included)
+     * @param threads worker threads, at least 1 (1: everything on the calling thread)
+     */
+    public CrossSectionCalculator(List<LineStore> stores, IsotopologueLookup lookup, int threads) {
+        this(stores, lookup, threads, CHUNK_LINES);
+    }
+
+    /** With another batch size (tests use small batches to get many of them from small samples). */
+    CrossSectionCalculator(List<LineStore> stores, IsotopologueLookup lookup, int threads, int chunkLines) {
         this.stores = List.copyOf(stores);
-        this.lookup = Objects.requireNonNull(lookup, "lookup");
+        Objects.requireNonNull(lookup, "lookup");
         if (this.stores.isEmpty()) {
             throw new InputException("no line store given (expected at least one store directory)");
+        }
+        if (threads < 1) {
+            throw new IllegalArgumentException("threads must be at least 1: " + threads);
+        }
+        if (chunkLines < 1) {
+            throw new IllegalArgumentException("chunk size must be positive: " + chunkLines);
+        }
+        this.threads = threads;
+        this.chunkLines = chunkLines;
+        this.lookup = threads == 1 ? lookup : new SerializedLookup(lookup);
+        if (threads == 1) {
+            this.workers = null;
+        } else {
+            AtomicInteger count = new AtomicInteger();
+            this.workers = new ThreadPoolExecutor(threads, threads, WORKER_KEEP_ALIVE_SECONDS, TimeUnit.SECONDS,
+                    new LinkedBlockingQueue<>(), r -> {
+                        Thread t = new Thread(r, "linewright-calc-" + count.incrementAndGet());
+                        t.setDaemon(true);
+                        return t;
+                    });
+            workers.allowCoreThreadTimeOut(true);
         }
     }
 
     /** The stores read. */
     public List<LineStore> stores() {
         return stores;
+    }
+
+    /** Threads that prepare the lines. */
+    public int threads() {
+        return threads;
     }
 
     /**
@@ -130,23 +212,26 @@ public final class CrossSectionCalculator {
         WavenumberGrid grid = request.grid();
         double[] sigma = new double[grid.size()];
         engine.begin(grid, request.pressureAtm(), request.temperatureK());
-        List<StoreLines> open = new ArrayList<>();
+        List<Feed> open = new ArrayList<>();
         try {
             if (run.queryMinCm1 <= run.queryMaxCm1) {
                 LineQuery query = request.selection().applyTo(LineQuery.all()
                         .withWavenumberRange(run.queryMinCm1, run.queryMaxCm1)
-                        .withColumns(PHYSICS_COLUMNS));
+                        .withColumns(run.columns));
                 for (LineStore store : stores) {
-                    open.add(new StoreLines(store.cursor(query)));
+                    open.add(new Feed(run, store.cursor(query)));
                 }
             }
-            merge(run, open.toArray(new StoreLines[0]), engine, sigma, progress);
+            merge(run, open.toArray(new Feed[0]), engine, sigma, progress);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         } finally {
-            for (StoreLines s : open) {
+            for (Feed f : open) {
+                f.release();
+            }
+            for (Feed f : open) {
                 try {
-                    s.cursor.close();
+                    f.cursor.close();
                 } catch (IOException ignored) {
                     // the result (or the exception in flight) is what matters; the files are read-only
                 }
@@ -159,17 +244,16 @@ public final class CrossSectionCalculator {
     }
 
     /** K-way merge of the stores' prepared lines into engine chunks, ascending in stored wavenumber. */
-    private void merge(Run run, StoreLines[] sources, CrossSectionEngine engine, double[] sigma,
+    private void merge(Run run, Feed[] sources, CrossSectionEngine engine, double[] sigma,
                        ProgressListener progress) throws IOException {
-        LineChunk chunk = run.chunk;
-        chunk.size = 0;
+        LineChunk chunk = new LineChunk(chunkLines);
         double lastKey = Double.NaN;
         while (true) {
             int best = -1;
             double bestKey = 0;
             for (int i = 0; i < sources.length; i++) {
                 // strictly smaller: among equal wavenumbers the earlier store wins
-                if (sources[i].ensure(run) && (best < 0 || sources[i].key() < bestKey)) {
+                if (sources[i].ensure(sources) && (best < 0 || sources[i].key() < bestKey)) {
                     best = i;
                     bestKey = sources[i].key();
                 }
@@ -180,23 +264,31 @@ public final class CrossSectionCalculator {
             double nextKey = Double.POSITIVE_INFINITY;
             int nextIndex = Integer.MAX_VALUE;
             for (int i = 0; i < sources.length; i++) {
-                if (i != best && sources[i].ensure(run) && sources[i].key() < nextKey) {
+                if (i != best && sources[i].ensure(sources) && sources[i].key() < nextKey) {
                     nextKey = sources[i].key();
                     nextIndex = i;
                 }
             }
-            StoreLines s = sources[best];
+            Batch s = sources[best].current;
             boolean takeTies = best < nextIndex;
-            while (s.pos < s.count && chunk.size < chunk.capacity()
-                    && (s.keyCm1[s.pos] < nextKey || (takeTies && s.keyCm1[s.pos] == nextKey))) {
-                int r = s.pos++;
-                int c = chunk.size++;
-                chunk.centerCm1[c] = s.centerCm1[r];
-                chunk.intensityCmPerMolecule[c] = s.intensity[r];
-                chunk.dopplerHwhmCm1[c] = s.doppler[r];
-                chunk.lorentzHwhmCm1[c] = s.lorentz[r];
-                chunk.chiFactor[c] = s.chi[r];
-                lastKey = s.keyCm1[r];
+            int from = sources[best].pos;
+            int end = from;
+            int limit = Math.min(s.count, from + chunk.capacity() - chunk.size);
+            while (end < limit && (s.keyCm1[end] < nextKey || (takeTies && s.keyCm1[end] == nextKey))) {
+                end++;
+            }
+            // a run of consecutive lines of one store: bulk copies
+            int n = end - from;
+            int c = chunk.size;
+            System.arraycopy(s.centerCm1, from, chunk.centerCm1, c, n);
+            System.arraycopy(s.usedIntensity, from, chunk.intensityCmPerMolecule, c, n);
+            System.arraycopy(s.usedDoppler, from, chunk.dopplerHwhmCm1, c, n);
+            System.arraycopy(s.usedLorentz, from, chunk.lorentzHwhmCm1, c, n);
+            System.arraycopy(s.usedChi, from, chunk.chiFactor, c, n);
+            chunk.size += n;
+            sources[best].pos = end;
+            if (n > 0) {
+                lastKey = s.keyCm1[end - 1];
             }
             if (chunk.size == chunk.capacity()) {
                 engine.accumulate(chunk, sigma);
@@ -228,45 +320,300 @@ public final class CrossSectionCalculator {
         return Double.POSITIVE_INFINITY;
     }
 
-    /** One store's cursor and its current batch, physics applied and reduced to the lines that reach σ. */
-    private static final class StoreLines {
-        final LineCursor cursor;
-        final double[] keyCm1 = new double[CHUNK_LINES];
-        final double[] centerCm1 = new double[CHUNK_LINES];
-        final double[] intensity = new double[CHUNK_LINES];
-        final double[] doppler = new double[CHUNK_LINES];
-        final double[] lorentz = new double[CHUNK_LINES];
-        final boolean[] chi = new boolean[CHUNK_LINES];
+    /**
+     * The columns a request reads: {@link #PHYSICS_COLUMNS} without the foreign-broadener columns of gases absent
+     * from its background (the width resolver reads a gas's columns only when the gas is present).
+     */
+    static Set<LineColumn> columnsFor(Composition composition) {
+        EnumSet<LineColumn> set = EnumSet.copyOf(PHYSICS_COLUMNS);
+        if (!(composition.fraction(BackgroundGas.H2) > 0)) {
+            set.removeAll(List.of(LineColumn.H2_WIDTH, LineColumn.H2_WIDTH_EXPONENT, LineColumn.H2_SHIFT));
+        }
+        if (!(composition.fraction(BackgroundGas.HE) > 0)) {
+            set.removeAll(List.of(LineColumn.HE_WIDTH, LineColumn.HE_WIDTH_EXPONENT, LineColumn.HE_SHIFT));
+        }
+        if (!(composition.fraction(BackgroundGas.CO2) > 0)) {
+            set.removeAll(List.of(LineColumn.CO2_WIDTH, LineColumn.CO2_WIDTH_EXPONENT, LineColumn.CO2_SHIFT));
+        }
+        if (!(composition.fraction(BackgroundGas.H2O) > 0)) {
+            set.removeAll(List.of(LineColumn.H2O_WIDTH, LineColumn.H2O_WIDTH_EXPONENT, LineColumn.H2O_SHIFT));
+        }
+        return set;
+    }
+
+    /**
+     * One batch of one store: the lines as read, their physics, and the lines that reach σ. Filled by a worker
+     * (or the calling thread), read by the calling thread once the physics is finished ({@link #await}).
+     */
+    private static final class Batch {
+        final LineBatch lines;
+        /** S(T) and fate of each row of {@link #lines} (after the range filter). */
+        final double[] intensity;
+        final byte[] fate;
+        /** S(T)·(fraction of the profile lost to the wing treatment) of each used row. */
+        final double[] lostIntensity;
+        /** The used lines, in order: stored wavenumber (the merge key), shifted centre, S(T), widths, χ flag. */
+        final double[] keyCm1;
+        final double[] centerCm1;
+        final double[] usedIntensity;
+        final double[] usedDoppler;
+        final double[] usedLorentz;
+        final boolean[] usedChi;
+        int rowsRead;
+        int rows;
         int count;
+        long belowThreshold;
+        long withoutWidth;
+        /** This batch's smallest HWHM / spacing (first such line) and that line's widths and spacing. */
+        double worstResolution;
+        double worstHwhmCm1;
+        double worstDopplerCm1;
+        double worstSpacingCm1;
+        /** The read or physics failure of this batch, thrown when its turn comes. */
+        Throwable failure;
+        /**
+         * This use's claim on the physics: whoever sets it first — a worker, or the calling thread while it waits —
+         * does the work (or skips it when the computation is abandoned). Null when nothing is pending. A task left in
+         * the workers' queue holds the claim of its own use, so it can never touch a later use of the buffers.
+         */
+        private AtomicBoolean claim;
+        /** Counted down when the claimed work is finished (or skipped). */
+        private CountDownLatch finished;
+        private Run owner;
+
+        Batch(int capacity) {
+            lines = new LineBatch(capacity);
+            intensity = new double[capacity];
+            fate = new byte[capacity];
+            lostIntensity = new double[capacity];
+            keyCm1 = new double[capacity];
+            centerCm1 = new double[capacity];
+            usedIntensity = new double[capacity];
+            usedDoppler = new double[capacity];
+            usedLorentz = new double[capacity];
+            usedChi = new boolean[capacity];
+        }
+
+        void reset() {
+            rowsRead = 0;
+            rows = 0;
+            count = 0;
+            belowThreshold = 0;
+            withoutWidth = 0;
+            worstResolution = Double.POSITIVE_INFINITY;
+            worstHwhmCm1 = Double.NaN;
+            worstDopplerCm1 = Double.NaN;
+            worstSpacingCm1 = Double.NaN;
+            failure = null;
+            claim = null;
+            finished = null;
+            owner = null;
+        }
+
+        /** Hands the physics to the workers (the calling thread may still do it first, see {@link #runHere}). */
+        void submit(Executor workers, Run run) {
+            AtomicBoolean c = new AtomicBoolean();
+            CountDownLatch f = new CountDownLatch(1);
+            claim = c;
+            finished = f;
+            owner = run;
+            workers.execute(() -> work(c, f, run));
+        }
+
+        private void work(AtomicBoolean c, CountDownLatch f, Run run) {
+            if (c.compareAndSet(false, true)) {
+                try {
+                    run.prepareOrRecord(this);
+                } finally {
+                    f.countDown();
+                }
+            }
+        }
+
+        /** Does the physics on the calling thread unless it has been claimed already (then a no-op). */
+        void runHere() {
+            if (claim != null) {
+                work(claim, finished, owner);
+            }
+        }
+
+        /** Whether the physics is finished (or was never handed to the workers). */
+        boolean isDone() {
+            return finished == null || finished.getCount() == 0;
+        }
+
+        /** Gives up the physics unless it has been claimed already: the computation no longer needs it. */
+        void skip() {
+            if (claim != null && claim.compareAndSet(false, true)) {
+                finished.countDown();
+            }
+        }
+
+        /** Waits for the physics (uninterruptible: a batch's work is short and its buffers must not be reused early). */
+        void await() {
+            if (finished == null) {
+                return;
+            }
+            runHere();
+            boolean interrupted = false;
+            while (true) {
+                try {
+                    finished.await();
+                    break;
+                } catch (InterruptedException e) {
+                    interrupted = true;
+                }
+            }
+            if (interrupted) {
+                Thread.currentThread().interrupt();
+            }
+        }
+    }
+
+    /** One store's cursor, its batches read ahead (in order) and the batch being merged. */
+    private final class Feed {
+        final Run run;
+        final LineCursor cursor;
+        final ArrayDeque<Batch> ahead = new ArrayDeque<>();
+        final int depth;
+        Batch current;
         int pos;
         boolean exhausted;
 
-        StoreLines(LineCursor cursor) {
+        Feed(Run run, LineCursor cursor) {
+            this.run = run;
             this.cursor = cursor;
+            this.depth = threads == 1 ? 1 : BATCHES_AHEAD_PER_THREAD * threads;
         }
 
-        /** True when a line is available at {@link #pos}, reading further batches as needed. */
-        boolean ensure(Run run) throws IOException {
-            while (pos >= count) {
-                if (exhausted) {
-                    return false;
+        /**
+         * True when a line is available at {@link #pos}, taking further batches as needed; tops up the read-ahead
+         * of every feed (the merge may need any store next).
+         */
+        boolean ensure(Feed[] all) throws IOException {
+            while (current == null || pos >= current.count) {
+                if (current != null) {
+                    freeBatches.add(current);
+                    current = null;
                 }
-                if (!cursor.read(run.batch)) {
-                    exhausted = true;
-                    return false;
+                if (ahead.isEmpty()) {
+                    if (exhausted) {
+                        return false;
+                    }
+                    readAhead();
+                    if (ahead.isEmpty()) {
+                        return false;
+                    }
                 }
-                count = run.prepare(this);
+                Batch b = ahead.poll();
+                helpUntilDone(b, all);
+                b.await();
+                current = b;
                 pos = 0;
+                run.reduce(b);
+                for (Feed f : all) {
+                    f.readAhead();
+                }
             }
             return true;
         }
 
+        /**
+         * While {@code b} is still with a worker, does the batches no worker has started yet, earliest first, on
+         * this thread: the calling thread waits (parks) only when every batch in flight is being worked on, which
+         * keeps hand-overs few on a busy machine.
+         */
+        private void helpUntilDone(Batch b, Feed[] all) {
+            b.runHere();
+            for (Feed f : all) {
+                for (Batch other : f.ahead) {
+                    if (b.isDone()) {
+                        return;
+                    }
+                    other.runHere();
+                }
+            }
+        }
+
+        /** Stored wavenumber of the line at {@link #pos} (after {@link #ensure} returned true). */
         double key() {
-            return keyCm1[pos];
+            return current.keyCm1[pos];
+        }
+
+        /** Reads batches until {@link #depth} are ahead or the store is exhausted, handing each to a worker. */
+        void readAhead() {
+            while (!exhausted && ahead.size() < depth) {
+                Batch b = freeBatches.poll();
+                if (b == null) {
+                    b = new Batch(chunkLines);
+                }
+                b.reset();
+                try {
+                    if (!cursor.read(b.lines)) {
+                        exhausted = true;
+                        freeBatches.add(b);
+                        return;
+                    }
+                } catch (IOException | RuntimeException e) {
+                    // thrown when this batch's turn comes, as if read then
+                    exhausted = true;
+                    b.failure = e;
+                    ahead.add(b);
+                    return;
+                }
+                b.rowsRead = b.lines.size;
+                ahead.add(b);
+                if (workers == null) {
+                    run.prepareOrRecord(b);
+                } else {
+                    b.submit(workers, run);
+                }
+            }
+        }
+
+        /**
+         * Skips the batches no worker has started (after a failure), waits for those being worked on and returns
+         * every buffer to the pool.
+         */
+        void release() {
+            for (Batch b : ahead) {
+                b.skip();
+            }
+            for (Batch b : ahead) {
+                b.await();
+                freeBatches.add(b);
+            }
+            ahead.clear();
+            if (current != null) {
+                freeBatches.add(current);
+                current = null;
+            }
         }
     }
 
-    /** The state of one computation: scratch arrays (shared by the stores, used one batch at a time) and statistics. */
+    /**
+     * The per-thread tools of the physics for one computation: registry values at T, a width resolver (with its
+     * tally) and scratch arrays. Taken by one batch at a time.
+     */
+    private static final class Physics {
+        final IsotopologueCache isotopologues;
+        final WidthResolver resolver;
+        final ResolvedWidths widths;
+        final double[] doppler;
+        final double[] lorentz;
+        final double[] shift;
+
+        Physics(IsotopologueLookup lookup, CrossSectionRequest request, int capacity) {
+            isotopologues = new IsotopologueCache(lookup, request.temperatureK());
+            resolver = request.widths().newResolver(request.composition());
+            widths = resolver.newResult(capacity);
+            doppler = new double[capacity];
+            lorentz = new double[capacity];
+            shift = new double[capacity];
+        }
+    }
+
+    /** The state of one computation: the request's constants, the per-thread tools and the reduced statistics. */
     private final class Run {
         final CrossSectionRequest request;
         final double lowCm1;
@@ -274,25 +621,20 @@ public final class CrossSectionCalculator {
         final double queryMinCm1;
         final double queryMaxCm1;
         final double pressureAtm;
+        final double temperatureK;
         final LineShapeKind shape;
         final WingKernel kernel;
         final WingKernel kernelNoChi;
         final boolean chiForCo2Lines;
         final double threshold;
-        final LineBatch batch = new LineBatch(CHUNK_LINES);
-        final LineChunk chunk = new LineChunk(CHUNK_LINES);
-        final IsotopologueCache isotopologues;
-        final WidthResolver resolver;
-        final ResolvedWidths widths;
-        final double[] intensity = new double[CHUNK_LINES];
-        final double[] doppler = new double[CHUNK_LINES];
-        final double[] lorentz = new double[CHUNK_LINES];
-        final double[] shift = new double[CHUNK_LINES];
-        final boolean[] keep = new boolean[CHUNK_LINES];
+        final Set<LineColumn> columns;
         final double gridFirstCm1;
         final double gridLastCm1;
         final boolean uniform;
         final double spacingParameter;
+        /** Idle per-thread tools, and all made (their tallies are added up at the end). */
+        final ConcurrentLinkedQueue<Physics> idle = new ConcurrentLinkedQueue<>();
+        final List<Physics> made = Collections.synchronizedList(new ArrayList<>());
 
         long linesRead;
         long linesUsed;
@@ -313,14 +655,16 @@ public final class CrossSectionCalculator {
             this.lowCm1 = lowCm1;
             this.highCm1 = highCm1;
             this.pressureAtm = request.pressureAtm();
+            this.temperatureK = request.temperatureK();
             this.shape = request.shape();
             this.threshold = request.intensityThresholdCmPerMolecule();
-            this.kernel = request.wings().atConditions(pressureAtm, request.temperatureK());
+            this.kernel = request.wings().atConditions(pressureAtm, temperatureK);
             this.kernelNoChi = request.wings().withChiFactor(ChiFactorKind.NONE)
-                    .atConditions(pressureAtm, request.temperatureK());
+                    .atConditions(pressureAtm, temperatureK);
             Composition composition = request.composition();
             this.chiForCo2Lines = request.wings().chiFactor() == ChiFactorKind.PERRIN_HARTMANN_CO2
                     && composition.fraction(BackgroundGas.CO2) + composition.fraction(BackgroundGas.SELF) > 0;
+            this.columns = columnsFor(composition);
             WavenumberGrid grid = request.grid();
             this.gridFirstCm1 = grid.firstCm1();
             this.gridLastCm1 = grid.lastCm1();
@@ -331,16 +675,34 @@ public final class CrossSectionCalculator {
             this.queryMinCm1 = Math.max(lowCm1, gridFirstCm1 - reach);
             // the query range is closed; [low, high) is enforced per line
             this.queryMaxCm1 = Math.min(highCm1, gridLastCm1 + reach);
-            this.isotopologues = new IsotopologueCache(lookup, request.temperatureK());
-            this.resolver = request.widths().newResolver(composition);
-            this.widths = resolver.newResult(CHUNK_LINES);
+            // tools for the first batch made here, on the calling thread, so that a bad request fails at once
+            Physics first = new Physics(lookup, request, chunkLines);
+            made.add(first);
+            idle.add(first);
         }
 
-        /** Physics for the batch just read; writes the lines that reach σ into {@code s}; returns their count. */
-        int prepare(StoreLines s) {
-            LineBatch b = batch;
+        /** {@link #prepare} with a thread's tools; a failure is kept with the batch. */
+        void prepareOrRecord(Batch b) {
+            Physics p = idle.poll();
+            try {
+                if (p == null) {
+                    p = new Physics(lookup, request, chunkLines);
+                    made.add(p);
+                }
+                prepare(b, p);
+            } catch (RuntimeException | Error e) {
+                b.failure = e;
+            } finally {
+                if (p != null) {
+                    idle.add(p);
+                }
+            }
+        }
+
+        /** Physics for a batch just read: the fate of each line, the lines that reach σ, the batch's statistics. */
+        private void prepare(Batch s, Physics p) {
+            LineBatch b = s.lines;
             int n = b.size;
-            linesRead += n;
             // rows outside [low, high) belong to another block: skip them before any physics
             int from = 0;
             while (from < n && b.wavenumberCm1[from] < lowCm1) {
@@ -351,78 +713,129 @@ public final class CrossSectionCalculator {
                 to++;
             }
             if (from > 0 || to < n) {
-                compact(b, from, to);
+                compact(b, columns, from, to);
                 n = b.size;
             }
+            s.rows = n;
             if (n == 0) {
-                return 0;
+                return;
             }
-            LineIntensity.atTemperature(b, isotopologues, intensity);
-            IntensityCut.apply(intensity, n, threshold, keep);
+            double[] intensity = s.intensity;
+            double[] doppler = p.doppler;
+            double[] lorentz = p.lorentz;
+            double[] shift = p.shift;
+            LineIntensity.atTemperature(b, p.isotopologues, intensity);
             if (shape == LineShapeKind.LORENTZ) {
                 Arrays.fill(doppler, 0, n, 0.0);
             } else {
-                DopplerWidth.hwhmCm1(b, isotopologues, doppler);
+                DopplerWidth.hwhmCm1(b, p.isotopologues, doppler);
             }
-            resolver.resolve(b, widths);
-            PressureBroadening.shiftCm1(widths, pressureAtm, shift);
+            p.resolver.resolve(b, p.widths);
+            PressureBroadening.shiftCm1(p.widths, pressureAtm, shift);
             if (shape == LineShapeKind.DOPPLER) {
                 // Doppler only: no pressure broadening, but the pressure shift still moves the centre
                 Arrays.fill(lorentz, 0, n, 0.0);
             } else {
-                PressureBroadening.lorentzHwhmCm1(widths, pressureAtm, request.temperatureK(), lorentz);
+                PressureBroadening.lorentzHwhmCm1(p.widths, pressureAtm, temperatureK, lorentz);
             }
             int m = 0;
             for (int i = 0; i < n; i++) {
                 double sT = intensity[i];
-                boolean finite = Double.isFinite(sT);
-                if (finite) {
-                    totalIntensity.add(sT);
-                }
-                if (!keep[i]) {
-                    linesBelowThreshold++;
-                    if (finite) {
-                        droppedIntensity.add(sT);
-                    }
+                // NaN (no intensity) and infinities are dropped with the weak lines
+                if (!(sT >= threshold) || !Double.isFinite(sT)) {
+                    s.fate[i] = BELOW_THRESHOLD;
+                    s.belowThreshold++;
                     continue;
                 }
                 double aD = doppler[i];
                 double gL = lorentz[i];
                 if (!(aD > 0) && !(gL > 0)) {
                     // a line of zero width (ν = 0 with the Doppler shape): no profile exists; counted and reported
-                    linesWithoutWidth++;
-                    linesBelowThreshold++;
-                    droppedIntensity.add(sT);
+                    s.fate[i] = WITHOUT_WIDTH;
+                    s.withoutWidth++;
+                    s.belowThreshold++;
                     continue;
                 }
+                s.fate[i] = USED;
                 double nu = b.wavenumberCm1[i];
                 boolean chiLine = chiForCo2Lines && b.moleculeId[i] == CO2_MOLECULE_ID;
+                LineShapeKind effective = effectiveShape(aD, gL);
                 s.keyCm1[m] = nu;
                 s.centerCm1[m] = nu + shift[i];
-                s.intensity[m] = sT;
-                s.doppler[m] = aD;
-                s.lorentz[m] = gL;
-                s.chi[m] = chiLine;
+                s.usedIntensity[m] = sT;
+                s.usedDoppler[m] = aD;
+                s.usedLorentz[m] = gL;
+                s.usedChi[m] = chiLine;
                 m++;
-                linesUsed++;
-                usedIntensity.add(sT);
                 WingKernel k = chiLine ? kernel : kernelNoChi;
-                lostIntensity.add(sT * k.lostFraction(effectiveShape(aD, gL), aD, gL));
+                s.lostIntensity[i] = sT * k.lostFraction(effective, aD, gL);
                 if (nu >= gridFirstCm1 && nu <= gridLastCm1) {
                     // resolution is judged on the line's full half width (Voigt: Olivero–Longbothum), which is αD
                     // at low pressure: a pressure-broadened line is resolved even when αD is below the step
-                    double hwhm = effectiveShape(aD, gL).hwhmCm1(aD, gL);
+                    double hwhm = effective.hwhmCm1(aD, gL);
                     double spacing = uniform ? spacingParameter : nu / spacingParameter;
                     double ratio = hwhm / spacing;
-                    if (ratio < worstResolution) {
-                        worstResolution = ratio;
-                        worstHwhmCm1 = hwhm;
-                        worstDopplerCm1 = aD;
-                        worstSpacingCm1 = spacing;
+                    if (ratio < s.worstResolution) {
+                        s.worstResolution = ratio;
+                        s.worstHwhmCm1 = hwhm;
+                        s.worstDopplerCm1 = aD;
+                        s.worstSpacingCm1 = spacing;
                     }
                 }
             }
-            return m;
+            s.count = m;
+        }
+
+        /**
+         * Adds a batch's statistics, in the order the batches are taken and the lines within them (the order of
+         * a single thread); throws the batch's failure instead when it has one.
+         */
+        void reduce(Batch s) throws IOException {
+            linesRead += s.rowsRead;
+            if (s.failure != null) {
+                Throwable f = s.failure;
+                if (f instanceof IOException e) {
+                    throw e;
+                }
+                if (f instanceof RuntimeException e) {
+                    throw e;
+                }
+                if (f instanceof Error e) {
+                    throw e;
+                }
+                throw new IllegalStateException(f);
+            }
+            double[] intensity = s.intensity;
+            byte[] fate = s.fate;
+            for (int i = 0; i < s.rows; i++) {
+                double sT = intensity[i];
+                boolean finite = Double.isFinite(sT);
+                if (finite) {
+                    totalIntensity.add(sT);
+                }
+                switch (fate[i]) {
+                    case BELOW_THRESHOLD -> {
+                        if (finite) {
+                            droppedIntensity.add(sT);
+                        }
+                    }
+                    case WITHOUT_WIDTH -> droppedIntensity.add(sT);
+                    default -> {
+                        usedIntensity.add(sT);
+                        lostIntensity.add(s.lostIntensity[i]);
+                    }
+                }
+            }
+            linesUsed += s.count;
+            linesBelowThreshold += s.belowThreshold;
+            linesWithoutWidth += s.withoutWidth;
+            // strictly smaller: the first line of the smallest ratio wins, as in one pass over all lines
+            if (s.worstResolution < worstResolution) {
+                worstResolution = s.worstResolution;
+                worstHwhmCm1 = s.worstHwhmCm1;
+                worstDopplerCm1 = s.worstDopplerCm1;
+                worstSpacingCm1 = s.worstSpacingCm1;
+            }
         }
 
         double fractionDone(double keyCm1) {
@@ -435,7 +848,13 @@ public final class CrossSectionCalculator {
         }
 
         CrossSectionResult result(double[] sigma, CrossSectionEngine engine, double seconds) {
-            WidthSourceTally tally = resolver.tally();
+            // counts only: the sum does not depend on the order the threads' tallies are added in
+            WidthSourceTally tally = new WidthSourceTally();
+            synchronized (made) {
+                for (Physics p : made) {
+                    tally.add(p.resolver.tally());
+                }
+            }
             double total = totalIntensity.value();
             double droppedFraction = total > 0 ? droppedIntensity.value() / total : 0.0;
             double used = usedIntensity.value();
@@ -463,7 +882,7 @@ public final class CrossSectionCalculator {
             m.put("engine", engine.id());
             engine.describe().forEach((k, v) -> m.put("engine." + k, v));
             m.putAll(request.grid().describe());
-            m.put("temperature_k", Double.toString(request.temperatureK()));
+            m.put("temperature_k", Double.toString(temperatureK));
             m.put("pressure_atm", Double.toString(pressureAtm));
             m.put("composition", request.composition().toString());
             m.put("line_shape", shape.label());
@@ -501,21 +920,26 @@ public final class CrossSectionCalculator {
         return lorentzHwhmCm1 > 0 ? LineShapeKind.VOIGT : LineShapeKind.DOPPLER;
     }
 
-    private static Set<LineColumn> numericColumns() {
+    /**
+     * Every numeric column but those no physics reads (lower degeneracy, upper energy, position uncertainty).
+     */
+    private static Set<LineColumn> physicsColumns() {
         EnumSet<LineColumn> set = EnumSet.noneOf(LineColumn.class);
         for (LineColumn c : LineColumn.values()) {
             if (c.kind() != LineColumn.Kind.TEXT) {
                 set.add(c);
             }
         }
+        set.removeAll(List.of(LineColumn.LOWER_DEGENERACY, LineColumn.UPPER_ENERGY,
+                LineColumn.WAVENUMBER_UNCERTAINTY));
         return Collections.unmodifiableSet(set);
     }
 
     /** Keeps rows [from, to) of the batch's projected columns, moved to the front. */
-    private static void compact(LineBatch b, int from, int to) {
+    private static void compact(LineBatch b, Set<LineColumn> columns, int from, int to) {
         int n = to - from;
         if (from > 0) {
-            for (LineColumn c : PHYSICS_COLUMNS) {
+            for (LineColumn c : columns) {
                 switch (c.kind()) {
                     case INT -> System.arraycopy(c.ints(b), from, c.ints(b), 0, n);
                     case LONG -> System.arraycopy(c.longs(b), from, c.longs(b), 0, n);
@@ -524,6 +948,48 @@ public final class CrossSectionCalculator {
             }
         }
         b.size = n;
+    }
+
+    /**
+     * The registry called by one thread at a time: the workers' caches ask it only at the first sight of each
+     * isotopologue, so the lock costs nothing and a lookup need not be thread-safe.
+     */
+    private static final class SerializedLookup implements IsotopologueLookup {
+        private final IsotopologueLookup delegate;
+
+        SerializedLookup(IsotopologueLookup delegate) {
+            this.delegate = delegate;
+        }
+
+        @Override
+        public synchronized Id byIsotopeFormula(String isotopeFormula) {
+            return delegate.byIsotopeFormula(isotopeFormula);
+        }
+
+        @Override
+        public synchronized Id byCatalogTag(int speciesTag) {
+            return delegate.byCatalogTag(speciesTag);
+        }
+
+        @Override
+        public synchronized boolean isKnown(int moleculeId, int isotopologue) {
+            return delegate.isKnown(moleculeId, isotopologue);
+        }
+
+        @Override
+        public synchronized double massGPerMol(int moleculeId, int isotopologue) {
+            return delegate.massGPerMol(moleculeId, isotopologue);
+        }
+
+        @Override
+        public synchronized double naturalAbundance(int moleculeId, int isotopologue) {
+            return delegate.naturalAbundance(moleculeId, isotopologue);
+        }
+
+        @Override
+        public synchronized double partitionSum(int moleculeId, int isotopologue, double temperatureK) {
+            return delegate.partitionSum(moleculeId, isotopologue, temperatureK);
+        }
     }
 
     /** Neumaier-compensated running sum (line intensities span many decades). */
