@@ -13,7 +13,10 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import org.jtransforms.fft.DoubleFFT_1D;
 import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.voigt.VoigtProfile;
 import org.linewright.broadening.wings.ChiFactorKind;
+import org.linewright.broadening.wings.FixedCutoff;
+import org.linewright.broadening.wings.PressureScaledCutoff;
 import org.linewright.broadening.wings.WingKernel;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.engine.CrossSectionEngine;
@@ -135,6 +138,8 @@ public final class FastEngine implements CrossSectionEngine {
     private static final String[] FAMILY_NAMES = {"voigt", "doppler", "lorentz"};
     /** Smallest Lorentz floor searched, relative to the smallest Doppler HWHM. */
     static final double MIN_FLOOR_RATIO = 1e-9;
+    /** Smallest cutoff, in Doppler HWHM, for the analytic kernel path (its wing model needs R ≫ αD). */
+    static final double MIN_CUTOFF_OVER_DOPPLER = 10;
     /** Families: three width kinds, each without and with the χ factor. */
     private static final int FAMILIES = 6;
 
@@ -159,6 +164,8 @@ public final class FastEngine implements CrossSectionEngine {
     private double lowFloorCm1;
     private double lowLogStep;
     private double estimate;
+    /** sin²(πn/L) table of the last FFT length on the analytic path. */
+    private double[] sinSquared;
     private final Map<String, String> plan = new LinkedHashMap<>();
 
     /**
@@ -253,6 +260,8 @@ public final class FastEngine implements CrossSectionEngine {
         /** The floored Lorentz axis's first non-zero node, 0 when the axis is not floored. */
         double lorentzFloorCm1;
         int firstSlice;
+        /** Whether this family's slices take the analytic kernel transform with wing correction. */
+        boolean analytic;
     }
 
     @Override
@@ -346,7 +355,21 @@ public final class FastEngine implements CrossSectionEngine {
         int fftLength = fftLength((int) needed);
         int offset = (int) reach + 4;
         // refuse up front, with the figures, rather than fail half-way for want of heap
-        long bytes = ((long) Math.min(BLOCKS, slices) + 2L * threads + 1) * fftLength * Double.BYTES
+        double analyticCutoff = analyticCutoffCm1();
+        double wingError = 0;
+        boolean anyAnalytic = false;
+        for (int kind : new int[] {BOTH, DOPPLER_DOMINATED}) {
+            Family f = families[kind];
+            if (f != null && isAnalytic(f, analyticCutoff)) {
+                f.analytic = true;
+                anyAnalytic = true;
+                wingError = Math.max(wingError, AnalyticKernels.wingModelError(f.alphaMax, analyticCutoff));
+            }
+        }
+        // per thread: lines, kernel and, on the analytic path, two group accumulators; the sin² table (L/2)
+        long perThread = anyAnalytic ? 4 : 2;
+        long bytes = ((long) Math.min(BLOCKS, slices) + perThread * threads + 1) * fftLength * Double.BYTES
+                + (anyAnalytic ? (long) (fftLength / 2 + 1) * Double.BYTES : 0)
                 + (long) count * BYTES_PER_LINE;
         long heap = Runtime.getRuntime().maxMemory();
         if (bytes > heap) {
@@ -359,7 +382,10 @@ public final class FastEngine implements CrossSectionEngine {
         Distribution dist = distribute(families, origin, h, offset, fftLength);
 
         // slices in fixed blocks, spectra summed in a fixed order
-        double[][] blockSpectra = convolveSlices(families, sliceWidths, sliceReach, dist, h, fftLength);
+        double[] sinSquared = anyAnalytic ? sinSquaredTable(fftLength) : null;
+        Convolution conv = convolveSlices(families, sliceWidths, sliceReach, dist, h, fftLength, analyticCutoff,
+                sinSquared);
+        double[][] blockSpectra = conv.spectra;
         double[] total = blockSpectra[0];
         for (int b = 1; b < blockSpectra.length; b++) {
             double[] add = blockSpectra[b];
@@ -398,13 +424,23 @@ public final class FastEngine implements CrossSectionEngine {
             }
         }
         double roundOff = 64 * Math.ulp(1.0) * (Math.log(fftLength) / Math.log(2)) / FastErrorModel.DEPTH;
-        estimate = widthError + positionTotal + roundOff;
+        // the analytic path: the wing model's remainder and the alias tail left out of the transforms
+        double analyticError = conv.analyticSlices > 0 ? wingError + conv.aliasError : 0;
+        estimate = widthError + positionTotal + roundOff + analyticError;
 
         plan.put("fast.lines", Integer.toString(count));
         plan.put("fast.oversampling", Integer.toString(m));
         plan.put("fast.internal_step_cm1", Double.toString(h));
         plan.put("fast.fft_length", Integer.toString(fftLength));
         plan.put("fast.slices", Integer.toString(dist.nonEmptySlices));
+        plan.put("fast.analytic_slices", Integer.toString(conv.analyticSlices));
+        plan.put("fast.correction_kernels", Integer.toString(conv.corrections));
+        plan.put("fast.ffts", Integer.toString(conv.ffts + 1));
+        if (conv.analyticSlices > 0) {
+            plan.put("fast.analytic_cutoff_cm1", Double.toString(analyticCutoff));
+            plan.put("fast.wing_model_error", String.format(Locale.ROOT, "%.3e", wingError));
+            plan.put("fast.alias_error", String.format(Locale.ROOT, "%.3e", conv.aliasError));
+        }
         for (int fi = 0; fi < families.length; fi++) {
             Family f = families[fi];
             if (f != null) {
@@ -415,6 +451,7 @@ public final class FastEngine implements CrossSectionEngine {
                 plan.put(key + ".lorentz_nodes", Integer.toString(f.lorentz.size()));
                 plan.put(key + ".lorentz_log_step", Double.toString(f.lorentz.logStep()));
                 plan.put(key + ".lorentz_floor_cm1", Double.toString(f.lorentzFloorCm1));
+                plan.put(key + ".kernel", f.analytic ? "analytic" : "sampled");
             }
         }
         plan.put("fast.estimated_relative_error", String.format(Locale.ROOT, "%.3e", estimate));
@@ -646,8 +683,14 @@ public final class FastEngine implements CrossSectionEngine {
         final double dopplerCm1;
         final double lorentzCm1;
         final int reach;
+        /**
+         * Wing-correction group (one per Lorentz node of an analytic family, in work order), or −1: slices of the
+         * same group are contiguous in the work list and share one correction.
+         */
+        final int group;
 
-        Slice(Family family, int familyKeyBase, int dopplerNode, int lorentzNode, double[] widths, int reach) {
+        Slice(Family family, int familyKeyBase, int dopplerNode, int lorentzNode, double[] widths, int reach,
+              int group) {
             this.family = family;
             this.familyKeyBase = familyKeyBase;
             this.dopplerNode = dopplerNode;
@@ -655,61 +698,108 @@ public final class FastEngine implements CrossSectionEngine {
             this.dopplerCm1 = widths[0];
             this.lorentzCm1 = widths[1];
             this.reach = reach;
+            this.group = group;
         }
     }
 
-    private double[][] convolveSlices(Family[] families, List<double[]> sliceWidths, int[] sliceReach,
-                                      Distribution dist, double h, int fftLength) {
-        // the non-empty slices in family, Doppler-node, Lorentz-node order
+    /** The summed spectra of the blocks and what it took. */
+    private static final class Convolution {
+        double[][] spectra;
+        int ffts;
+        int analyticSlices;
+        int corrections;
+        double aliasError;
+    }
+
+    /** One block's spectrum and counts. */
+    private static final class BlockOutput {
+        double[] spectrum;
+        int ffts;
+        int analyticSlices;
+        int corrections;
+        double aliasError;
+    }
+
+    /** Shared, read-only inputs of the blocks. */
+    private static final class SliceContext {
+        Distribution dist;
+        DoubleFFT_1D fft;
+        int length;
+        double[] offsetsCm1;
+        double stepCm1;
+        double cutoffCm1;
+        boolean removePedestal;
+        double[] sinSquared;
+    }
+
+    private Convolution convolveSlices(Family[] families, List<double[]> sliceWidths, int[] sliceReach,
+                                       Distribution dist, double h, int fftLength, double analyticCutoffCm1,
+                                       double[] sinSquared) {
+        // the non-empty slices in family order; within an analytic family Lorentz-node major, so that the slices
+        // sharing a Lorentz node (and so a wing correction) are contiguous; otherwise Doppler-node major
         List<Slice> work = new ArrayList<>();
         int keyBase = 0;
+        int groups = 0;
         for (Family f : families) {
             if (f == null) {
                 continue;
             }
-            int sg = f.doppler.stencilSize();
-            int sl = f.lorentz.stencilSize();
             int nl = f.lorentz.size();
-            for (int ig = 0; ig < f.doppler.size(); ig++) {
-                for (int il = 0; il < nl; il++) {
-                    int lines = 0;
-                    for (int jg = Math.max(0, ig - sg + 1); jg <= ig; jg++) {
-                        for (int jl = Math.max(0, il - sl + 1); jl <= il; jl++) {
-                            int k = keyBase + jg * nl + jl;
-                            lines += dist.bucketStart[k + 1] - dist.bucketStart[k];
-                        }
-                    }
-                    if (lines > 0) {
+            int ng = f.doppler.size();
+            for (int outer = 0; outer < (f.analytic ? nl : ng); outer++) {
+                boolean groupUsed = false;
+                for (int inner = 0; inner < (f.analytic ? ng : nl); inner++) {
+                    int ig = f.analytic ? inner : outer;
+                    int il = f.analytic ? outer : inner;
+                    if (linesOfSlice(f, keyBase, ig, il, dist) > 0) {
                         int s = f.firstSlice + ig * nl + il;
-                        work.add(new Slice(f, keyBase, ig, il, sliceWidths.get(s), sliceReach[s]));
+                        work.add(new Slice(f, keyBase, ig, il, sliceWidths.get(s), sliceReach[s],
+                                f.analytic ? groups : -1));
+                        groupUsed = true;
                     }
+                }
+                if (f.analytic && groupUsed) {
+                    groups++;
                 }
             }
             keyBase += f.doppler.size() * nl;
         }
         dist.nonEmptySlices = work.size();
         int blocks = Math.max(1, Math.min(BLOCKS, work.size()));
-        DoubleFFT_1D fft = new DoubleFFT_1D(fftLength);
+        SliceContext ctx = new SliceContext();
+        ctx.dist = dist;
+        ctx.fft = new DoubleFFT_1D(fftLength);
+        ctx.length = fftLength;
+        ctx.stepCm1 = h;
+        ctx.cutoffCm1 = analyticCutoffCm1;
+        ctx.removePedestal = wings.removePedestal();
+        ctx.sinSquared = sinSquared;
         int maxReach = 0;
         for (Slice s : work) {
             maxReach = Math.max(maxReach, s.reach);
         }
-        double[] offsetsCm1 = new double[maxReach + 1];
+        ctx.offsetsCm1 = new double[maxReach + 1];
         for (int r = 0; r <= maxReach; r++) {
-            offsetsCm1[r] = r * h;
+            ctx.offsetsCm1[r] = r * h;
         }
-        List<Callable<double[]>> tasks = new ArrayList<>();
+        List<Callable<BlockOutput>> tasks = new ArrayList<>();
         for (int b = 0; b < blocks; b++) {
             int from = (int) ((long) b * work.size() / blocks);
             int to = (int) ((long) (b + 1) * work.size() / blocks);
             List<Slice> mine = work.subList(from, to);
-            tasks.add(() -> convolveBlock(mine, dist, fft, fftLength, offsetsCm1));
+            tasks.add(() -> convolveBlock(mine, ctx));
         }
-        double[][] spectra = new double[blocks][];
+        Convolution result = new Convolution();
+        result.spectra = new double[blocks][];
         try {
-            List<Future<double[]>> futures = pool.invokeAll(tasks);
+            List<Future<BlockOutput>> futures = pool.invokeAll(tasks);
             for (int b = 0; b < blocks; b++) {
-                spectra[b] = futures.get(b).get();
+                BlockOutput out = futures.get(b).get();
+                result.spectra[b] = out.spectrum;
+                result.ffts += out.ffts;
+                result.analyticSlices += out.analyticSlices;
+                result.corrections += out.corrections;
+                result.aliasError = Math.max(result.aliasError, out.aliasError);
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
@@ -724,53 +814,184 @@ public final class FastEngine implements CrossSectionEngine {
             }
             throw new IllegalStateException(cause);
         }
-        return spectra;
+        return result;
     }
 
-    /** Sums the spectra of a block's slices, in order: spectrum(lines) × spectrum(kernel). */
-    private double[] convolveBlock(List<Slice> mine, Distribution dist, DoubleFFT_1D fft, int length,
-                                   double[] offsetsCm1) {
+    /** Number of lines whose stencil touches slice (ig, il) of a family. */
+    private static int linesOfSlice(Family f, int keyBase, int ig, int il, Distribution dist) {
+        int sg = f.doppler.stencilSize();
+        int sl = f.lorentz.stencilSize();
+        int nl = f.lorentz.size();
+        int lines = 0;
+        for (int jg = Math.max(0, ig - sg + 1); jg <= ig; jg++) {
+            for (int jl = Math.max(0, il - sl + 1); jl <= il; jl++) {
+                int k = keyBase + jg * nl + jl;
+                lines += dist.bucketStart[k + 1] - dist.bucketStart[k];
+            }
+        }
+        return lines;
+    }
+
+    /**
+     * Sums the spectra of a block's slices, in order: spectrum(lines) × spectrum(kernel). A sampled slice's kernel
+     * is transformed numerically; an analytic slice's kernel transform is the closed form of the untruncated,
+     * periodised profile, and the lines' spectrum is also added to its group's accumulators (plain, and weighted by
+     * s²/2); when the group ends the group's correction kernels c_γ and d_γ are transformed and their products with
+     * the accumulators subtracted.
+     */
+    private BlockOutput convolveBlock(List<Slice> mine, SliceContext ctx) {
+        int length = ctx.length;
+        int half = length / 2;
+        Distribution dist = ctx.dist;
+        DoubleFFT_1D fft = ctx.fft;
+        BlockOutput out = new BlockOutput();
         double[] spectrum = new double[length];
         double[] lines = new double[length];
         double[] kernel = new double[length];
-        double[] profile = new double[offsetsCm1.length];
+        double[] profile = new double[ctx.offsetsCm1.length];
+        boolean anyGroup = false;
         for (Slice s : mine) {
-            Arrays.fill(lines, 0.0);
-            Family f = s.family;
-            int sg = f.doppler.stencilSize();
-            int sl = f.lorentz.stencilSize();
-            int nl = f.lorentz.size();
-            for (int jg = Math.max(0, s.dopplerNode - sg + 1); jg <= s.dopplerNode; jg++) {
-                int gIndex = s.dopplerNode - jg;
-                for (int jl = Math.max(0, s.lorentzNode - sl + 1); jl <= s.lorentzNode; jl++) {
-                    int lIndex = s.lorentzNode - jl;
-                    int k = s.familyKeyBase + jg * nl + jl;
-                    for (int q = dist.bucketStart[k]; q < dist.bucketStart[k + 1]; q++) {
-                        int i = dist.order[q];
-                        double w = dist.dopplerWeights[4 * i + gIndex] * dist.lorentzWeights[4 * i + lIndex];
-                        int p = dist.firstPoint[i];
-                        for (int j = 0; j < P; j++) {
-                            lines[p + j] += w * dist.positionWeights[P * i + j];
-                        }
+            anyGroup |= s.group >= 0;
+        }
+        double[] plainSum = anyGroup ? new double[length] : null;
+        double[] curvatureSum = anyGroup ? new double[length] : null;
+        boolean groupOpen = false;
+        for (int index = 0; index < mine.size(); index++) {
+            Slice s = mine.get(index);
+            spreadLines(s, dist, lines);
+            fft.realForward(lines);
+            out.ffts++;
+            double tail = s.group >= 0
+                    ? AnalyticKernels.voigtTransform(s.dopplerCm1, s.lorentzCm1, ctx.stepCm1, length, kernel) : -1;
+            if (tail >= 0) {
+                out.analyticSlices++;
+                // a line's weakest point of interest is 10⁻⁶ of its peak; the neglected aliases are at most
+                // tail/h anywhere in real space
+                double peak = VoigtProfile.value(0, s.dopplerCm1, s.lorentzCm1);
+                out.aliasError = Math.max(out.aliasError, tail / (ctx.stepCm1 * FastErrorModel.DEPTH * peak));
+                boolean corrected = s.lorentzCm1 > 0;
+                double weight = 0.5 * AnalyticKernels.dopplerVariance(s.dopplerCm1);
+                // packed real-FFT layout: [Re0, Re(L/2), Re1, Im1, Re2, Im2, ...]; the kernel is real and even
+                spectrum[0] += lines[0] * kernel[0];
+                spectrum[1] += lines[1] * kernel[half];
+                for (int k = 1; k < half; k++) {
+                    double c = kernel[k];
+                    spectrum[2 * k] += lines[2 * k] * c;
+                    spectrum[2 * k + 1] += lines[2 * k + 1] * c;
+                }
+                if (corrected) {
+                    for (int i = 0; i < length; i++) {
+                        plainSum[i] += lines[i];
+                        curvatureSum[i] += weight * lines[i];
+                    }
+                    groupOpen = true;
+                }
+            } else {
+                sampleKernel(s.family.kernel, s.dopplerCm1, s.lorentzCm1, ctx.offsetsCm1, s.reach, profile, kernel);
+                fft.realForward(kernel);
+                out.ffts++;
+                multiplyAdd(lines, kernel, spectrum);
+            }
+            boolean groupEnds = index + 1 == mine.size() || mine.get(index + 1).group != s.group;
+            if (groupOpen && groupEnds) {
+                subtractCorrection(s.lorentzCm1, false, plainSum, kernel, spectrum, ctx);
+                subtractCorrection(s.lorentzCm1, true, curvatureSum, kernel, spectrum, ctx);
+                out.ffts += 2;
+                out.corrections++;
+                Arrays.fill(plainSum, 0.0);
+                Arrays.fill(curvatureSum, 0.0);
+                groupOpen = false;
+            }
+        }
+        out.spectrum = spectrum;
+        return out;
+    }
+
+    /** The slice's line distribution (position weights × width weights) on the internal grid, in {@code lines}. */
+    private static void spreadLines(Slice s, Distribution dist, double[] lines) {
+        Arrays.fill(lines, 0.0);
+        Family f = s.family;
+        int sg = f.doppler.stencilSize();
+        int sl = f.lorentz.stencilSize();
+        int nl = f.lorentz.size();
+        for (int jg = Math.max(0, s.dopplerNode - sg + 1); jg <= s.dopplerNode; jg++) {
+            int gIndex = s.dopplerNode - jg;
+            for (int jl = Math.max(0, s.lorentzNode - sl + 1); jl <= s.lorentzNode; jl++) {
+                int lIndex = s.lorentzNode - jl;
+                int k = s.familyKeyBase + jg * nl + jl;
+                for (int q = dist.bucketStart[k]; q < dist.bucketStart[k + 1]; q++) {
+                    int i = dist.order[q];
+                    double w = dist.dopplerWeights[4 * i + gIndex] * dist.lorentzWeights[4 * i + lIndex];
+                    int p = dist.firstPoint[i];
+                    for (int j = 0; j < P; j++) {
+                        lines[p + j] += w * dist.positionWeights[P * i + j];
                     }
                 }
             }
-            sampleKernel(f.kernel, s.dopplerCm1, s.lorentzCm1, offsetsCm1, s.reach, profile, kernel);
-            fft.realForward(lines);
-            fft.realForward(kernel);
-            // packed real-FFT layout: [Re0, Re(L/2), Re1, Im1, Re2, Im2, ...]
-            spectrum[0] += lines[0] * kernel[0];
-            spectrum[1] += lines[1] * kernel[1];
-            for (int i = 2; i < length; i += 2) {
-                double ar = lines[i];
-                double ai = lines[i + 1];
-                double br = kernel[i];
-                double bi = kernel[i + 1];
-                spectrum[i] += ar * br - ai * bi;
-                spectrum[i + 1] += ar * bi + ai * br;
-            }
         }
-        return spectrum;
+    }
+
+    /** spectrum += a × b, both in the packed real-FFT layout [Re0, Re(L/2), Re1, Im1, Re2, Im2, ...]. */
+    private static void multiplyAdd(double[] a, double[] b, double[] spectrum) {
+        spectrum[0] += a[0] * b[0];
+        spectrum[1] += a[1] * b[1];
+        for (int i = 2; i < a.length; i += 2) {
+            double ar = a[i];
+            double ai = a[i + 1];
+            double br = b[i];
+            double bi = b[i + 1];
+            spectrum[i] += ar * br - ai * bi;
+            spectrum[i + 1] += ar * bi + ai * br;
+        }
+    }
+
+    /**
+     * spectrum −= accumulated × FFT(c_γ) (or d_γ): the group's wing correction. The kernel is real and even, so
+     * its transform is real; the imaginary parts the FFT returns are round-off and are left out.
+     */
+    private static void subtractCorrection(double lorentzCm1, boolean second, double[] accumulated, double[] kernel,
+                                           double[] spectrum, SliceContext ctx) {
+        AnalyticKernels.correctionKernel(lorentzCm1, ctx.offsetsCm1, ctx.cutoffCm1, ctx.removePedestal, ctx.stepCm1,
+                ctx.sinSquared, second, kernel);
+        ctx.fft.realForward(kernel);
+        spectrum[0] -= accumulated[0] * kernel[0];
+        spectrum[1] -= accumulated[1] * kernel[1];
+        for (int i = 2; i < kernel.length; i += 2) {
+            double c = kernel[i];
+            spectrum[i] -= accumulated[i] * c;
+            spectrum[i + 1] -= accumulated[i + 1] * c;
+        }
+    }
+
+    /**
+     * The fixed cutoff R of this (p, T) when the analytic kernels may apply — a cutoff that does not depend on the
+     * line widths ({@link FixedCutoff}, {@link PressureScaledCutoff}) and is finite — else NaN.
+     */
+    private double analyticCutoffCm1() {
+        if (!(wings.cutoff() instanceof FixedCutoff || wings.cutoff() instanceof PressureScaledCutoff)) {
+            return Double.NaN;
+        }
+        double d = wingKernel.cutoffCm1(0.0, 0.0);
+        return Double.isFinite(d) && d > 0 ? d : Double.NaN;
+    }
+
+    /**
+     * Whether a family takes the analytic path: a width-independent finite cutoff R, no χ factor, αD &gt; 0, and
+     * R ≫ αD: αD,max ≤ R/{@value #MIN_CUTOFF_OVER_DOPPLER} and the wing model's remainder
+     * ({@link AnalyticKernels#wingModelError}) within a hundredth of the tolerance.
+     */
+    private boolean isAnalytic(Family f, double cutoffCm1) {
+        return !Double.isNaN(cutoffCm1) && f.kernel == plainKernel && f.kernel.chiFactor() == null
+                && f.alphaMin > 0 && f.alphaMax * MIN_CUTOFF_OVER_DOPPLER <= cutoffCm1
+                && AnalyticKernels.wingModelError(f.alphaMax, cutoffCm1) <= tolerance / 100;
+    }
+
+    /** sin²(πn/L), n = 0 … L/2, kept between computations of the same FFT length. */
+    private double[] sinSquaredTable(int length) {
+        if (sinSquared == null || sinSquared.length != length / 2 + 1) {
+            sinSquared = AnalyticKernels.sinSquaredTable(length);
+        }
+        return sinSquared;
     }
 
     /**
