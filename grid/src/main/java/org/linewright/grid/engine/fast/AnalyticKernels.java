@@ -169,10 +169,10 @@ final class AnalyticKernels {
     }
 
     /**
-     * Fills the two correction kernels of Lorentz width γ on the ring of L samples h apart, laid out circularly
-     * (n at index n, −n at L − n): c(x) = S_P(x) − [|x| ≤ R]·(L(x) − p·L(R)) and
+     * Fills one of the two correction kernels of Lorentz width γ on the ring of L samples h apart, laid out
+     * circularly (n at index n, −n at L − n): c(x) = S_P(x) − [|x| ≤ R]·(L(x) − p·L(R)) and
      * d(x) = S_P''(x) − [|x| ≤ R]·(L''(x) − p·L''(R)), with |x| ≤ R decided on the offsets r·h exactly as the
-     * sampled kernel decides it.
+     * sampled kernel decides it; inside R from {@link #imagesOnly}, free of cancellation.
      *
      * @param lorentzCm1     γ &gt; 0
      * @param offsetsCm1     r·h for r = 0 … at least the last offset within R
@@ -199,13 +199,70 @@ final class AnalyticKernels {
         double pedestal = !removePedestal ? 0.0
                 : (second ? lorentzSecondDerivative(cutoffCm1, lorentzCm1) : lorentz(cutoffCm1, lorentzCm1));
         for (int r = 0; r < offsetsCm1.length && offsetsCm1[r] <= cutoffCm1; r++) {
-            double x = offsetsCm1[r];
-            double inside = (second ? lorentzSecondDerivative(x, lorentzCm1) : lorentz(x, lorentzCm1)) - pedestal;
-            out[r] -= inside;
+            // inside the cutoff the kernel is the images' sum alone (S_P − L, S_P'' − L''), taken from the Laurent
+            // series so that it does not cancel against L (L''(0) = −2/(πγ³) is huge for small γ) ...
+            double v = imagesOnly(offsetsCm1[r], lorentzCm1, period, sinSquared[r], second) + pedestal;
+            out[r] = v;
             if (r > 0) {
-                out[length - r] -= inside;
+                out[length - r] = v;
             }
         }
+    }
+
+    /** ζ(2k), k = 1 … {@value #SERIES_TERMS}, for the Laurent series of cot w − 1/w. */
+    private static final int SERIES_TERMS = 30;
+    private static final double[] ZETA_EVEN = zetaEven();
+
+    private static double[] zetaEven() {
+        double[] z = new double[SERIES_TERMS + 1];
+        z[1] = Math.PI * Math.PI / 6;
+        for (int k = 2; k <= SERIES_TERMS; k++) {
+            // Σ n^(−2k), n ≤ 1000, plus the integral of the rest (below 10⁻¹⁸ of the sum from k = 2 on)
+            double sum = 0;
+            for (int n = 1000; n >= 1; n--) {
+                sum += Math.pow(n, -2.0 * k);
+            }
+            z[k] = sum + Math.pow(1000.5, 1 - 2.0 * k) / (2 * k - 1);
+        }
+        return z;
+    }
+
+    /**
+     * The images' part of the periodic sums at x ∈ [0, P/2): Σ_{m≠0} L(x + mP) = S_P − L, or the same of L''. With
+     * w = π(x − iγ)/P, Σ_m 1/(z + mP) = (π/P)·cot(πz/P) (the partial-fraction expansion of the cotangent), so
+     * S_P − L = (1/P)·Im g(w) and S_P'' − L'' = (1/P)(π/P)²·Im g''(w), g(w) = cot w − 1/w =
+     * −(2/π)·Σ_k ζ(2k)·(w/π)^(2k−1) (Abramowitz &amp; Stegun 4.3.70 with 23.2.16), summed for |w| ≤ 1 (terms falling by
+     * |w/π|² ≤ 0.1); for larger |w| the closed forms minus L lose at most a few bits.
+     */
+    static double imagesOnly(double xCm1, double lorentzCm1, double periodCm1, double sinSquaredHalfTheta,
+                             boolean second) {
+        double tr = xCm1 / periodCm1;
+        double ti = -lorentzCm1 / periodCm1;
+        // t = w/π = (x − iγ)/P
+        if (Math.PI * Math.hypot(tr, ti) > 1) {
+            return second ? periodicLorentzSecondDerivative(sinSquaredHalfTheta, lorentzCm1, periodCm1)
+                    - lorentzSecondDerivative(xCm1, lorentzCm1)
+                    : periodicLorentz(sinSquaredHalfTheta, lorentzCm1, periodCm1) - lorentz(xCm1, lorentzCm1);
+        }
+        double t2r = tr * tr - ti * ti;
+        double t2i = 2 * tr * ti;
+        // Horner in t²: Σ a_k (t²)^j with a = ζ(2k) (g) or ζ(2k)(2k−1)(2k−2) from k = 2 (g'')
+        double sr = 0;
+        double si = 0;
+        for (int k = SERIES_TERMS; k >= (second ? 2 : 1); k--) {
+            double a = second ? ZETA_EVEN[k] * (2 * k - 1) * (2 * k - 2) : ZETA_EVEN[k];
+            double nr = sr * t2r - si * t2i + a;
+            si = sr * t2i + si * t2r;
+            sr = nr;
+        }
+        // multiply by t, take the imaginary part
+        double im = sr * ti + si * tr;
+        if (second) {
+            // g''(w) = −(2/π³)·t·Σ ζ(2k)(2k−1)(2k−2)·(t²)^(k−2); times (1/P)(π/P)²
+            return -2 / Math.PI * im / (periodCm1 * periodCm1 * periodCm1);
+        }
+        // g(w) = −(2/π)·t·Σ ζ(2k)·(t²)^(k−1); times 1/P
+        return -2 / Math.PI * im / periodCm1;
     }
 
     /** @return the Gaussian variance s² = αD²/(2 ln 2) of a Doppler HWHM, cm⁻² */
