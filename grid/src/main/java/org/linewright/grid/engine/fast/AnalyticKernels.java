@@ -188,9 +188,23 @@ final class AnalyticKernels {
         int length = out.length;
         int half = length / 2;
         double period = length * stepCm1;
+        // the closed forms of periodicLorentz and its second derivative with their γ-only factors taken out of
+        // the loop (two sinh per kernel, not per point)
+        double eps = 2 * Math.PI * lorentzCm1 / period;
+        double sh = Math.sinh(0.5 * eps);
+        double floor = 2 * sh * sh;
+        double numerator = Math.sinh(eps) / period;
+        double w = 2 * Math.PI / period;
+        double curvatureFactor = -w * w * numerator;
         for (int n = 0; n <= half; n++) {
-            double v = second ? periodicLorentzSecondDerivative(sinSquared[n], lorentzCm1, period)
-                    : periodicLorentz(sinSquared[n], lorentzCm1, period);
+            double q = sinSquared[n];
+            double d = floor + 2 * q;
+            double v;
+            if (second) {
+                v = curvatureFactor * ((1 - 2 * q) * d - 8 * q * (1 - q)) / (d * d * d);
+            } else {
+                v = numerator / d;
+            }
             out[n] = v;
             if (n > 0 && n < half) {
                 out[length - n] = v;

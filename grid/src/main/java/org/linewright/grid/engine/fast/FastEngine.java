@@ -83,9 +83,8 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * around the ring and the pedestal box; beyond R ≫ αD the profile is L + (s²/2)·L'' to relative O(s⁴/R⁴)
  * (s² = αD²/(2 ln 2); the asymptotic series of the Faddeeva function), so that difference is c_γ + (s²/2)·d_γ with
  * two kernels that depend on the Lorentz node γ only ({@link AnalyticKernels#correctionKernel}, closed-form
- * periodic sums). The slices sharing a Lorentz node are run one after the other; their line spectra are summed
- * (plain and weighted by s²/2), and at the end of the run c_γ and d_γ are transformed once and their products
- * with those sums subtracted. FFTs per (p, T): slices + 2·(Lorentz nodes with γ &gt; 0) + 1 instead of
+ * periodic sums). The slices sharing a Lorentz node are run one after the other: c_γ and d_γ are transformed once
+ * at the node's first slice, and each slice's kernel transform is K_s − Ĉ_γ − (s²/2)·D̂_γ. FFTs per (p, T): slices + 2·(Lorentz nodes with γ &gt; 0) + 1 instead of
  * 2·slices + 1. The estimate adds the remainder's bound 30·s⁴/R⁴ ({@link AnalyticKernels#wingModelError}, at the
  * largest αD) and the neglected alias tail; the result agrees with the sampled path to about 10⁻⁸ relative
  * (tested).</li>
@@ -118,7 +117,8 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  *
  * <p><b>Memory.</b> {@link #accumulate} keeps the lines (33 bytes each); {@link #finish} needs 124 bytes per
  * line for the distribution weights plus ({@value #BLOCKS} + 2·threads + 1)·L doubles (on the analytic path
- * 4·threads: two more per thread for the Lorentz-node sums, plus L/2 for a sin² table), where L ≈ m·N + 2K (N output
+ * 3·threads: two half-length transforms per thread for the Lorentz node's corrections, plus L/2 for a sin²
+ * table), where L ≈ m·N + 2K (N output
  * points, K the cutoff in internal steps; without a cutoff K spans every line-to-point distance), rounded up to a
  * power of two. {@link #finish} refuses with an {@link InputException} naming the figures when this exceeds the
  * heap.
@@ -396,8 +396,8 @@ public final class FastEngine implements CrossSectionEngine {
                 wingError = Math.max(wingError, AnalyticKernels.wingModelError(f.alphaMax, analyticCutoff));
             }
         }
-        // per thread: lines, kernel and, on the analytic path, two group accumulators; the sin² table (L/2)
-        long perThread = anyAnalytic ? 4 : 2;
+        // per thread: lines, kernel and, on the analytic path, two half-length node corrections; the sin² table
+        long perThread = anyAnalytic ? 3 : 2;
         long bytes = ((long) Math.min(BLOCKS, slices) + perThread * threads + 1) * fftLength * Double.BYTES
                 + (anyAnalytic ? (long) (fftLength / 2 + 1) * Double.BYTES : 0)
                 + (long) count * BYTES_PER_LINE;
@@ -864,10 +864,10 @@ public final class FastEngine implements CrossSectionEngine {
 
     /**
      * Sums the spectra of a block's slices, in order: spectrum(lines) × spectrum(kernel). A sampled slice's kernel
-     * is transformed numerically; an analytic slice's kernel transform is the closed form of the untruncated,
-     * periodised profile, and the lines' spectrum is also added to its group's accumulators (plain, and weighted by
-     * s²/2); when the group ends the group's correction kernels c_γ and d_γ are transformed and their products with
-     * the accumulators subtracted.
+     * is transformed numerically. An analytic slice's kernel transform is the closed form of the untruncated,
+     * periodised profile minus its Lorentz node's wing corrections, K_s − Ĉ_γ − (s²/2)·D̂_γ; Ĉ_γ and D̂_γ are
+     * transformed when the block reaches the first slice of a node and kept (real, L/2 + 1 values each) for the
+     * node's other slices, which follow it in the work order.
      */
     private BlockOutput convolveBlock(List<Slice> mine, SliceContext ctx) {
         int length = ctx.length;
@@ -881,16 +881,23 @@ public final class FastEngine implements CrossSectionEngine {
         double[] profile = new double[ctx.offsetsCm1.length];
         boolean anyGroup = false;
         for (Slice s : mine) {
-            anyGroup |= s.group >= 0;
+            anyGroup |= s.group >= 0 && s.lorentzCm1 > 0;
         }
-        double[] plainSum = anyGroup ? new double[length] : null;
-        double[] curvatureSum = anyGroup ? new double[length] : null;
-        boolean groupOpen = false;
-        for (int index = 0; index < mine.size(); index++) {
-            Slice s = mine.get(index);
+        double[] plainCorrection = anyGroup ? new double[half + 1] : null;
+        double[] curvatureCorrection = anyGroup ? new double[half + 1] : null;
+        int loadedGroup = -1;
+        for (Slice s : mine) {
             spreadLines(s, dist, lines);
             fft.realForward(lines);
             out.ffts++;
+            boolean corrected = s.group >= 0 && s.lorentzCm1 > 0;
+            if (corrected && s.group != loadedGroup) {
+                correctionTransform(s.lorentzCm1, false, kernel, plainCorrection, ctx);
+                correctionTransform(s.lorentzCm1, true, kernel, curvatureCorrection, ctx);
+                out.ffts += 2;
+                out.corrections++;
+                loadedGroup = s.group;
+            }
             double tail = s.group >= 0
                     ? AnalyticKernels.voigtTransform(s.dopplerCm1, s.lorentzCm1, ctx.stepCm1, length, kernel) : -1;
             if (tail >= 0) {
@@ -899,8 +906,12 @@ public final class FastEngine implements CrossSectionEngine {
                 // tail/h anywhere in real space
                 double peak = VoigtProfile.value(0, s.dopplerCm1, s.lorentzCm1);
                 out.aliasError = Math.max(out.aliasError, tail / (ctx.stepCm1 * FastErrorModel.DEPTH * peak));
-                boolean corrected = s.lorentzCm1 > 0;
-                double weight = 0.5 * AnalyticKernels.dopplerVariance(s.dopplerCm1);
+                if (corrected) {
+                    double w = 0.5 * AnalyticKernels.dopplerVariance(s.dopplerCm1);
+                    for (int k = 0; k <= half; k++) {
+                        kernel[k] -= plainCorrection[k] + w * curvatureCorrection[k];
+                    }
+                }
                 // packed real-FFT layout: [Re0, Re(L/2), Re1, Im1, Re2, Im2, ...]; the kernel is real and even
                 spectrum[0] += lines[0] * kernel[0];
                 spectrum[1] += lines[1] * kernel[half];
@@ -909,28 +920,11 @@ public final class FastEngine implements CrossSectionEngine {
                     spectrum[2 * k] += lines[2 * k] * c;
                     spectrum[2 * k + 1] += lines[2 * k + 1] * c;
                 }
-                if (corrected) {
-                    for (int i = 0; i < length; i++) {
-                        plainSum[i] += lines[i];
-                        curvatureSum[i] += weight * lines[i];
-                    }
-                    groupOpen = true;
-                }
             } else {
                 sampleKernel(s.family.kernel, s.dopplerCm1, s.lorentzCm1, ctx.offsetsCm1, s.reach, profile, kernel);
                 fft.realForward(kernel);
                 out.ffts++;
                 multiplyAdd(lines, kernel, spectrum);
-            }
-            boolean groupEnds = index + 1 == mine.size() || mine.get(index + 1).group != s.group;
-            if (groupOpen && groupEnds) {
-                subtractCorrection(s.lorentzCm1, false, plainSum, kernel, spectrum, ctx);
-                subtractCorrection(s.lorentzCm1, true, curvatureSum, kernel, spectrum, ctx);
-                out.ffts += 2;
-                out.corrections++;
-                Arrays.fill(plainSum, 0.0);
-                Arrays.fill(curvatureSum, 0.0);
-                groupOpen = false;
             }
         }
         out.spectrum = spectrum;
@@ -976,20 +970,19 @@ public final class FastEngine implements CrossSectionEngine {
     }
 
     /**
-     * spectrum −= accumulated × FFT(c_γ) (or d_γ): the group's wing correction. The kernel is real and even, so
-     * its transform is real; the imaginary parts the FFT returns are round-off and are left out.
+     * The transform of a Lorentz node's correction kernel c_γ (or d_γ), real and even, so real: its values at
+     * k = 0 … L/2 in {@code half}; the imaginary parts the FFT returns are round-off and are left out.
      */
-    private static void subtractCorrection(double lorentzCm1, boolean second, double[] accumulated, double[] kernel,
-                                           double[] spectrum, SliceContext ctx) {
+    private static void correctionTransform(double lorentzCm1, boolean second, double[] scratch, double[] half,
+                                            SliceContext ctx) {
         AnalyticKernels.correctionKernel(lorentzCm1, ctx.offsetsCm1, ctx.cutoffCm1, ctx.removePedestal, ctx.stepCm1,
-                ctx.sinSquared, second, kernel);
-        ctx.fft.realForward(kernel);
-        spectrum[0] -= accumulated[0] * kernel[0];
-        spectrum[1] -= accumulated[1] * kernel[1];
-        for (int i = 2; i < kernel.length; i += 2) {
-            double c = kernel[i];
-            spectrum[i] -= accumulated[i] * c;
-            spectrum[i + 1] -= accumulated[i + 1] * c;
+                ctx.sinSquared, second, scratch);
+        ctx.fft.realForward(scratch);
+        int n = half.length - 1;
+        half[0] = scratch[0];
+        half[n] = scratch[1];
+        for (int k = 1; k < n; k++) {
+            half[k] = scratch[2 * k];
         }
     }
 
