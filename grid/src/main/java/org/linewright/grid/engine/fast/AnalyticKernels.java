@@ -212,10 +212,11 @@ final class AnalyticKernels {
         }
         double pedestal = !removePedestal ? 0.0
                 : (second ? lorentzSecondDerivative(cutoffCm1, lorentzCm1) : lorentz(cutoffCm1, lorentzCm1));
+        int terms = seriesTerms(cutoffCm1, lorentzCm1, period);
         for (int r = 0; r < offsetsCm1.length && offsetsCm1[r] <= cutoffCm1; r++) {
             // inside the cutoff the kernel is the images' sum alone (S_P − L, S_P'' − L''), taken from the Laurent
             // series so that it does not cancel against L (L''(0) = −2/(πγ³) is huge for small γ) ...
-            double v = imagesOnly(offsetsCm1[r], lorentzCm1, period, sinSquared[r], second) + pedestal;
+            double v = imagesOnly(offsetsCm1[r], lorentzCm1, period, sinSquared[r], second, terms) + pedestal;
             out[r] = v;
             if (r > 0) {
                 out[length - r] = v;
@@ -250,6 +251,25 @@ final class AnalyticKernels {
      */
     static double imagesOnly(double xCm1, double lorentzCm1, double periodCm1, double sinSquaredHalfTheta,
                              boolean second) {
+        return imagesOnly(xCm1, lorentzCm1, periodCm1, sinSquaredHalfTheta, second, SERIES_TERMS);
+    }
+
+    /**
+     * Terms of the series in {@link #imagesOnly} enough for every |x| ≤ R: the k-th term is below |t|^(2k)·ζ(2k)·4k²
+     * with |t|² ≤ (R² + γ²)/P², so terms stop once |t|^(2k) ≤ 10⁻²⁰.
+     */
+    static int seriesTerms(double cutoffCm1, double lorentzCm1, double periodCm1) {
+        double t2 = (cutoffCm1 * cutoffCm1 + lorentzCm1 * lorentzCm1) / (periodCm1 * periodCm1);
+        if (!(t2 > 0) || Math.PI * Math.PI * t2 > 1) {
+            return SERIES_TERMS;
+        }
+        int k = (int) Math.ceil(-20 / Math.log10(t2)) + 2;
+        return Math.max(3, Math.min(SERIES_TERMS, k));
+    }
+
+    /** {@link #imagesOnly} with the series cut after {@code terms} terms. */
+    private static double imagesOnly(double xCm1, double lorentzCm1, double periodCm1, double sinSquaredHalfTheta,
+                                     boolean second, int terms) {
         double tr = xCm1 / periodCm1;
         double ti = -lorentzCm1 / periodCm1;
         // t = w/π = (x − iγ)/P
@@ -263,7 +283,7 @@ final class AnalyticKernels {
         // Horner in t²: Σ a_k (t²)^j with a = ζ(2k) (g) or ζ(2k)(2k−1)(2k−2) from k = 2 (g'')
         double sr = 0;
         double si = 0;
-        for (int k = SERIES_TERMS; k >= (second ? 2 : 1); k--) {
+        for (int k = terms; k >= (second ? 2 : 1); k--) {
             double a = second ? ZETA_EVEN[k] * (2 * k - 1) * (2 * k - 2) : ZETA_EVEN[k];
             double nr = sr * t2r - si * t2i + a;
             si = sr * t2i + si * t2r;

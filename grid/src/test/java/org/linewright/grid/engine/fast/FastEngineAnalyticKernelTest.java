@@ -56,9 +56,11 @@ class FastEngineAnalyticKernelTest {
         Map<String, String> plan = run(grid, chunk, wings, 2, true, sigma, estimate);
         int analytic = Integer.parseInt(plan.get("fast.analytic_slices"));
         assertTrue(analytic > 0 && analytic == Integer.parseInt(plan.get("fast.slices")), plan.toString());
-        // slices + two transforms per corrected Lorentz node + the inverse: fewer than the 2·slices + 1 of before
+        // slices + one or two transforms per corrected Lorentz node + the inverse: fewer than 2·slices + 1
         int corrections = Integer.parseInt(plan.get("fast.correction_kernels"));
-        assertEquals(analytic + 2 * corrections + 1, Integer.parseInt(plan.get("fast.ffts")));
+        int ffts = Integer.parseInt(plan.get("fast.ffts"));
+        assertTrue(ffts >= analytic + corrections + 1 && ffts <= analytic + 2 * corrections + 1, plan.toString());
+        assertTrue(ffts < 2 * analytic + 1, plan.toString());
 
         double[] direct = FastEngineAccuracyTest.direct(grid, chunk, wings);
         boolean[] nearEdge = FastEngineAccuracyTest.edgePoints(grid, chunk, cutoff, 4 * STEP);
