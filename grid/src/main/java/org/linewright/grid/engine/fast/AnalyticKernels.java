@@ -14,11 +14,12 @@ package org.linewright.grid.engine.fast;
  * transform above is that of the untruncated profile plus its images around the ring. For R ≫ αD the Voigt profile
  * beyond R is V = L + (s²/2)·L'' + O(s⁴·L⁗), s² = αD²/(2 ln 2) the Gaussian's variance: the expansion of the
  * convolution L ⊗ G in the Gaussian's moments, which is the large-argument asymptotic series of the Faddeeva
- * function (Abramowitz &amp; Stegun, Handbook of Mathematical Functions, 1964, 7.1.23). So the difference between the
+ * function (Abramowitz &amp; Stegun, Handbook of Mathematical Functions, 1964, §7.1, the asymptotic expansion of the
+ * complementary error function). So the difference between the
  * untruncated-periodised and the truncated kernel is c_γ + (s²/2)·d_γ with kernels that depend on γL only:
  * c_γ(x) = Σ_m L(x + mP) − [|x| ≤ R]·(L(x) − p·L(R)) and d_γ the same with L'' (p = 1 with pedestal removal).
- * The periodic image sum has the closed form (partial fractions of the cotangent, e.g. Gradshteyn &amp; Ryzhik
- * 1.445.2 in the form of the Poisson kernel) S_P(x) = (1/P)·sinh ε / (cosh ε − cos θ), ε = 2πγ/P, θ = 2πx/P,
+ * The periodic image sum has the closed form (the partial-fraction expansion of the cotangent, Σ_m 1/(z + mP) =
+ * (π/P)·cot(πz/P), Abramowitz &amp; Stegun §4.3, taken at z = x − iγ) S_P(x) = (1/P)·sinh ε / (cosh ε − cos θ), ε = 2πγ/P, θ = 2πx/P,
  * evaluated as sinh ε / (P·(2 sinh²(ε/2) + 2 sin²(θ/2))) to avoid the cancellation of cosh ε − cos θ when both
  * are near 1; S_P'' is its second derivative in x (below). The neglected remainder, the s⁴ term, is bounded by
  * {@link #wingModelError}.
@@ -41,8 +42,8 @@ final class AnalyticKernels {
      * The DFT of the samples of the Voigt profile periodised over L·h, K_k = (1/h)·Σ_j F((k + jL)/(L·h)),
      * k = 0 … L/2 (the transform is real and even), F(f) = exp(−π²f²αD²/ln2 − 2πγL|f|). The terms are summed in
      * order of n = |k + jL| in runs of {@value #RESEED}: with E(n) = e^(−a·n² − b·n), term n₀ + i is
-     * E(n₀)·e^(−a·i²)·W^i, W = e^(−2a·n₀ − b) (one table of e^(−a·i²) per call, two {@link Math#exp} per run), until the geometric bound E_n/(1 − R_n) of the rest is below
-     * {@link #ALIAS_TAIL}. Relative accuracy about 10⁻¹³ per term.
+     * E(n₀)·e^(−a·i²)·W^i, W = e^(−2a·n₀ − b) (one table of e^(−a·i²) per call, two {@link Math#exp} per run),
+     * until the geometric bound E(n)/(1 − E(n+1)/E(n)) of the rest is below {@link #ALIAS_TAIL}. Relative accuracy about 10⁻¹³ per term.
      *
      * @param dopplerCm1 αD &gt; 0
      * @param lorentzCm1 γL ≥ 0
@@ -246,7 +247,8 @@ final class AnalyticKernels {
      * The images' part of the periodic sums at x ∈ [0, P/2): Σ_{m≠0} L(x + mP) = S_P − L, or the same of L''. With
      * w = π(x − iγ)/P, Σ_m 1/(z + mP) = (π/P)·cot(πz/P) (the partial-fraction expansion of the cotangent), so
      * S_P − L = (1/P)·Im g(w) and S_P'' − L'' = (1/P)(π/P)²·Im g''(w), g(w) = cot w − 1/w =
-     * −(2/π)·Σ_k ζ(2k)·(w/π)^(2k−1) (Abramowitz &amp; Stegun 4.3.70 with 23.2.16), summed for |w| ≤ 1 (terms falling by
+     * −(2/π)·Σ_k ζ(2k)·(w/π)^(2k−1) (the cotangent's power series, Abramowitz &amp; Stegun §4.3, with its Bernoulli
+     * numbers written as ζ(2k), §23.2), summed for |w| ≤ 1 (terms falling by
      * |w/π|² ≤ 0.1); for larger |w| the closed forms minus L lose at most a few bits.
      */
     static double imagesOnly(double xCm1, double lorentzCm1, double periodCm1, double sinSquaredHalfTheta,

@@ -84,9 +84,10 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * (s² = αD²/(2 ln 2); the asymptotic series of the Faddeeva function), so that difference is c_γ + (s²/2)·d_γ with
  * two kernels that depend on the Lorentz node γ only ({@link AnalyticKernels#correctionKernel}, closed-form
  * periodic sums). The slices sharing a Lorentz node are run one after the other: c_γ and d_γ are transformed once
- * at the node's first slice, and each slice's kernel transform is K_s − Ĉ_γ − (s²/2)·D̂_γ. FFTs per (p, T): slices + 2·(Lorentz nodes with γ &gt; 0) + 1 instead of
- * 2·slices + 1 (the D̂_γ transform is left out where its effect is below {@value #NEGLIGIBLE_CURVATURE} of the
- * line peak, counted in the estimate). The estimate adds the remainder's bound 30·s⁴/R⁴ ({@link AnalyticKernels#wingModelError}, at the
+ * at the node's first slice, and each slice's kernel transform is K_s − Ĉ_γ − (s²/2)·D̂_γ. FFTs per (p, T):
+ * slices + 2·(Lorentz nodes with γ &gt; 0) + 1 instead of 2·slices + 1 (the D̂_γ transform is left out where its
+ * effect is below {@value #NEGLIGIBLE_CURVATURE} of the line peak, {@link #curvatureBound}, counted in the
+ * estimate). The estimate adds the remainder's bound 30·s⁴/R⁴ ({@link AnalyticKernels#wingModelError}, at the
  * largest αD) and the neglected alias tail; the result agrees with the sampled path to about 10⁻⁸ relative
  * (tested).</li>
  * <li><i>Sampled</i> (everything else: χ families, width-dependent cutoffs, no cutoff, αD = 0, R not ≫ αD, or an
