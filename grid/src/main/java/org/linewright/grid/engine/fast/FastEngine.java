@@ -154,7 +154,14 @@ public final class FastEngine implements CrossSectionEngine {
     private static final int BOTH = 0;
     private static final int DOPPLER_DOMINATED = 1;
     private static final int LORENTZ_ONLY = 2;
-    private static final String[] FAMILY_NAMES = {"voigt", "doppler", "lorentz"};
+    private static final int LORENTZ_DOMINATED = 3;
+    /** Width kinds; a family index is a kind, plus this for lines with the χ factor. */
+    private static final int KINDS = 4;
+    private static final String[] FAMILY_NAMES = {"voigt", "doppler", "lorentz", "lorentz-dominated"};
+    /** Fewest Doppler nodes per Lorentz node for which the analytic path saves FFTs. */
+    static final int MIN_DOPPLER_NODES_SHARING = 3;
+    /** Largest γL/αD searched for the Lorentz-dominated family's lower bound. */
+    static final double MAX_SPLIT_RATIO = 1e6;
     /** Smallest Lorentz floor searched, relative to the smallest Doppler HWHM. */
     static final double MIN_FLOOR_RATIO = 1e-9;
     /**
@@ -164,8 +171,8 @@ public final class FastEngine implements CrossSectionEngine {
     static final double NEGLIGIBLE_CURVATURE = 1e-13;
     /** Smallest cutoff, in Doppler HWHM, for the analytic kernel path (its wing model needs R ≫ αD). */
     static final double MIN_CUTOFF_OVER_DOPPLER = 10;
-    /** Families: three width kinds, each without and with the χ factor. */
-    private static final int FAMILIES = 6;
+    /** Families: four width kinds, each without and with the χ factor. */
+    private static final int FAMILIES = 2 * KINDS;
 
     private final int threads;
     private final WingTreatment wings;
@@ -188,6 +195,8 @@ public final class FastEngine implements CrossSectionEngine {
     /** That family's Lorentz floor γ_f and log step δ. */
     private double lowFloorCm1;
     private double lowLogStep;
+    /** Lines with αD &gt; 0 and γL/αD at least this go to the Lorentz-dominated family (infinite: none). */
+    private double highSplitRatio = Double.POSITIVE_INFINITY;
     private double estimate;
     /** sin²(πn/L) table of the last FFT length on the analytic path. */
     private double[] sinSquared;
@@ -297,6 +306,8 @@ public final class FastEngine implements CrossSectionEngine {
         /** The floored Lorentz axis's first non-zero node, 0 when the axis is not floored. */
         double lorentzFloorCm1;
         int firstSlice;
+        /** Smallest γL/αD of the family's lines (+∞ for pure Lorentz lines). */
+        double minLorentzOverDoppler = Double.POSITIVE_INFINITY;
         /** Whether this family's slices take the analytic kernel transform with wing correction. */
         boolean analytic;
     }
@@ -318,6 +329,7 @@ public final class FastEngine implements CrossSectionEngine {
         }
         // first all lines with αD > 0 in one family, to choose the internal step and the split
         lowSplitCm1 = 0;
+        highSplitRatio = Double.POSITIVE_INFINITY;
         Family[] families = gatherFamilies();
 
         // internal uniform grid: the position error gets a quarter of the tolerance (twice on resolving-power grids,
@@ -332,7 +344,9 @@ public final class FastEngine implements CrossSectionEngine {
         double widthBudget = widthBudget(families, h, uniform);
         // Doppler-dominated lines (γL below the split, pure Doppler included) form a family of their own with a
         // floored Lorentz axis; the others keep a log-spaced Lorentz axis that starts at the split
-        chooseLorentzSplit(families[BOTH], families[BOTH + 3], widthBudget);
+        chooseLorentzSplit(families[BOTH], families[BOTH + KINDS], widthBudget);
+        // Lorentz-dominated lines (γL/αD above a ratio) form a family with a single Doppler node
+        chooseDopplerSplit(families[BOTH], families[BOTH + KINDS], widthBudget);
         families = gatherFamilies();
         double positionError = 0;
         for (Family f : families) {
@@ -395,7 +409,7 @@ public final class FastEngine implements CrossSectionEngine {
         double analyticCutoff = analyticCutoffCm1();
         double wingError = 0;
         boolean anyAnalytic = false;
-        for (int kind : new int[] {BOTH, DOPPLER_DOMINATED}) {
+        for (int kind : new int[] {BOTH, DOPPLER_DOMINATED, LORENTZ_DOMINATED}) {
             Family f = families[kind];
             if (f != null && isAnalytic(f, analyticCutoff)) {
                 f.analytic = true;
@@ -482,7 +496,7 @@ public final class FastEngine implements CrossSectionEngine {
         for (int fi = 0; fi < families.length; fi++) {
             Family f = families[fi];
             if (f != null) {
-                String key = "fast.family." + FAMILY_NAMES[fi % 3] + (fi >= 3 ? "-chi" : "");
+                String key = "fast.family." + FAMILY_NAMES[fi % KINDS] + (fi >= KINDS ? "-chi" : "");
                 plan.put(key + ".lines", Integer.toString(f.lines));
                 plan.put(key + ".doppler_nodes", Integer.toString(f.doppler.size()));
                 plan.put(key + ".doppler_log_step", Double.toString(f.doppler.logStep()));
@@ -502,7 +516,7 @@ public final class FastEngine implements CrossSectionEngine {
             Family f = families[kind];
             if (f == null) {
                 f = new Family();
-                f.kernel = kind >= 3 ? wingKernel : plainKernel;
+                f.kernel = kind >= KINDS ? wingKernel : plainKernel;
                 families[kind] = f;
             }
             f.lines++;
@@ -510,6 +524,9 @@ public final class FastEngine implements CrossSectionEngine {
             f.alphaMax = Math.max(f.alphaMax, dopplerCm1[i]);
             f.gammaMin = Math.min(f.gammaMin, lorentzCm1[i]);
             f.gammaMax = Math.max(f.gammaMax, lorentzCm1[i]);
+            if (dopplerCm1[i] > 0) {
+                f.minLorentzOverDoppler = Math.min(f.minLorentzOverDoppler, lorentzCm1[i] / dopplerCm1[i]);
+            }
         }
         return families;
     }
@@ -565,6 +582,39 @@ public final class FastEngine implements CrossSectionEngine {
         }
     }
 
+    /**
+     * Sets the ratio γL/αD from which lines with αD &gt; 0 form the Lorentz-dominated family, whose Doppler axis is a
+     * single node: the smallest ratio r ≤ {@value #MAX_SPLIT_RATIO} at which one node for the whole αD range of
+     * those lines (both χ kinds) keeps the error within half the width budget
+     * ({@link FastErrorModel#singleDopplerNodeError}; the Voigt profile depends on αD less and less as γL/αD
+     * grows, about as (αD/γL)²). None when no such ratio exists or no line reaches it.
+     */
+    private void chooseDopplerSplit(Family plain, Family withChi, double budget) {
+        highSplitRatio = Double.POSITIVE_INFINITY;
+        double alphaMin = Double.POSITIVE_INFINITY;
+        double alphaMax = 0;
+        double gammaMax = 0;
+        for (Family f : new Family[] {plain, withChi}) {
+            if (f != null) {
+                alphaMin = Math.min(alphaMin, f.alphaMin);
+                alphaMax = Math.max(alphaMax, f.alphaMax);
+                gammaMax = Math.max(gammaMax, f.gammaMax);
+            }
+        }
+        if (!(alphaMax > 0) || !(gammaMax > 0)) {
+            return;
+        }
+        double lo = alphaMin;
+        double hi = alphaMax;
+        // error grows with 1/r: the largest 1/r within half the budget
+        double inverse = FastErrorModel.largestStep(x -> FastErrorModel.singleDopplerNodeError(lo, hi, 1 / x),
+                budget / 2, 1 / MAX_SPLIT_RATIO, 1.0);
+        double ratio = 1 / inverse;
+        if (FastErrorModel.singleDopplerNodeError(lo, hi, ratio) <= budget / 2 && gammaMax >= ratio * alphaMin) {
+            highSplitRatio = ratio;
+        }
+    }
+
     /** Chooses each family's width axes: the Doppler axis gets half the budget, the Lorentz axis the rest. */
     private void planAxes(Family[] families, double budget) {
         for (int family = 0; family < FAMILIES; family++) {
@@ -572,9 +622,13 @@ public final class FastEngine implements CrossSectionEngine {
             if (f == null) {
                 continue;
             }
-            int kind = family % 3;
+            int kind = family % KINDS;
             if (kind == LORENTZ_ONLY) {
                 f.doppler = WidthAxis.exact(0.0);
+            } else if (kind == LORENTZ_DOMINATED) {
+                // one Doppler node, in the middle of the family's αD² range; error measured at its smallest γL/αD
+                f.doppler = WidthAxis.exact(FastErrorModel.singleDopplerNode(f.alphaMin, f.alphaMax));
+                f.dopplerError = FastErrorModel.singleDopplerNodeError(f.alphaMin, f.alphaMax, f.minLorentzOverDoppler);
             } else {
                 // worst case for the Doppler axis: the most Gaussian line, smallest γL/αD
                 double ratio = f.gammaMin / f.alphaMax;
@@ -618,11 +672,17 @@ public final class FastEngine implements CrossSectionEngine {
         return r * alphaMinCm1;
     }
 
-    /** Width kind (Voigt, Doppler-dominated, pure Lorentz), plus 3 for lines with the χ factor. */
+    /**
+     * Width kind (Voigt, Doppler-dominated, pure Lorentz, Lorentz-dominated), plus {@value #KINDS} for lines with
+     * the χ factor.
+     */
     private int familyOf(int line) {
         // Doppler-dominated lines (pure Doppler included) below the split get the floored Lorentz axis
-        int kind = dopplerCm1[line] == 0 ? LORENTZ_ONLY : (lorentzCm1[line] < lowSplitCm1 ? DOPPLER_DOMINATED : BOTH);
-        return chi[line] ? kind + 3 : kind;
+        double a = dopplerCm1[line];
+        double g = lorentzCm1[line];
+        int kind = a == 0 ? LORENTZ_ONLY
+                : (g < lowSplitCm1 ? DOPPLER_DOMINATED : (g >= highSplitRatio * a ? LORENTZ_DOMINATED : BOTH));
+        return chi[line] ? kind + KINDS : kind;
     }
 
     /** Smallest m ≤ {@link #MAX_OVERSAMPLING} whose position error is within the share for every family. */
@@ -1036,13 +1096,15 @@ public final class FastEngine implements CrossSectionEngine {
     }
 
     /**
-     * Whether a family takes the analytic path: a width-independent finite cutoff R, no χ factor, αD &gt; 0, and
+     * Whether a family takes the analytic path: at least {@value #MIN_DOPPLER_NODES_SHARING} Doppler nodes sharing
+     * each Lorentz node (each node's correction costs up to two FFTs, so with fewer the sampled kernels are
+     * cheaper), a width-independent finite cutoff R, no χ factor, αD &gt; 0, and
      * R ≫ αD: αD,max ≤ R/{@value #MIN_CUTOFF_OVER_DOPPLER} and the wing model's remainder
      * ({@link AnalyticKernels#wingModelError}) within a hundredth of the tolerance.
      */
     private boolean isAnalytic(Family f, double cutoffCm1) {
         return analyticKernels && !Double.isNaN(cutoffCm1) && f.kernel == plainKernel && f.kernel.chiFactor() == null
-                && f.alphaMin > 0 && f.alphaMax * MIN_CUTOFF_OVER_DOPPLER <= cutoffCm1
+                && f.doppler.size() >= MIN_DOPPLER_NODES_SHARING && f.alphaMin > 0 && f.alphaMax * MIN_CUTOFF_OVER_DOPPLER <= cutoffCm1
                 && AnalyticKernels.wingModelError(f.alphaMax, cutoffCm1) <= tolerance / 100;
     }
 
