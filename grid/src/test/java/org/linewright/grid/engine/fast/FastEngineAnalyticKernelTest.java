@@ -94,6 +94,30 @@ class FastEngineAnalyticKernelTest {
         assertTrue(estimate[0] <= TOLERANCE, "estimate " + estimate[0]);
     }
 
+    @ParameterizedTest(name = "cutoff {0}")
+    @CsvSource({"25", "0"})
+    void voigtAndLorentzDominatedFamiliesTogether(double cutoff) {
+        // γL from 0.02 to 2 cm⁻¹ against αD 0.002–0.004 cm⁻¹: part Voigt family, part Lorentz-dominated (one Doppler
+        // node); against direct summation, cutoff 25 cm⁻¹ or none (0)
+        WingTreatment wings = WingTreatment.defaults()
+                .withCutoff(cutoff > 0 ? WingCutoff.fixed(cutoff) : WingCutoff.none());
+        WavenumberGrid grid = WavenumberGrid.uniform(1000, 1006, STEP);
+        LineChunk chunk = FastEngineAccuracyTest.lines(25, 120, 999, 1007, 0.002, 0.004, 0.02, 2.0);
+        double[] sigma = new double[grid.size()];
+        double[] estimate = new double[1];
+        Map<String, String> plan = run(grid, chunk, wings, 2, true, sigma, estimate);
+        assertEquals("1", plan.get("fast.family.lorentz-dominated.doppler_nodes"), plan.toString());
+        assertTrue(Integer.parseInt(plan.get("fast.family.voigt.lines")) > 0, plan.toString());
+        double[] direct = FastEngineAccuracyTest.direct(grid, chunk, wings);
+        boolean[] nearEdge = cutoff > 0 ? FastEngineAccuracyTest.edgePoints(grid, chunk, cutoff, 4 * STEP) : null;
+        double observed = FastEngineAccuracyTest.maxRelativeError(sigma, direct, nearEdge);
+        System.out.printf(java.util.Locale.ROOT, "two families, cutoff %s: observed %.2e, estimate %.2e, slices %s%n",
+                cutoff, observed, estimate[0], plan.get("fast.slices"));
+        assertTrue(observed <= TOLERANCE, "observed " + observed + ", plan " + plan);
+        assertTrue(observed <= estimate[0], "observed " + observed + " > estimate " + estimate[0]);
+        assertTrue(estimate[0] <= TOLERANCE, "estimate " + estimate[0]);
+    }
+
     @Test
     void analyticAndSampledKernelsAgreeFarBelowTheTolerance() {
         // the two paths differ only by the wing model's remainder and round-off: near 10⁻⁹ relative, not 10⁻³
