@@ -86,7 +86,7 @@ class FastEngineAnalyticKernelTest {
         if (pedestal && gammaHi > 3 * cutoff) {
             // γL ≫ R with the pedestal removed: each line is the small difference V(x) − V(R), which amplifies the
             // width interpolation's relative error by about V(0)/(V(0) − V(R)) ≈ (γL/R)²; neither kernel path
-            // models that (observed 3.1e-3 on both), so only the agreement of the two paths is asserted here
+            // models that (observed 2–3e-3 on both), so only the agreement of the two paths is asserted here
             return;
         }
         assertTrue(observed <= TOLERANCE, "observed " + observed + ", plan " + plan);
