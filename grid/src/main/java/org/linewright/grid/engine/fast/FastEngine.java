@@ -13,7 +13,10 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import org.jtransforms.fft.DoubleFFT_1D;
 import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.voigt.VoigtProfile;
 import org.linewright.broadening.wings.ChiFactorKind;
+import org.linewright.broadening.wings.FixedCutoff;
+import org.linewright.broadening.wings.PressureScaledCutoff;
 import org.linewright.broadening.wings.WingKernel;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.engine.CrossSectionEngine;
@@ -68,13 +71,30 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * the whole range, and σ at the output points by six-point Lagrange interpolation (its error is the same position
  * error, counted twice).
  *
- * <p><b>Wings.</b> Each slice's kernel is the profile sampled in real space at multiples of h and truncated exactly
- * as the exact engine truncates a line ({@link WingKernel#addLine}: |Δν| ≤ d, pedestal V(d) subtracted when asked),
- * with d taken at the slice's node widths; its FFT is taken numerically. (The paper multiplies by the analytic
- * transform exp(−π²f²αD²/ln2 − 2πγL|f|) instead; that is the transform of the untruncated profile, and sampled at the
- * DFT frequencies it yields the periodic sum of the profile, so wings wrap around the buffer. The sampled kernel
- * costs one more FFT per slice but has neither problem; its transform is checked against the analytic one in the
- * tests.) So the result equals the exact engine's
+ * <p><b>Wings.</b> Each slice's kernel is the profile truncated exactly as the exact engine truncates a line
+ * ({@link WingKernel#addLine}: |Δν| ≤ d, pedestal V(d) subtracted when asked), with d taken at the slice's node
+ * widths. Two ways to its transform:
+ * <ul>
+ * <li><i>Analytic</i> (families with αD &gt; 0, no χ factor, a finite cutoff R that does not depend on the widths —
+ * fixed or pressure-scaled — and R ≫ αD: αD ≤ R/{@value #MIN_CUTOFF_OVER_DOPPLER} and the wing model's remainder
+ * within ε/100). The transform of the untruncated profile, exp(−π²f²αD²/ln2 − 2πγL|f|) (the paper's), sampled at
+ * the DFT frequencies with its aliases summed ({@link AnalyticKernels#voigtTransform}: no FFT), is that of the
+ * profile periodised around the buffer. It differs from the truncated kernel by the wings beyond R, their images
+ * around the ring and the pedestal box; beyond R ≫ αD the profile is L + (s²/2)·L'' to relative O(s⁴/R⁴)
+ * (s² = αD²/(2 ln 2); the asymptotic series of the Faddeeva function), so that difference is c_γ + (s²/2)·d_γ with
+ * two kernels that depend on the Lorentz node γ only ({@link AnalyticKernels#correctionKernel}, closed-form
+ * periodic sums). The slices sharing a Lorentz node are run one after the other: c_γ and d_γ are transformed once
+ * at the node's first slice, and each slice's kernel transform is K_s − Ĉ_γ − (s²/2)·D̂_γ. FFTs per (p, T):
+ * slices + 2·(Lorentz nodes with γ &gt; 0) + 1 instead of 2·slices + 1 (the D̂_γ transform is left out where its
+ * effect is below {@value #NEGLIGIBLE_CURVATURE} of the line peak, {@link #curvatureBound}, counted in the
+ * estimate). The estimate adds the remainder's bound 30·s⁴/R⁴ ({@link AnalyticKernels#wingModelError}, at the
+ * largest αD) and the neglected alias tail; the result agrees with the sampled path to about 10⁻⁸ relative
+ * (tested).</li>
+ * <li><i>Sampled</i> (everything else: χ families, width-dependent cutoffs, no cutoff, αD = 0, R not ≫ αD, or an
+ * alias sum that does not converge within {@value AnalyticKernels#MAX_PERIODS} periods): the profile sampled in
+ * real space at multiples of h, cut and de-pedestalled, and transformed numerically (one more FFT per slice).</li>
+ * </ul>
+ * So the result equals the exact engine's
  * truncated lines to within the tolerance, with two documented differences: (1) a line's cutoff edge is spread over
  * its six position nodes, so at points within 3h of a line's cutoff distance the truncation step is blurred (no
  * such points without a cutoff, and only a kink with pedestal removal); (2) for a width-dependent cutoff
@@ -88,9 +108,18 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * added as zero, since a cross section is never negative; where no line reaches, σ is round-off (about 10⁻¹⁶ of the
  * largest line peak) rather than exactly zero.
  *
- * <p><b>Lines.</b> Families by width kind, each with its own axes: αD &gt; 0 and γL ≥ γ_s (Voigt); αD &gt; 0 and
- * γL &lt; γ_s (Doppler-dominated, pure Doppler included, floored Lorentz axis); αD = 0 (pure Lorentz); each split
- * again by the χ flag. Lines with S = 0 are skipped.
+ * <p><b>Lines.</b> Families by width kind, each with its own axes: αD &gt; 0 and γ_s ≤ γL &lt; r_L·αD (Voigt);
+ * αD &gt; 0 and γL &lt; γ_s (Doppler-dominated, pure Doppler included, floored Lorentz axis); αD &gt; 0 and
+ * γL ≥ r_L·αD (Lorentz-dominated, a single Doppler node); αD = 0 (pure Lorentz); each split again by the χ flag.
+ * Lines with S = 0 are skipped.
+ *
+ * <p><b>The Lorentz-dominated family.</b> Where γL ≫ αD the profile depends on αD only through the small terms of
+ * its expansion in the Gaussian's moments, V = L + (s²/2)·L'' + …, about (αD/γL)² relative, so such lines need no
+ * Doppler axis: one node at the middle of their αD² range, √((αD,min² + αD,max²)/2). r_L is the smallest ratio
+ * whose measured error ({@link FastErrorModel#singleDopplerNodeError}, over the αD range of all lines with αD &gt; 0,
+ * at γL = r_L·αD) is within half the width budget; the family's Doppler error in the estimate is measured at its
+ * own αD range and smallest γL/αD, its Lorentz axis chosen like the Voigt family's. At high pressure nearly every
+ * line is in it: one Doppler node instead of six or seven (60 → 16 slices on the 100 atm test set).
  *
  * <p><b>Threads and determinism.</b> The non-empty slices are split into {@value #BLOCKS} fixed contiguous blocks;
  * each block sums its slices' spectra in slice order, and the blocks are summed in block order, so σ is bitwise the
@@ -98,7 +127,9 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * because this engine already runs slices in parallel.
  *
  * <p><b>Memory.</b> {@link #accumulate} keeps the lines (33 bytes each); {@link #finish} needs 124 bytes per
- * line for the distribution weights plus ({@value #BLOCKS} + 2·threads + 1)·L doubles, where L ≈ m·N + 2K (N output
+ * line for the distribution weights plus ({@value #BLOCKS} + 2·threads + 1)·L doubles (on the analytic path
+ * 3·threads: two half-length transforms per thread for the Lorentz node's corrections, plus L/2 for a sin²
+ * table), where L ≈ m·N + 2K (N output
  * points, K the cutoff in internal steps; without a cutoff K spans every line-to-point distance), rounded up to a
  * power of two. {@link #finish} refuses with an {@link InputException} naming the figures when this exceeds the
  * heap.
@@ -132,15 +163,30 @@ public final class FastEngine implements CrossSectionEngine {
     private static final int BOTH = 0;
     private static final int DOPPLER_DOMINATED = 1;
     private static final int LORENTZ_ONLY = 2;
-    private static final String[] FAMILY_NAMES = {"voigt", "doppler", "lorentz"};
+    private static final int LORENTZ_DOMINATED = 3;
+    /** Width kinds; a family index is a kind, plus this for lines with the χ factor. */
+    private static final int KINDS = 4;
+    private static final String[] FAMILY_NAMES = {"voigt", "doppler", "lorentz", "lorentz-dominated"};
+    /** Fewest Doppler nodes per Lorentz node for which the analytic path saves FFTs. */
+    static final int MIN_DOPPLER_NODES_SHARING = 3;
+    /** Largest γL/αD searched for the Lorentz-dominated family's lower bound. */
+    static final double MAX_SPLIT_RATIO = 1e6;
     /** Smallest Lorentz floor searched, relative to the smallest Doppler HWHM. */
     static final double MIN_FLOOR_RATIO = 1e-9;
-    /** Families: three width kinds, each without and with the χ factor. */
-    private static final int FAMILIES = 6;
+    /**
+     * Curvature corrections whose effect is below this fraction of a line's peak are left out: far below the
+     * transforms' round-off (64·2⁻⁵²·log₂L ≈ 3×10⁻¹³ of the peak) and 10⁻⁷ relative at the criterion's depth.
+     */
+    static final double NEGLIGIBLE_CURVATURE = 1e-13;
+    /** Smallest cutoff, in Doppler HWHM, for the analytic kernel path (its wing model needs R ≫ αD). */
+    static final double MIN_CUTOFF_OVER_DOPPLER = 10;
+    /** Families: four width kinds, each without and with the χ factor. */
+    private static final int FAMILIES = 2 * KINDS;
 
     private final int threads;
     private final WingTreatment wings;
     private final double tolerance;
+    private final boolean analyticKernels;
     private final ExecutorService pool;
 
     private WavenumberGrid grid;
@@ -158,7 +204,11 @@ public final class FastEngine implements CrossSectionEngine {
     /** That family's Lorentz floor γ_f and log step δ. */
     private double lowFloorCm1;
     private double lowLogStep;
+    /** Lines with αD &gt; 0 and γL/αD at least this go to the Lorentz-dominated family (infinite: none). */
+    private double highSplitRatio = Double.POSITIVE_INFINITY;
     private double estimate;
+    /** sin²(πn/L) table of the last FFT length on the analytic path. */
+    private double[] sinSquared;
     private final Map<String, String> plan = new LinkedHashMap<>();
 
     /**
@@ -168,6 +218,17 @@ public final class FastEngine implements CrossSectionEngine {
      * @throws InputException for a tolerance out of range
      */
     public FastEngine(int threads, WingTreatment wings, double tolerance) {
+        this(threads, wings, tolerance, true);
+    }
+
+    /**
+     * @param threads          worker threads, at least 1
+     * @param wings            wing treatment
+     * @param tolerance        relative tolerance, in (0, 0.1]
+     * @param analyticKernels  whether slices may take the closed-form kernel transforms (false: every kernel sampled
+     *                         and transformed numerically, the reference for tests and benchmarks)
+     */
+    FastEngine(int threads, WingTreatment wings, double tolerance, boolean analyticKernels) {
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be at least 1, got " + threads);
         }
@@ -177,6 +238,7 @@ public final class FastEngine implements CrossSectionEngine {
         this.threads = threads;
         this.wings = wings;
         this.tolerance = tolerance;
+        this.analyticKernels = analyticKernels;
         // slices already run in parallel here; the FFT's own threads would only compete (and are process-wide)
         ConcurrencyUtils.setNumberOfThreads(1);
         this.pool = Executors.newFixedThreadPool(threads, r -> {
@@ -253,6 +315,10 @@ public final class FastEngine implements CrossSectionEngine {
         /** The floored Lorentz axis's first non-zero node, 0 when the axis is not floored. */
         double lorentzFloorCm1;
         int firstSlice;
+        /** Smallest γL/αD of the family's lines (+∞ for pure Lorentz lines). */
+        double minLorentzOverDoppler = Double.POSITIVE_INFINITY;
+        /** Whether this family's slices take the analytic kernel transform with wing correction. */
+        boolean analytic;
     }
 
     @Override
@@ -272,6 +338,7 @@ public final class FastEngine implements CrossSectionEngine {
         }
         // first all lines with αD > 0 in one family, to choose the internal step and the split
         lowSplitCm1 = 0;
+        highSplitRatio = Double.POSITIVE_INFINITY;
         Family[] families = gatherFamilies();
 
         // internal uniform grid: the position error gets a quarter of the tolerance (twice on resolving-power grids,
@@ -286,7 +353,9 @@ public final class FastEngine implements CrossSectionEngine {
         double widthBudget = widthBudget(families, h, uniform);
         // Doppler-dominated lines (γL below the split, pure Doppler included) form a family of their own with a
         // floored Lorentz axis; the others keep a log-spaced Lorentz axis that starts at the split
-        chooseLorentzSplit(families[BOTH], families[BOTH + 3], widthBudget);
+        chooseLorentzSplit(families[BOTH], families[BOTH + KINDS], widthBudget);
+        // Lorentz-dominated lines (γL/αD above a ratio) form a family with a single Doppler node
+        chooseDopplerSplit(families[BOTH], families[BOTH + KINDS], widthBudget);
         families = gatherFamilies();
         double positionError = 0;
         for (Family f : families) {
@@ -346,7 +415,21 @@ public final class FastEngine implements CrossSectionEngine {
         int fftLength = fftLength((int) needed);
         int offset = (int) reach + 4;
         // refuse up front, with the figures, rather than fail half-way for want of heap
-        long bytes = ((long) Math.min(BLOCKS, slices) + 2L * threads + 1) * fftLength * Double.BYTES
+        double analyticCutoff = analyticCutoffCm1();
+        double wingError = 0;
+        boolean anyAnalytic = false;
+        for (int kind : new int[] {BOTH, DOPPLER_DOMINATED, LORENTZ_DOMINATED}) {
+            Family f = families[kind];
+            if (f != null && isAnalytic(f, analyticCutoff)) {
+                f.analytic = true;
+                anyAnalytic = true;
+                wingError = Math.max(wingError, AnalyticKernels.wingModelError(f.alphaMax, analyticCutoff));
+            }
+        }
+        // per thread: lines, kernel and, on the analytic path, two half-length node corrections; the sin² table
+        long perThread = anyAnalytic ? 3 : 2;
+        long bytes = ((long) Math.min(BLOCKS, slices) + perThread * threads + 1) * fftLength * Double.BYTES
+                + (anyAnalytic ? (long) (fftLength / 2 + 1) * Double.BYTES : 0)
                 + (long) count * BYTES_PER_LINE;
         long heap = Runtime.getRuntime().maxMemory();
         if (bytes > heap) {
@@ -359,7 +442,10 @@ public final class FastEngine implements CrossSectionEngine {
         Distribution dist = distribute(families, origin, h, offset, fftLength);
 
         // slices in fixed blocks, spectra summed in a fixed order
-        double[][] blockSpectra = convolveSlices(families, sliceWidths, sliceReach, dist, h, fftLength);
+        double[] sinSquared = anyAnalytic ? sinSquaredTable(fftLength) : null;
+        Convolution conv = convolveSlices(families, sliceWidths, sliceReach, dist, h, fftLength, analyticCutoff,
+                sinSquared);
+        double[][] blockSpectra = conv.spectra;
         double[] total = blockSpectra[0];
         for (int b = 1; b < blockSpectra.length; b++) {
             double[] add = blockSpectra[b];
@@ -398,23 +484,35 @@ public final class FastEngine implements CrossSectionEngine {
             }
         }
         double roundOff = 64 * Math.ulp(1.0) * (Math.log(fftLength) / Math.log(2)) / FastErrorModel.DEPTH;
-        estimate = widthError + positionTotal + roundOff;
+        // the analytic path: the wing model's remainder and the alias tail left out of the transforms
+        double analyticError = conv.analyticSlices > 0 ? wingError + conv.aliasError + conv.curvatureError : 0;
+        estimate = widthError + positionTotal + roundOff + analyticError;
 
         plan.put("fast.lines", Integer.toString(count));
         plan.put("fast.oversampling", Integer.toString(m));
         plan.put("fast.internal_step_cm1", Double.toString(h));
         plan.put("fast.fft_length", Integer.toString(fftLength));
         plan.put("fast.slices", Integer.toString(dist.nonEmptySlices));
+        plan.put("fast.analytic_slices", Integer.toString(conv.analyticSlices));
+        plan.put("fast.correction_kernels", Integer.toString(conv.corrections));
+        plan.put("fast.ffts", Integer.toString(conv.ffts + 1));
+        if (conv.analyticSlices > 0) {
+            plan.put("fast.analytic_cutoff_cm1", Double.toString(analyticCutoff));
+            plan.put("fast.wing_model_error", String.format(Locale.ROOT, "%.3e", wingError));
+            plan.put("fast.alias_error", String.format(Locale.ROOT, "%.3e", conv.aliasError));
+            plan.put("fast.omitted_curvature_error", String.format(Locale.ROOT, "%.3e", conv.curvatureError));
+        }
         for (int fi = 0; fi < families.length; fi++) {
             Family f = families[fi];
             if (f != null) {
-                String key = "fast.family." + FAMILY_NAMES[fi % 3] + (fi >= 3 ? "-chi" : "");
+                String key = "fast.family." + FAMILY_NAMES[fi % KINDS] + (fi >= KINDS ? "-chi" : "");
                 plan.put(key + ".lines", Integer.toString(f.lines));
                 plan.put(key + ".doppler_nodes", Integer.toString(f.doppler.size()));
                 plan.put(key + ".doppler_log_step", Double.toString(f.doppler.logStep()));
                 plan.put(key + ".lorentz_nodes", Integer.toString(f.lorentz.size()));
                 plan.put(key + ".lorentz_log_step", Double.toString(f.lorentz.logStep()));
                 plan.put(key + ".lorentz_floor_cm1", Double.toString(f.lorentzFloorCm1));
+                plan.put(key + ".kernel", f.analytic ? "analytic" : "sampled");
             }
         }
         plan.put("fast.estimated_relative_error", String.format(Locale.ROOT, "%.3e", estimate));
@@ -427,7 +525,7 @@ public final class FastEngine implements CrossSectionEngine {
             Family f = families[kind];
             if (f == null) {
                 f = new Family();
-                f.kernel = kind >= 3 ? wingKernel : plainKernel;
+                f.kernel = kind >= KINDS ? wingKernel : plainKernel;
                 families[kind] = f;
             }
             f.lines++;
@@ -435,6 +533,9 @@ public final class FastEngine implements CrossSectionEngine {
             f.alphaMax = Math.max(f.alphaMax, dopplerCm1[i]);
             f.gammaMin = Math.min(f.gammaMin, lorentzCm1[i]);
             f.gammaMax = Math.max(f.gammaMax, lorentzCm1[i]);
+            if (dopplerCm1[i] > 0) {
+                f.minLorentzOverDoppler = Math.min(f.minLorentzOverDoppler, lorentzCm1[i] / dopplerCm1[i]);
+            }
         }
         return families;
     }
@@ -490,6 +591,39 @@ public final class FastEngine implements CrossSectionEngine {
         }
     }
 
+    /**
+     * Sets the ratio γL/αD from which lines with αD &gt; 0 form the Lorentz-dominated family, whose Doppler axis is a
+     * single node: the smallest ratio r ≤ {@value #MAX_SPLIT_RATIO} at which one node for the whole αD range of
+     * those lines (both χ kinds) keeps the error within half the width budget
+     * ({@link FastErrorModel#singleDopplerNodeError}; the Voigt profile depends on αD less and less as γL/αD
+     * grows, about as (αD/γL)²). None when no such ratio exists or no line reaches it.
+     */
+    private void chooseDopplerSplit(Family plain, Family withChi, double budget) {
+        highSplitRatio = Double.POSITIVE_INFINITY;
+        double alphaMin = Double.POSITIVE_INFINITY;
+        double alphaMax = 0;
+        double gammaMax = 0;
+        for (Family f : new Family[] {plain, withChi}) {
+            if (f != null) {
+                alphaMin = Math.min(alphaMin, f.alphaMin);
+                alphaMax = Math.max(alphaMax, f.alphaMax);
+                gammaMax = Math.max(gammaMax, f.gammaMax);
+            }
+        }
+        if (!(alphaMax > 0) || !(gammaMax > 0)) {
+            return;
+        }
+        double lo = alphaMin;
+        double hi = alphaMax;
+        // error grows with 1/r: the largest 1/r within half the budget
+        double inverse = FastErrorModel.largestStep(x -> FastErrorModel.singleDopplerNodeError(lo, hi, 1 / x),
+                budget / 2, 1 / MAX_SPLIT_RATIO, 1.0);
+        double ratio = 1 / inverse;
+        if (FastErrorModel.singleDopplerNodeError(lo, hi, ratio) <= budget / 2 && gammaMax >= ratio * alphaMin) {
+            highSplitRatio = ratio;
+        }
+    }
+
     /** Chooses each family's width axes: the Doppler axis gets half the budget, the Lorentz axis the rest. */
     private void planAxes(Family[] families, double budget) {
         for (int family = 0; family < FAMILIES; family++) {
@@ -497,9 +631,13 @@ public final class FastEngine implements CrossSectionEngine {
             if (f == null) {
                 continue;
             }
-            int kind = family % 3;
+            int kind = family % KINDS;
             if (kind == LORENTZ_ONLY) {
                 f.doppler = WidthAxis.exact(0.0);
+            } else if (kind == LORENTZ_DOMINATED) {
+                // one Doppler node, in the middle of the family's αD² range; error measured at its smallest γL/αD
+                f.doppler = WidthAxis.exact(FastErrorModel.singleDopplerNode(f.alphaMin, f.alphaMax));
+                f.dopplerError = FastErrorModel.singleDopplerNodeError(f.alphaMin, f.alphaMax, f.minLorentzOverDoppler);
             } else {
                 // worst case for the Doppler axis: the most Gaussian line, smallest γL/αD
                 double ratio = f.gammaMin / f.alphaMax;
@@ -543,11 +681,17 @@ public final class FastEngine implements CrossSectionEngine {
         return r * alphaMinCm1;
     }
 
-    /** Width kind (Voigt, Doppler-dominated, pure Lorentz), plus 3 for lines with the χ factor. */
+    /**
+     * Width kind (Voigt, Doppler-dominated, pure Lorentz, Lorentz-dominated), plus {@value #KINDS} for lines with
+     * the χ factor.
+     */
     private int familyOf(int line) {
         // Doppler-dominated lines (pure Doppler included) below the split get the floored Lorentz axis
-        int kind = dopplerCm1[line] == 0 ? LORENTZ_ONLY : (lorentzCm1[line] < lowSplitCm1 ? DOPPLER_DOMINATED : BOTH);
-        return chi[line] ? kind + 3 : kind;
+        double a = dopplerCm1[line];
+        double g = lorentzCm1[line];
+        int kind = a == 0 ? LORENTZ_ONLY
+                : (g < lowSplitCm1 ? DOPPLER_DOMINATED : (g >= highSplitRatio * a ? LORENTZ_DOMINATED : BOTH));
+        return chi[line] ? kind + KINDS : kind;
     }
 
     /** Smallest m ≤ {@link #MAX_OVERSAMPLING} whose position error is within the share for every family. */
@@ -646,8 +790,14 @@ public final class FastEngine implements CrossSectionEngine {
         final double dopplerCm1;
         final double lorentzCm1;
         final int reach;
+        /**
+         * Wing-correction group (one per Lorentz node of an analytic family, in work order), or −1: slices of the
+         * same group are contiguous in the work list and share one correction.
+         */
+        final int group;
 
-        Slice(Family family, int familyKeyBase, int dopplerNode, int lorentzNode, double[] widths, int reach) {
+        Slice(Family family, int familyKeyBase, int dopplerNode, int lorentzNode, double[] widths, int reach,
+              int group) {
             this.family = family;
             this.familyKeyBase = familyKeyBase;
             this.dopplerNode = dopplerNode;
@@ -655,61 +805,111 @@ public final class FastEngine implements CrossSectionEngine {
             this.dopplerCm1 = widths[0];
             this.lorentzCm1 = widths[1];
             this.reach = reach;
+            this.group = group;
         }
     }
 
-    private double[][] convolveSlices(Family[] families, List<double[]> sliceWidths, int[] sliceReach,
-                                      Distribution dist, double h, int fftLength) {
-        // the non-empty slices in family, Doppler-node, Lorentz-node order
+    /** The summed spectra of the blocks and what it took. */
+    private static final class Convolution {
+        double[][] spectra;
+        int ffts;
+        int analyticSlices;
+        int corrections;
+        double aliasError;
+        double curvatureError;
+    }
+
+    /** One block's spectrum and counts. */
+    private static final class BlockOutput {
+        double[] spectrum;
+        int ffts;
+        int analyticSlices;
+        int corrections;
+        double aliasError;
+        double curvatureError;
+    }
+
+    /** Shared, read-only inputs of the blocks. */
+    private static final class SliceContext {
+        Distribution dist;
+        DoubleFFT_1D fft;
+        int length;
+        double[] offsetsCm1;
+        double stepCm1;
+        double cutoffCm1;
+        boolean removePedestal;
+        double[] sinSquared;
+    }
+
+    private Convolution convolveSlices(Family[] families, List<double[]> sliceWidths, int[] sliceReach,
+                                       Distribution dist, double h, int fftLength, double analyticCutoffCm1,
+                                       double[] sinSquared) {
+        // the non-empty slices in family order; within an analytic family Lorentz-node major, so that the slices
+        // sharing a Lorentz node (and so a wing correction) are contiguous; otherwise Doppler-node major
         List<Slice> work = new ArrayList<>();
         int keyBase = 0;
+        int groups = 0;
         for (Family f : families) {
             if (f == null) {
                 continue;
             }
-            int sg = f.doppler.stencilSize();
-            int sl = f.lorentz.stencilSize();
             int nl = f.lorentz.size();
-            for (int ig = 0; ig < f.doppler.size(); ig++) {
-                for (int il = 0; il < nl; il++) {
-                    int lines = 0;
-                    for (int jg = Math.max(0, ig - sg + 1); jg <= ig; jg++) {
-                        for (int jl = Math.max(0, il - sl + 1); jl <= il; jl++) {
-                            int k = keyBase + jg * nl + jl;
-                            lines += dist.bucketStart[k + 1] - dist.bucketStart[k];
-                        }
-                    }
-                    if (lines > 0) {
+            int ng = f.doppler.size();
+            for (int outer = 0; outer < (f.analytic ? nl : ng); outer++) {
+                boolean groupUsed = false;
+                for (int inner = 0; inner < (f.analytic ? ng : nl); inner++) {
+                    int ig = f.analytic ? inner : outer;
+                    int il = f.analytic ? outer : inner;
+                    if (linesOfSlice(f, keyBase, ig, il, dist) > 0) {
                         int s = f.firstSlice + ig * nl + il;
-                        work.add(new Slice(f, keyBase, ig, il, sliceWidths.get(s), sliceReach[s]));
+                        work.add(new Slice(f, keyBase, ig, il, sliceWidths.get(s), sliceReach[s],
+                                f.analytic ? groups : -1));
+                        groupUsed = true;
                     }
+                }
+                if (f.analytic && groupUsed) {
+                    groups++;
                 }
             }
             keyBase += f.doppler.size() * nl;
         }
         dist.nonEmptySlices = work.size();
         int blocks = Math.max(1, Math.min(BLOCKS, work.size()));
-        DoubleFFT_1D fft = new DoubleFFT_1D(fftLength);
+        SliceContext ctx = new SliceContext();
+        ctx.dist = dist;
+        ctx.fft = new DoubleFFT_1D(fftLength);
+        ctx.length = fftLength;
+        ctx.stepCm1 = h;
+        ctx.cutoffCm1 = analyticCutoffCm1;
+        ctx.removePedestal = wings.removePedestal();
+        ctx.sinSquared = sinSquared;
         int maxReach = 0;
         for (Slice s : work) {
             maxReach = Math.max(maxReach, s.reach);
         }
-        double[] offsetsCm1 = new double[maxReach + 1];
+        ctx.offsetsCm1 = new double[maxReach + 1];
         for (int r = 0; r <= maxReach; r++) {
-            offsetsCm1[r] = r * h;
+            ctx.offsetsCm1[r] = r * h;
         }
-        List<Callable<double[]>> tasks = new ArrayList<>();
+        List<Callable<BlockOutput>> tasks = new ArrayList<>();
         for (int b = 0; b < blocks; b++) {
             int from = (int) ((long) b * work.size() / blocks);
             int to = (int) ((long) (b + 1) * work.size() / blocks);
             List<Slice> mine = work.subList(from, to);
-            tasks.add(() -> convolveBlock(mine, dist, fft, fftLength, offsetsCm1));
+            tasks.add(() -> convolveBlock(mine, ctx));
         }
-        double[][] spectra = new double[blocks][];
+        Convolution result = new Convolution();
+        result.spectra = new double[blocks][];
         try {
-            List<Future<double[]>> futures = pool.invokeAll(tasks);
+            List<Future<BlockOutput>> futures = pool.invokeAll(tasks);
             for (int b = 0; b < blocks; b++) {
-                spectra[b] = futures.get(b).get();
+                BlockOutput out = futures.get(b).get();
+                result.spectra[b] = out.spectrum;
+                result.ffts += out.ffts;
+                result.analyticSlices += out.analyticSlices;
+                result.corrections += out.corrections;
+                result.aliasError = Math.max(result.aliasError, out.aliasError);
+                result.curvatureError = Math.max(result.curvatureError, out.curvatureError);
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
@@ -724,53 +924,205 @@ public final class FastEngine implements CrossSectionEngine {
             }
             throw new IllegalStateException(cause);
         }
-        return spectra;
+        return result;
     }
 
-    /** Sums the spectra of a block's slices, in order: spectrum(lines) × spectrum(kernel). */
-    private double[] convolveBlock(List<Slice> mine, Distribution dist, DoubleFFT_1D fft, int length,
-                                   double[] offsetsCm1) {
+    /** Number of lines whose stencil touches slice (ig, il) of a family. */
+    private static int linesOfSlice(Family f, int keyBase, int ig, int il, Distribution dist) {
+        int sg = f.doppler.stencilSize();
+        int sl = f.lorentz.stencilSize();
+        int nl = f.lorentz.size();
+        int lines = 0;
+        for (int jg = Math.max(0, ig - sg + 1); jg <= ig; jg++) {
+            for (int jl = Math.max(0, il - sl + 1); jl <= il; jl++) {
+                int k = keyBase + jg * nl + jl;
+                lines += dist.bucketStart[k + 1] - dist.bucketStart[k];
+            }
+        }
+        return lines;
+    }
+
+    /**
+     * Sums the spectra of a block's slices, in order: spectrum(lines) × spectrum(kernel). A sampled slice's kernel
+     * is transformed numerically. An analytic slice's kernel transform is the closed form of the untruncated,
+     * periodised profile minus its Lorentz node's wing corrections, K_s − Ĉ_γ − (s²/2)·D̂_γ; Ĉ_γ and D̂_γ are
+     * transformed when the block reaches the first slice of a node and kept (real, L/2 + 1 values each) for the
+     * node's other slices, which follow it in the work order.
+     */
+    private BlockOutput convolveBlock(List<Slice> mine, SliceContext ctx) {
+        int length = ctx.length;
+        int half = length / 2;
+        Distribution dist = ctx.dist;
+        DoubleFFT_1D fft = ctx.fft;
+        BlockOutput out = new BlockOutput();
         double[] spectrum = new double[length];
         double[] lines = new double[length];
         double[] kernel = new double[length];
-        double[] profile = new double[offsetsCm1.length];
+        double[] profile = new double[ctx.offsetsCm1.length];
+        boolean anyGroup = false;
         for (Slice s : mine) {
-            Arrays.fill(lines, 0.0);
-            Family f = s.family;
-            int sg = f.doppler.stencilSize();
-            int sl = f.lorentz.stencilSize();
-            int nl = f.lorentz.size();
-            for (int jg = Math.max(0, s.dopplerNode - sg + 1); jg <= s.dopplerNode; jg++) {
-                int gIndex = s.dopplerNode - jg;
-                for (int jl = Math.max(0, s.lorentzNode - sl + 1); jl <= s.lorentzNode; jl++) {
-                    int lIndex = s.lorentzNode - jl;
-                    int k = s.familyKeyBase + jg * nl + jl;
-                    for (int q = dist.bucketStart[k]; q < dist.bucketStart[k + 1]; q++) {
-                        int i = dist.order[q];
-                        double w = dist.dopplerWeights[4 * i + gIndex] * dist.lorentzWeights[4 * i + lIndex];
-                        int p = dist.firstPoint[i];
-                        for (int j = 0; j < P; j++) {
-                            lines[p + j] += w * dist.positionWeights[P * i + j];
-                        }
+            anyGroup |= s.group >= 0 && s.lorentzCm1 > 0;
+        }
+        double[] plainCorrection = anyGroup ? new double[half + 1] : null;
+        double[] curvatureCorrection = anyGroup ? new double[half + 1] : null;
+        int loadedGroup = -1;
+        boolean curvatureLoaded = false;
+        for (Slice s : mine) {
+            spreadLines(s, dist, lines);
+            fft.realForward(lines);
+            out.ffts++;
+            boolean corrected = s.group >= 0 && s.lorentzCm1 > 0;
+            if (corrected && s.group != loadedGroup) {
+                correctionTransform(s.lorentzCm1, false, kernel, plainCorrection, ctx);
+                out.ffts++;
+                out.corrections++;
+                // the curvature term's largest effect, relative to the node's lowest line peak: left out (one FFT
+                // less) when far below round-off, and then counted in the estimate
+                double widestDoppler = s.family.doppler.widthCm1(s.family.doppler.size() - 1);
+                double curvature = curvatureBound(widestDoppler, s.lorentzCm1, ctx.cutoffCm1);
+                curvatureLoaded = curvature > NEGLIGIBLE_CURVATURE;
+                if (curvatureLoaded) {
+                    correctionTransform(s.lorentzCm1, true, kernel, curvatureCorrection, ctx);
+                    out.ffts++;
+                } else {
+                    out.curvatureError = Math.max(out.curvatureError, curvature / FastErrorModel.DEPTH);
+                }
+                loadedGroup = s.group;
+            }
+            double tail = s.group >= 0
+                    ? AnalyticKernels.voigtTransform(s.dopplerCm1, s.lorentzCm1, ctx.stepCm1, length, kernel) : -1;
+            if (tail >= 0) {
+                out.analyticSlices++;
+                // a line's weakest point of interest is 10⁻⁶ of its peak; the neglected aliases are at most
+                // tail/h anywhere in real space
+                double peak = VoigtProfile.value(0, s.dopplerCm1, s.lorentzCm1);
+                out.aliasError = Math.max(out.aliasError, tail / (ctx.stepCm1 * FastErrorModel.DEPTH * peak));
+                if (corrected && curvatureLoaded) {
+                    double w = 0.5 * AnalyticKernels.dopplerVariance(s.dopplerCm1);
+                    for (int k = 0; k <= half; k++) {
+                        kernel[k] -= plainCorrection[k] + w * curvatureCorrection[k];
+                    }
+                } else if (corrected) {
+                    for (int k = 0; k <= half; k++) {
+                        kernel[k] -= plainCorrection[k];
+                    }
+                }
+                // packed real-FFT layout: [Re0, Re(L/2), Re1, Im1, Re2, Im2, ...]; the kernel is real and even
+                spectrum[0] += lines[0] * kernel[0];
+                spectrum[1] += lines[1] * kernel[half];
+                for (int k = 1; k < half; k++) {
+                    double c = kernel[k];
+                    spectrum[2 * k] += lines[2 * k] * c;
+                    spectrum[2 * k + 1] += lines[2 * k + 1] * c;
+                }
+            } else {
+                sampleKernel(s.family.kernel, s.dopplerCm1, s.lorentzCm1, ctx.offsetsCm1, s.reach, profile, kernel);
+                fft.realForward(kernel);
+                out.ffts++;
+                multiplyAdd(lines, kernel, spectrum);
+            }
+        }
+        out.spectrum = spectrum;
+        return out;
+    }
+
+    /**
+     * Bound of the curvature correction's effect, (s²/2)·max|L''| beyond R, relative to the peak of the node's
+     * widest line: (s²/2)·6γ/(π(R² + γ²)²) / V(0; αD, γ) (|L''(x)| ≤ 6γ/(π(x² + γ²)²) for any x).
+     */
+    static double curvatureBound(double dopplerCm1, double lorentzCm1, double cutoffCm1) {
+        double r2 = cutoffCm1 * cutoffCm1 + lorentzCm1 * lorentzCm1;
+        double curvature = 6 * lorentzCm1 / (Math.PI * r2 * r2);
+        return 0.5 * AnalyticKernels.dopplerVariance(dopplerCm1) * curvature
+                / VoigtProfile.value(0, dopplerCm1, lorentzCm1);
+    }
+
+    /** The slice's line distribution (position weights × width weights) on the internal grid, in {@code lines}. */
+    private static void spreadLines(Slice s, Distribution dist, double[] lines) {
+        Arrays.fill(lines, 0.0);
+        Family f = s.family;
+        int sg = f.doppler.stencilSize();
+        int sl = f.lorentz.stencilSize();
+        int nl = f.lorentz.size();
+        for (int jg = Math.max(0, s.dopplerNode - sg + 1); jg <= s.dopplerNode; jg++) {
+            int gIndex = s.dopplerNode - jg;
+            for (int jl = Math.max(0, s.lorentzNode - sl + 1); jl <= s.lorentzNode; jl++) {
+                int lIndex = s.lorentzNode - jl;
+                int k = s.familyKeyBase + jg * nl + jl;
+                for (int q = dist.bucketStart[k]; q < dist.bucketStart[k + 1]; q++) {
+                    int i = dist.order[q];
+                    double w = dist.dopplerWeights[4 * i + gIndex] * dist.lorentzWeights[4 * i + lIndex];
+                    int p = dist.firstPoint[i];
+                    for (int j = 0; j < P; j++) {
+                        lines[p + j] += w * dist.positionWeights[P * i + j];
                     }
                 }
             }
-            sampleKernel(f.kernel, s.dopplerCm1, s.lorentzCm1, offsetsCm1, s.reach, profile, kernel);
-            fft.realForward(lines);
-            fft.realForward(kernel);
-            // packed real-FFT layout: [Re0, Re(L/2), Re1, Im1, Re2, Im2, ...]
-            spectrum[0] += lines[0] * kernel[0];
-            spectrum[1] += lines[1] * kernel[1];
-            for (int i = 2; i < length; i += 2) {
-                double ar = lines[i];
-                double ai = lines[i + 1];
-                double br = kernel[i];
-                double bi = kernel[i + 1];
-                spectrum[i] += ar * br - ai * bi;
-                spectrum[i + 1] += ar * bi + ai * br;
-            }
         }
-        return spectrum;
+    }
+
+    /** spectrum += a × b, both in the packed real-FFT layout [Re0, Re(L/2), Re1, Im1, Re2, Im2, ...]. */
+    private static void multiplyAdd(double[] a, double[] b, double[] spectrum) {
+        spectrum[0] += a[0] * b[0];
+        spectrum[1] += a[1] * b[1];
+        for (int i = 2; i < a.length; i += 2) {
+            double ar = a[i];
+            double ai = a[i + 1];
+            double br = b[i];
+            double bi = b[i + 1];
+            spectrum[i] += ar * br - ai * bi;
+            spectrum[i + 1] += ar * bi + ai * br;
+        }
+    }
+
+    /**
+     * The transform of a Lorentz node's correction kernel c_γ (or d_γ), real and even, so real: its values at
+     * k = 0 … L/2 in {@code half}; the imaginary parts the FFT returns are round-off and are left out.
+     */
+    private static void correctionTransform(double lorentzCm1, boolean second, double[] scratch, double[] half,
+                                            SliceContext ctx) {
+        AnalyticKernels.correctionKernel(lorentzCm1, ctx.offsetsCm1, ctx.cutoffCm1, ctx.removePedestal, ctx.stepCm1,
+                ctx.sinSquared, second, scratch);
+        ctx.fft.realForward(scratch);
+        int n = half.length - 1;
+        half[0] = scratch[0];
+        half[n] = scratch[1];
+        for (int k = 1; k < n; k++) {
+            half[k] = scratch[2 * k];
+        }
+    }
+
+    /**
+     * The fixed cutoff R of this (p, T) when the analytic kernels may apply — a cutoff that does not depend on the
+     * line widths ({@link FixedCutoff}, {@link PressureScaledCutoff}) and is finite — else NaN.
+     */
+    private double analyticCutoffCm1() {
+        if (!(wings.cutoff() instanceof FixedCutoff || wings.cutoff() instanceof PressureScaledCutoff)) {
+            return Double.NaN;
+        }
+        double d = wingKernel.cutoffCm1(0.0, 0.0);
+        return Double.isFinite(d) && d > 0 ? d : Double.NaN;
+    }
+
+    /**
+     * Whether a family takes the analytic path: at least {@value #MIN_DOPPLER_NODES_SHARING} Doppler nodes sharing
+     * each Lorentz node (each node's correction costs up to two FFTs, so with fewer the sampled kernels are
+     * cheaper), a width-independent finite cutoff R, no χ factor, αD &gt; 0, and
+     * R ≫ αD: αD,max ≤ R/{@value #MIN_CUTOFF_OVER_DOPPLER} and the wing model's remainder
+     * ({@link AnalyticKernels#wingModelError}) within a hundredth of the tolerance.
+     */
+    private boolean isAnalytic(Family f, double cutoffCm1) {
+        return analyticKernels && !Double.isNaN(cutoffCm1) && f.kernel == plainKernel && f.kernel.chiFactor() == null
+                && f.doppler.size() >= MIN_DOPPLER_NODES_SHARING && f.alphaMin > 0 && f.alphaMax * MIN_CUTOFF_OVER_DOPPLER <= cutoffCm1
+                && AnalyticKernels.wingModelError(f.alphaMax, cutoffCm1) <= tolerance / 100;
+    }
+
+    /** sin²(πn/L), n = 0 … L/2, kept between computations of the same FFT length. */
+    private double[] sinSquaredTable(int length) {
+        if (sinSquared == null || sinSquared.length != length / 2 + 1) {
+            sinSquared = AnalyticKernels.sinSquaredTable(length);
+        }
+        return sinSquared;
     }
 
     /**
@@ -814,8 +1166,11 @@ public final class FastEngine implements CrossSectionEngine {
                 + "position (6-point Lagrange weights), ln alphaD and ln gammaL (4-point); FFT convolution per width slice");
         m.put("fast.tolerance", Double.toString(tolerance));
         m.put("fast.criterion", "relative error where sigma >= 1e-6 max sigma");
-        m.put("fast.kernel", "per-slice Voigt sampled and truncated as in the exact engine (cutoff and pedestal at "
-                + "the slice's node widths)");
+        m.put("fast.kernel", "per-slice Voigt truncated as in the exact engine (cutoff and pedestal at the slice's "
+                + "node widths); with a fixed or pressure-scaled cutoff R >> alphaD and no chi factor, closed-form "
+                + "transform of the periodised profile corrected per Lorentz node by the transforms of its periodic "
+                + "Lorentz wings beyond R and their second derivative (remainder O(alphaD^4/R^4), in the estimate); "
+                + "otherwise sampled and transformed numerically");
         m.put("fast.cutoff_edge", "within 3 internal steps of a line's cutoff distance the truncation is spread over "
                 + "the line's position stencil; a width-dependent cutoff is taken at the slice's node widths");
         m.putAll(wings.describe());

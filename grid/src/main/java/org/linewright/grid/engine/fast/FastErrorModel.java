@@ -106,6 +106,40 @@ final class FastErrorModel {
     }
 
     /**
+     * The single Doppler node of a Lorentz-dominated family whose lines have αD in [lo, hi]: the middle of the αD²
+     * range, √((lo² + hi²)/2), since the profile's αD dependence is, to first order, linear in αD² (the Gaussian's
+     * variance).
+     */
+    static double singleDopplerNode(double alphaLoCm1, double alphaHiCm1) {
+        return Math.sqrt(0.5 * (alphaLoCm1 * alphaLoCm1 + alphaHiCm1 * alphaHiCm1));
+    }
+
+    /**
+     * Error of one Doppler node ({@link #singleDopplerNode}) for lines of αD in [lo, hi] and γL = r·αD, r =
+     * {@code lorentzOverDoppler} (the family's smallest ratio, the worst case): the profile at the node's αD
+     * against the line's own, at 9 values of αD evenly spaced in αD² over the range (the ends included), over
+     * 257 detunings to the criterion's depth. For r ≫ 1 it falls as (αD/γL)²: V − L ≈ (s²/2)·L'' near the centre.
+     */
+    static double singleDopplerNodeError(double alphaLoCm1, double alphaHiCm1, double lorentzOverDoppler) {
+        double node = singleDopplerNode(alphaLoCm1, alphaHiCm1);
+        double worst = 0;
+        for (int p = 0; p <= 8; p++) {
+            double alpha = Math.sqrt(alphaLoCm1 * alphaLoCm1
+                    + p / 8.0 * (alphaHiCm1 * alphaHiCm1 - alphaLoCm1 * alphaLoCm1));
+            double gamma = lorentzOverDoppler * alpha;
+            double xDepth = depthDetuning(alpha, gamma);
+            for (int k = 0; k <= DETUNINGS; k++) {
+                double f = (double) k / DETUNINGS;
+                double x = xDepth * f * f * f;
+                double exact = VoigtProfile.value(x, alpha, gamma);
+                double approx = VoigtProfile.value(x, node, gamma);
+                worst = Math.max(worst, Math.abs(approx - exact) / exact);
+            }
+        }
+        return worst;
+    }
+
+    /**
      * Position error: a line of widths (αD, γL) spread over {@link #POSITION_POINTS} grid points {@code stepCm1}
      * apart with the weights of {@link LagrangeWeights#centred}, both sides of the centre.
      */

@@ -23,6 +23,21 @@ class FastErrorModelTest {
     }
 
     @Test
+    void singleDopplerNodeErrorMatchesTheLeadingTermOfTheGaussianMomentExpansion() {
+        // V = L + (s²/2)·L'' + … for γL ≫ αD (s² = αD²/(2 ln 2), the expansion of L ⊗ G in the Gaussian's moments, the
+        // asymptotic series of the Faddeeva function, Abramowitz & Stegun §7.1); at the centre |L''(0)|/L(0) = 2/γ², so
+        // replacing αD by the node changes V by |Δs²|/γ² relative. αD ∈ [1, 1.2], node² = 1.22, γL = 200·αD: largest
+        // at αD = 1, |Δs²| = 0.22/(2 ln 2), γ = 200
+        double predicted = 0.22 / (2 * Math.log(2)) / (200.0 * 200.0);
+        assertEquals(predicted, FastErrorModel.singleDopplerNodeError(1.0, 1.2, 200.0), 0.05 * predicted);
+        // and it falls as (αD/γL)²
+        double ratio = FastErrorModel.singleDopplerNodeError(1.0, 1.2, 200.0)
+                / FastErrorModel.singleDopplerNodeError(1.0, 1.2, 400.0);
+        assertEquals(4.0, ratio, 0.2);
+        assertEquals(Math.sqrt(1.22), FastErrorModel.singleDopplerNode(1.0, 1.2), 1e-15);
+    }
+
+    @Test
     void errorsFallAsTheFourthPowerOfTheStep() {
         // position: sixth order (six-point stencil)
         double coarse = FastErrorModel.positionError(0.002, 0.004, 0.01);

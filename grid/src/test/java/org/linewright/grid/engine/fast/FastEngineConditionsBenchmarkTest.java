@@ -1,0 +1,214 @@
+package org.linewright.grid.engine.fast;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.sources.WidthOptions;
+import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.wings.WingTreatment;
+import org.linewright.grid.calc.CrossSectionCalculator;
+import org.linewright.grid.calc.CrossSectionRequest;
+import org.linewright.grid.calc.LineSelection;
+import org.linewright.grid.calc.ProgressListener;
+import org.linewright.grid.engine.CrossSectionEngine;
+import org.linewright.grid.engine.LineChunk;
+import org.linewright.grid.wavenumber.WavenumberGrid;
+import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.partition.PartitionSums;
+import org.linewright.ingest.registry.MoleculeRegistry;
+import org.linewright.ingest.store.IngestCounts;
+import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.store.LineStoreWriter;
+import org.linewright.ingest.store.SourceMetadata;
+import org.linewright.ingest.testsupport.SyntheticRecords;
+import org.linewright.ingest.units.PhysicalConstants;
+
+/**
+ * Engine time per (p, T) with the analytic kernel path and with every kernel sampled, back to back on the same
+ * engine input, at 10⁻⁴, 1 and 100 bar and 200 and 2000 K. The lines are the grid targets' synthetic, invented
+ * list (the ingest test generator's block of 20,000 CO lines, seed 7, repeated at 2000 + i·0.0005 cm⁻¹; grid
+ * 2000–2500 cm⁻¹ by 0.0005 cm⁻¹; background air; default wings, fixed 25 cm⁻¹ cutoff; tolerance 10⁻³;
+ * 2 threads), passed once through the calculator (S(T), widths) and recorded, so only the engine is timed.
+ * Runs in a child JVM with {@code -Xmx2g}; or directly:
+ * {@code java -Xmx2g --add-opens=java.base/java.nio=ALL-UNNAMED -cp <grid test classpath>
+ * org.linewright.grid.engine.fast.FastEngineConditionsBenchmarkTest LINES DIR}.
+ */
+@Tag("benchmark")
+class FastEngineConditionsBenchmarkTest {
+
+    private static final int BLOCK = 20_000;
+    private static final double FIRST_CM1 = 2000.0;
+    private static final double SPACING_CM1 = 0.0005;
+    private static final int THREADS = 2;
+    private static final double[] PRESSURES_BAR = {1e-4, 1.0, 100.0};
+    private static final double[] TEMPERATURES_K = {200.0, 2000.0};
+
+    @Test
+    void enginePerCondition() throws Exception {
+        long lines = Long.getLong("linewright.benchmark.lines", 1_000_000L);
+        Path dir = Files.createTempDirectory("lw-fast-conditions-");
+        try {
+            String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+            Process p = new ProcessBuilder(List.of(java, "-Xmx2g", "--add-opens=java.base/java.nio=ALL-UNNAMED",
+                    "-cp", System.getProperty("surefire.test.class.path", System.getProperty("java.class.path")),
+                    FastEngineConditionsBenchmarkTest.class.getName(), Long.toString(lines), dir.toString()))
+                    .redirectErrorStream(true).start();
+            StringBuilder out = new StringBuilder();
+            try (var r = p.inputReader(StandardCharsets.UTF_8)) {
+                String line;
+                while ((line = r.readLine()) != null) {
+                    System.out.println(line);
+                    out.append(line).append('\n');
+                }
+            }
+            assertEquals(0, p.waitFor(), out.toString());
+        } finally {
+            try (Stream<Path> walk = Files.walk(dir)) {
+                walk.sorted(Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
+            }
+        }
+    }
+
+    public static void main(String[] args) throws IOException {
+        long lines = Long.parseLong(args[0]);
+        Path work = Path.of(args[1]);
+        LineStore store = writeStore(work.resolve("store"), lines);
+        WavenumberGrid grid = WavenumberGrid.uniform(FIRST_CM1, FIRST_CM1 + lines * SPACING_CM1, SPACING_CM1);
+        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store),
+                PartitionSums.of(MoleculeRegistry.builtIn()).attachedRegistry());
+        System.out.printf(Locale.ROOT, "%d lines, grid %d points, %d threads, %d cores, java %s%n", lines,
+                grid.size(), THREADS, Runtime.getRuntime().availableProcessors(), System.getProperty("java.version"));
+        for (double pressureBar : PRESSURES_BAR) {
+            for (double temperatureK : TEMPERATURES_K) {
+                double pressureAtm = pressureBar * 1e5 / PhysicalConstants.STANDARD_ATMOSPHERE_PA;
+                CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm,
+                        Composition.parse("air=1"), grid, WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0,
+                        LineSelection.ALL, WidthOptions.DEFAULTS);
+                Recorder rec = new Recorder();
+                calc.compute(request, rec, ProgressListener.NONE);
+                double[][] sigma = new double[2][];
+                // alternate the two paths, twice each, so that load changes hit both alike
+                for (int round = 0; round < 2; round++) {
+                    for (int path = 0; path < 2; path++) {
+                        boolean analytic = path == 0;
+                        double[] s = new double[grid.size()];
+                        long t0 = System.nanoTime();
+                        long cpu0 = processCpuNanos();
+                        Map<String, String> plan;
+                        double estimate;
+                        try (FastEngine engine = new FastEngine(THREADS, WingTreatment.defaults(),
+                                FastEngine.DEFAULT_TOLERANCE, analytic)) {
+                            engine.begin(grid, pressureAtm, temperatureK);
+                            for (LineChunk c : rec.chunks) {
+                                engine.accumulate(c, s);
+                            }
+                            engine.finish(s);
+                            plan = engine.describe();
+                            estimate = engine.estimatedRelativeError();
+                        }
+                        double seconds = (System.nanoTime() - t0) * 1e-9;
+                        double cpuSeconds = (processCpuNanos() - cpu0) * 1e-9;
+                        sigma[path] = s;
+                        System.out.printf(Locale.ROOT, "p = %g bar, T = %.0f K, %s: %.2f s (process CPU %.2f s); slices %s, analytic %s, "
+                                        + "corrections %s, FFTs %s, FFT length %s, m %s, estimate %.2e, load %s%n",
+                                pressureBar, temperatureK, analytic ? "analytic" : "sampled ", seconds, cpuSeconds,
+                                plan.get("fast.slices"), plan.get("fast.analytic_slices"),
+                                plan.get("fast.correction_kernels"), plan.get("fast.ffts"),
+                                plan.get("fast.fft_length"), plan.get("fast.oversampling"), estimate, load());
+                    }
+                }
+                System.out.printf(Locale.ROOT, "p = %g bar, T = %.0f K: analytic vs sampled, largest relative "
+                        + "difference where sigma >= 1e-6 max: %.2e%n", pressureBar, temperatureK,
+                        FastEngineAccuracyTest.maxRelativeError(sigma[0], sigma[1], null));
+            }
+        }
+    }
+
+    /** CPU time of the whole process (all threads, GC included), ns. */
+    private static long processCpuNanos() {
+        return ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory
+                .getOperatingSystemMXBean()).getProcessCpuTime();
+    }
+
+    private static String load() throws IOException {
+        String[] f = Files.readString(Path.of("/proc/loadavg")).trim().split(" ");
+        return f[0];
+    }
+
+    /** The grid targets' synthetic list, written straight into a store. */
+    private static LineStore writeStore(Path storeDir, long lines) throws IOException {
+        LineBatch b = SyntheticRecords.block(BLOCK, 7);
+        try (LineStoreWriter writer = LineStoreWriter.create(storeDir, "synthetic",
+                SourceMetadata.of("synthetic-co.par", "", "hitran160", Map.of("generator", "benchmark")))) {
+            for (long done = 0; done < lines; done += BLOCK) {
+                int n = (int) Math.min(BLOCK, lines - done);
+                for (int i = 0; i < n; i++) {
+                    long index = done + i;
+                    b.wavenumberCm1[i] = Math.round((FIRST_CM1 + index * SPACING_CM1) * 1e6) / 1e6;
+                    b.sourceLine[i] = index + 1;
+                }
+                b.size = n;
+                writer.write(b);
+            }
+            writer.commit(new IngestCounts(lines, lines, 0, 0));
+        }
+        return LineStore.open(storeDir);
+    }
+
+    /** Keeps a copy of the engine input. */
+    private static final class Recorder implements CrossSectionEngine {
+        final List<LineChunk> chunks = new ArrayList<>();
+
+        @Override
+        public void begin(WavenumberGrid grid, double pressureAtm, double temperatureK) {
+            chunks.clear();
+        }
+
+        @Override
+        public void accumulate(LineChunk chunk, double[] sigmaCm2PerMolecule) {
+            LineChunk copy = new LineChunk(chunk.size);
+            System.arraycopy(chunk.centerCm1, 0, copy.centerCm1, 0, chunk.size);
+            System.arraycopy(chunk.intensityCmPerMolecule, 0, copy.intensityCmPerMolecule, 0, chunk.size);
+            System.arraycopy(chunk.dopplerHwhmCm1, 0, copy.dopplerHwhmCm1, 0, chunk.size);
+            System.arraycopy(chunk.lorentzHwhmCm1, 0, copy.lorentzHwhmCm1, 0, chunk.size);
+            System.arraycopy(chunk.chiFactor, 0, copy.chiFactor, 0, chunk.size);
+            copy.size = chunk.size;
+            chunks.add(copy);
+        }
+
+        @Override
+        public void finish(double[] sigmaCm2PerMolecule) {
+        }
+
+        @Override
+        public String id() {
+            return "recorder";
+        }
+
+        @Override
+        public Map<String, String> describe() {
+            return Map.of();
+        }
+
+        @Override
+        public double estimatedRelativeError() {
+            return 0;
+        }
+
+        @Override
+        public void close() {
+        }
+    }
+}
