@@ -171,7 +171,7 @@ public final class SigmaCommand implements Callable<Integer> {
         CrossSectionResult result;
         try (CrossSectionEngine eng = EngineFactory.create(engine, threadCount, wings, tolerance);
              Progress progress = Progress.start("sigma", PROGRESS_STEPS, "%", 1, quiet)) {
-            result = new CrossSectionCalculator(opened, registry).compute(request, eng,
+            result = new CrossSectionCalculator(opened, registry, threadCount).compute(request, eng,
                     (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
         }
         CrossSectionFiles.write(out, fileFormat, grid, result.sigmaCm2PerMolecule(), result.metadata());
