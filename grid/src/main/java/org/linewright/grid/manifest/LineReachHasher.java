@@ -8,6 +8,7 @@ import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
+import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.store.LineCursor;
@@ -95,6 +96,41 @@ public final class LineReachHasher {
             hex[b] = HexFormat.of().formatHex(digests[b].digest());
         }
         return new Result(hex, lines);
+    }
+
+    /**
+     * The largest |δ| (cm⁻¹/atm) among the pressure-shift columns a width source may read — the air shift and
+     * every foreign broadener's shift — of the lines of {@code stores} (restricted by {@code species}) with
+     * centres in [{@code minCm1}, {@code maxCm1}]. Non-finite values are left out: the width sources resolve
+     * them to 0. Reads only those columns (a column store reads little).
+     */
+    public static double maxAbsShiftCm1PerAtm(List<LineStore> stores, LineQuery species, double minCm1,
+                                              double maxCm1) throws IOException {
+        List<LineColumn> columns = new ArrayList<>();
+        columns.add(LineColumn.AIR_SHIFT);
+        for (Broadener b : Broadener.values()) {
+            columns.add(LineColumn.foreignColumns(b)[2]);
+        }
+        LineQuery query = species.withWavenumberRange(minCm1, maxCm1).withColumns(columns);
+        LineBatch batch = new LineBatch(BATCH_ROWS);
+        double max = 0;
+        for (LineStore store : stores) {
+            try (LineCursor cursor = store.cursor(query)) {
+                while (cursor.read(batch)) {
+                    for (LineColumn c : columns) {
+                        double[] d = c.doubles(batch);
+                        for (int i = 0; i < batch.size; i++) {
+                            double a = Math.abs(d[i]);
+                            // NaN and infinities fail the test: the width sources resolve them to 0
+                            if (a > max && a < Double.POSITIVE_INFINITY) {
+                                max = a;
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        return max;
     }
 
     private static List<LineColumn> numericColumns() {
