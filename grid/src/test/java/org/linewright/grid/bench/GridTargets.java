@@ -42,7 +42,7 @@ import org.linewright.ingest.store.LineStore;
  * The grid module's end-to-end targets on {@link SyntheticLines} (synthetic, invented lines), one target per run
  * of {@code main} so that each runs in a JVM of its own with the heap limit under test:
  * {@code java -Xmx2g ... GridTargets TARGET LINES WORKDIR}, TARGET one of {@code calc}, {@code table},
- * {@code incremental}, {@code incremental-wide}, {@code exact}. System property {@code
+ * {@code incremental}, {@code incremental-wide}, {@code block-sizes}, {@code exact}. System property {@code
  * linewright.benchmark.blockPoints} sets the tables' {@code build.block_points} (unset: the engine's choice). Prints its figures, the phases and the peak heap (sum of the heap pools'
  * peak usage, an upper bound). Exits non-zero on a wrong result (no line used, σ not positive, a rebuild that
  * recomputed the whole table); the figures themselves are judged by {@link GridTargetsBenchmarkTest}.
@@ -69,6 +69,7 @@ public final class GridTargets {
             case "table" -> table(lines, work);
             case "incremental" -> incremental(lines, work);
             case "incremental-wide" -> incrementalWide(lines, work);
+            case "block-sizes" -> blockSizes(lines, work);
             case "exact" -> exact(lines, work);
             default -> throw new IllegalArgumentException("unknown target " + target);
         }
@@ -221,6 +222,8 @@ public final class GridTargets {
             // updated, back to the original, updated again: each rebuild recomputes the same blocks
             boolean updated = k % 2 == 0;
             gen.writeRecords(file, lines, updated ? updateFrom : 0, updated ? updateTo : 0);
+            // a revised list is a new file: every rebuild ingests it (no earlier ingest of the same bytes reused)
+            deleteTree(dir.resolve(org.linewright.grid.plan.LineCache.CACHE_DIR));
             BuildReport r = build(plan, updated ? "after the 1 % update" : "back to the original", false);
             if (r.computed() * 5 > scratch.computed()) {
                 throw new IllegalStateException("rebuild recomputed " + r.computed() + " of " + r.cells() + " cells");
@@ -241,6 +244,68 @@ public final class GridTargets {
                 SyntheticLines.UPDATE_WIDTH_FACTOR, gen.centre(updateFrom), gen.centre(updateTo - 1),
                 scratch.seconds(), scratch.computed(), rebuild[0], rebuild[1], rebuild[2], computed, median,
                 scratch.seconds() / median);
+    }
+
+    /**
+     * The fast engine's time per (p, T) over the whole grid for several block lengths, interleaved (each (p, T)
+     * runs every length in turn, the order rotating) so that a change of machine load falls on all of them: the
+     * 10×10 table's list and grid, blocks of the power-of-two rule at factors 1.25, 2.5 and 5 and the whole grid
+     * as one block, at p = 10⁻⁴, 10⁻², 1, 100 bar and T = 200, 1000 K.
+     */
+    static void blockSizes(long lines, Path work) throws IOException {
+        Path dir = Files.createDirectories(work.resolve("block-sizes"));
+        new SyntheticLines().writeRecords(dir.resolve("synthetic-co.par"), lines, 0, 0);
+        double[] pressuresBar = {1e-4, 1e-2, 1.0, 100.0};
+        double[] temperaturesK = {200.0, 1000.0};
+        org.linewright.grid.plan.TablePlan plan = PlanReader.read(writePlan(dir, lines, pressuresBar, temperaturesK));
+        MoleculeRegistry registry = TableBuilder.registry(plan);
+        List<LineStore> stores = org.linewright.grid.plan.LineCache.load(plan.sources(),
+                dir.resolve(org.linewright.grid.plan.LineCache.CACHE_DIR), registry, BuildListener.NONE).stores();
+        WavenumberGrid grid = plan.grid();
+        double cutoff = plan.profile().cutoffCm1();
+        int[] sizes = {CrossSectionEngine.transformBlockPoints(grid, cutoff, 1.25),
+                CrossSectionEngine.transformBlockPoints(grid, cutoff, 2.5),
+                CrossSectionEngine.transformBlockPoints(grid, cutoff, 5.0), grid.size()};
+        double[][] seconds = new double[sizes.length][pressuresBar.length * temperaturesK.length];
+        try (org.linewright.grid.table.BlockCalculator calc = CalculatorBlocks.factory().create(plan, stores,
+                registry, THREADS)) {
+            double reach = TableBuilder.blocks(plan, calc, stores).layout().reachCm1();
+            int cell = 0;
+            for (int p = 0; p < pressuresBar.length; p++) {
+                for (int t = 0; t < temperaturesK.length; t++, cell++) {
+                    for (int k = 0; k < sizes.length; k++) {
+                        int which = (k + cell) % sizes.length;
+                        org.linewright.grid.manifest.BlockLayout layout =
+                                new org.linewright.grid.manifest.BlockLayout(grid, sizes[which], reach);
+                        long t0 = System.nanoTime();
+                        for (int b = 0; b < layout.blocks(); b++) {
+                            calc.compute(layout.slice(b), plan.pressuresAtm()[p], temperaturesK[t],
+                                    layout.lineMinCm1(b), layout.lineMaxCm1(b));
+                        }
+                        seconds[which][cell] = seconds(t0);
+                        System.out.printf(Locale.ROOT, "block-sizes p = %s bar, T = %s K, blocks of %d points (%d "
+                                        + "blocks): %.2f s (load %s)%n", pressuresBar[p], temperaturesK[t], sizes[which],
+                                layout.blocks(), seconds[which][cell], loadAverage());
+                    }
+                }
+            }
+        }
+        for (int k = 0; k < sizes.length; k++) {
+            double sum = 0;
+            for (double x : seconds[k]) {
+                sum += x;
+            }
+            System.out.printf(Locale.ROOT, "block-sizes: blocks of %d points: %.1f s over the %d (p, T)%n", sizes[k],
+                    sum, seconds[k].length);
+        }
+    }
+
+    private static String loadAverage() {
+        try {
+            return Files.readString(Path.of("/proc/loadavg")).trim().split(" ")[0];
+        } catch (IOException e) {
+            return "?";
+        }
     }
 
     /**
@@ -414,6 +479,17 @@ public final class GridTargets {
         double[] sigma = r.sigmaCm2PerMolecule();
         if (r.linesUsed() == 0 || !(sigma[sigma.length / 2] > 0)) {
             throw new IllegalStateException("no cross section: " + r.linesUsed() + " lines used");
+        }
+    }
+
+    private static void deleteTree(Path dir) throws IOException {
+        if (!Files.exists(dir)) {
+            return;
+        }
+        try (java.util.stream.Stream<Path> walk = Files.walk(dir)) {
+            for (Path p : walk.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.delete(p);
+            }
         }
     }
 
