@@ -18,8 +18,8 @@ import org.linewright.reference.compare.LineChange;
 /**
  * Which cells of a planned cross-section table a change of line list reaches, and how much σ changes there.
  *
- * <p>The table is cut into the table builder's blocks ({@link BlockLayout}, same block size and reach: the wing
- * cutoff plus {@link TableBuilder#SHIFT_MARGIN_CM1_PER_ATM} per atm of the highest pressure). A block is reached
+ * <p>The table is cut into the table builder's blocks ({@link TableBuilder#blocks}: same block size and reach,
+ * the wing cutoff plus the largest pressure shift of the lines at the highest pressure). A block is reached
  * when an added, removed or changed line lies (before or after the change) within its reach; for each reached
  * block and every (p, T) of the plan, σ is computed from the old and from the new list with the plan's engine,
  * profile and widths (the builder's own calculator), and the largest changes are reported:
@@ -60,9 +60,6 @@ public final class TableImpact {
         }
         double[] positions = changePositions(report.changes());
         double[] pressuresAtm = plan.pressuresAtm();
-        double maxPressureAtm = Arrays.stream(pressuresAtm).max().orElse(0);
-        double reach = plan.profile().cutoffCm1() + TableBuilder.SHIFT_MARGIN_CM1_PER_ATM * maxPressureAtm;
-        BlockLayout layout = new BlockLayout(plan.grid(), plan.blockPoints(), reach);
         List<Cell> cells = new ArrayList<>();
         if (positions.length == 0) {
             return cells;
@@ -70,6 +67,8 @@ public final class TableImpact {
         MoleculeRegistry registry = TableBuilder.registry(plan);
         try (BlockCalculator older = CalculatorBlocks.factory().create(plan, List.of(oldStore), registry, threads);
              BlockCalculator newer = CalculatorBlocks.factory().create(plan, List.of(newStore), registry, threads)) {
+            // the builder's own blocks and reach, taken over both lists (a reach wide enough for either)
+            BlockLayout layout = TableBuilder.blocks(plan, older, List.of(oldStore, newStore)).layout();
             for (int b = 0; b < layout.blocks(); b++) {
                 double lo = layout.lineMinCm1(b);
                 double hi = layout.lineMaxCm1(b);

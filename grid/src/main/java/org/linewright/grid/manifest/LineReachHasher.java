@@ -8,6 +8,7 @@ import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
+import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.store.LineCursor;
@@ -25,6 +26,8 @@ import org.linewright.ingest.store.LineStore;
 public final class LineReachHasher {
     private static final List<LineColumn> NUMERIC = numericColumns();
     private static final int BATCH_ROWS = 8192;
+    /** Bytes of one line's numeric columns (INT 4, LONG and DOUBLE 8). */
+    private static final int ROW_BYTES = rowBytes();
 
     private LineReachHasher() {
     }
@@ -53,7 +56,8 @@ public final class LineReachHasher {
         double hi = layout.lineMaxCm1(blocks - 1);
         LineQuery query = species.withWavenumberRange(lo, hi).withColumns(NUMERIC);
         LineBatch batch = new LineBatch(BATCH_ROWS);
-        ByteBuffer row = ByteBuffer.allocate(8 * NUMERIC.size() + 8).order(ByteOrder.LITTLE_ENDIAN);
+        int rowBytes = ROW_BYTES;
+        byte[] rows = new byte[BATCH_ROWS * rowBytes];
         for (int s = 0; s < stores.size(); s++) {
             byte[] storeTag = ByteBuffer.allocate(8).order(ByteOrder.LITTLE_ENDIAN).putLong(s).array();
             for (MessageDigest d : digests) {
@@ -62,29 +66,25 @@ public final class LineReachHasher {
             int first = 0; // first block whose reach may still hold the next line
             try (LineCursor cursor = stores.get(s).cursor(query)) {
                 while (cursor.read(batch)) {
+                    int n = batch.size;
+                    if (n == 0) {
+                        continue;
+                    }
+                    if (rows.length < n * rowBytes) {
+                        rows = new byte[n * rowBytes];
+                    }
+                    serialize(batch, n, ByteBuffer.wrap(rows).order(ByteOrder.LITTLE_ENDIAN), rowBytes);
                     double[] nu = batch.wavenumberCm1;
-                    for (int i = 0; i < batch.size; i++) {
-                        double x = nu[i];
-                        while (first < blocks && layout.lineMaxCm1(first) < x) {
-                            first++;
-                        }
-                        if (first == blocks) {
-                            break;
-                        }
-                        if (layout.lineMinCm1(first) > x) {
-                            continue;
-                        }
-                        row.clear();
-                        for (LineColumn c : NUMERIC) {
-                            switch (c.kind()) {
-                                case INT -> row.putInt(c.ints(batch)[i]);
-                                case LONG -> row.putLong(c.longs(batch)[i]);
-                                default -> row.putDouble(c.doubles(batch)[i]);
-                            }
-                        }
-                        for (int b = first; b < blocks && layout.lineMinCm1(b) <= x; b++) {
-                            digests[b].update(row.array(), 0, row.position());
-                            lines[b]++;
+                    while (first < blocks && layout.lineMaxCm1(first) < nu[0]) {
+                        first++;
+                    }
+                    // rows come in wavenumber order, so a block's rows are one run of the batch: one update each
+                    for (int b = first; b < blocks && layout.lineMinCm1(b) <= nu[n - 1]; b++) {
+                        int from = firstAtOrAbove(nu, 0, n, layout.lineMinCm1(b));
+                        int to = firstAbove(nu, from, n, layout.lineMaxCm1(b));
+                        if (to > from) {
+                            digests[b].update(rows, from * rowBytes, (to - from) * rowBytes);
+                            lines[b] += to - from;
                         }
                     }
                 }
@@ -95,6 +95,112 @@ public final class LineReachHasher {
             hex[b] = HexFormat.of().formatHex(digests[b].digest());
         }
         return new Result(hex, lines);
+    }
+
+    /**
+     * The largest |δ| (cm⁻¹/atm) among the pressure-shift columns a width source may read — the air shift and
+     * every foreign broadener's shift — of the lines of {@code stores} (restricted by {@code species}) with
+     * centres in [{@code minCm1}, {@code maxCm1}]. Non-finite values are left out: the width sources resolve
+     * them to 0. Reads only those columns (a column store reads little).
+     */
+    public static double maxAbsShiftCm1PerAtm(List<LineStore> stores, LineQuery species, double minCm1,
+                                              double maxCm1) throws IOException {
+        List<LineColumn> columns = new ArrayList<>();
+        columns.add(LineColumn.AIR_SHIFT);
+        for (Broadener b : Broadener.values()) {
+            columns.add(LineColumn.foreignColumns(b)[2]);
+        }
+        LineQuery query = species.withWavenumberRange(minCm1, maxCm1).withColumns(columns);
+        LineBatch batch = new LineBatch(BATCH_ROWS);
+        double max = 0;
+        for (LineStore store : stores) {
+            try (LineCursor cursor = store.cursor(query)) {
+                while (cursor.read(batch)) {
+                    for (LineColumn c : columns) {
+                        double[] d = c.doubles(batch);
+                        for (int i = 0; i < batch.size; i++) {
+                            double a = Math.abs(d[i]);
+                            // NaN and infinities fail the test: the width sources resolve them to 0
+                            if (a > max && a < Double.POSITIVE_INFINITY) {
+                                max = a;
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        return max;
+    }
+
+    /**
+     * Writes rows 0..n−1 of {@code batch} one after the other, each the numeric columns in declaration order,
+     * little-endian, column by column (one pass over each column array).
+     */
+    private static void serialize(LineBatch batch, int n, ByteBuffer out, int rowBytes) {
+        int offset = 0;
+        for (LineColumn c : NUMERIC) {
+            switch (c.kind()) {
+                case INT -> {
+                    int[] a = c.ints(batch);
+                    for (int i = 0, at = offset; i < n; i++, at += rowBytes) {
+                        out.putInt(at, a[i]);
+                    }
+                    offset += Integer.BYTES;
+                }
+                case LONG -> {
+                    long[] a = c.longs(batch);
+                    for (int i = 0, at = offset; i < n; i++, at += rowBytes) {
+                        out.putLong(at, a[i]);
+                    }
+                    offset += Long.BYTES;
+                }
+                default -> {
+                    double[] a = c.doubles(batch);
+                    for (int i = 0, at = offset; i < n; i++, at += rowBytes) {
+                        out.putDouble(at, a[i]);
+                    }
+                    offset += Double.BYTES;
+                }
+            }
+        }
+    }
+
+    /** First index in [from, to) of ascending {@code x} with x ≥ v ({@code to} if none). */
+    private static int firstAtOrAbove(double[] x, int from, int to, double v) {
+        int lo = from;
+        int hi = to;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (x[mid] < v) {
+                lo = mid + 1;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+
+    /** First index in [from, to) of ascending {@code x} with x &gt; v ({@code to} if none). */
+    private static int firstAbove(double[] x, int from, int to, double v) {
+        int lo = from;
+        int hi = to;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (x[mid] <= v) {
+                lo = mid + 1;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+
+    private static int rowBytes() {
+        int n = 0;
+        for (LineColumn c : NUMERIC) {
+            n += c.kind() == LineColumn.Kind.INT ? Integer.BYTES : Long.BYTES;
+        }
+        return n;
     }
 
     private static List<LineColumn> numericColumns() {

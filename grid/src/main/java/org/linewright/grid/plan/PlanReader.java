@@ -144,8 +144,10 @@ public final class PlanReader {
             }
         }
         boolean forbidDefaults = bool("widths.forbid_defaults", false);
-        long block = integer("build.block_points", TablePlan.DEFAULT_BLOCK_POINTS);
-        if (block < 1 || block > Integer.MAX_VALUE) {
+        long block = integer("build.block_points", Long.MIN_VALUE);
+        if (block == Long.MIN_VALUE) {
+            block = TablePlan.ENGINE_BLOCK_POINTS;
+        } else if (block < 1 || block > Integer.MAX_VALUE) {
             throw error("build.block_points", "is " + block, "a positive whole number of grid points");
         }
         String table = string("output.table", null);

@@ -30,7 +30,8 @@ import org.linewright.ingest.units.PhysicalConstants;
  * @param partitionTables     user partition-sum tables, {@code MOL/ISO=FILE} (files absolute)
  * @param moleculeDataOrNull  user isotopologue metadata file, or null
  * @param widths              width source options
- * @param blockPoints         wavenumber points per block of the build (the unit of incremental rebuilds)
+ * @param blockPoints         wavenumber points per block of the build (the unit of incremental rebuilds), or
+ *                            {@link #ENGINE_BLOCK_POINTS} to let the build choose for the engine
  * @param outputTable         the table file: {@code .arrow} for Arrow IPC, {@code .h5} for HDF5
  * @param precision           σ element type in the table
  */
@@ -42,10 +43,16 @@ public record TablePlan(Path planFile, List<Path> sources, WavenumberGrid grid, 
     /** Pascal per bar (definition of the bar). */
     public static final double PA_PER_BAR = 1.0e5;
 
-    /** Default wavenumber points per build block. */
-    public static final int DEFAULT_BLOCK_POINTS = 20_000;
+    /**
+     * {@code blockPoints} when the plan sets none: the build takes the engine's preferred block length
+     * ({@code CrossSectionEngine#preferredBlockPoints}).
+     */
+    public static final int ENGINE_BLOCK_POINTS = 0;
 
     public TablePlan {
+        if (blockPoints < 0) {
+            throw new IllegalArgumentException("block points " + blockPoints);
+        }
         sources = List.copyOf(sources);
         pressuresBar = pressuresBar.clone();
         temperaturesK = temperaturesK.clone();
@@ -165,7 +172,7 @@ public record TablePlan(Path planFile, List<Path> sources, WavenumberGrid grid, 
         m.put("species", species.describe());
         m.put("width_order", String.join(",", widths.order()));
         m.put("forbid_default_widths", Boolean.toString(widths.forbidDefaults()));
-        m.put("block_points", Integer.toString(blockPoints));
+        m.put("block_points", blockPoints == ENGINE_BLOCK_POINTS ? "engine" : Integer.toString(blockPoints));
         return m;
     }
 }

@@ -2,6 +2,7 @@ package org.linewright.grid.table;
 
 import java.io.IOException;
 import java.util.Map;
+import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 
 /**
@@ -22,6 +23,28 @@ public interface BlockCalculator extends AutoCloseable {
      */
     BlockResult compute(WavenumberGrid blockGrid, double pressureAtm, double temperatureK, double lineMinCm1,
                         double lineMaxCm1) throws IOException;
+
+    /**
+     * Grid points per block when the plan sets none (see {@link
+     * org.linewright.grid.engine.CrossSectionEngine#preferredBlockPoints}); by default that of direct summation.
+     *
+     * @param grid       the table's grid
+     * @param paddingCm1 the largest wing cutoff, cm⁻¹
+     */
+    default int preferredBlockPoints(WavenumberGrid grid, double paddingCm1) {
+        return Math.min(grid.size(), org.linewright.grid.engine.CrossSectionEngine.DIRECT_SUM_BLOCK_POINTS);
+    }
+
+    /**
+     * The largest |δ| (cm⁻¹/atm) that a constant of the calculator's width options (user constants, defaults)
+     * can give a line of the background, as opposed to the shift columns of the lines themselves. The table
+     * builder adds the lines' own shifts and bounds a line's reach with both. By default the calculator's own
+     * read margin, {@link CrossSectionCalculator#SHIFT_MARGIN_CM1_PER_ATM}, which bounds every calculator that
+     * reads its lines through {@link CrossSectionCalculator}.
+     */
+    default double maxConstantShiftCm1PerAtm() {
+        return CrossSectionCalculator.SHIFT_MARGIN_CM1_PER_ATM;
+    }
 
     /** Every parameter of the calculator and its engine that affects σ (for block hashes and table metadata). */
     Map<String, String> describe();

@@ -5,6 +5,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.linewright.broadening.background.BackgroundGas;
+import org.linewright.broadening.sources.GasParameters;
+import org.linewright.broadening.sources.WidthResolver;
 import org.linewright.broadening.sources.WidthSource;
 import org.linewright.broadening.sources.WidthSourceTally;
 import org.linewright.broadening.wings.WingTreatment;
@@ -16,6 +18,7 @@ import org.linewright.grid.calc.ProgressListener;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.EngineFactory;
+import org.linewright.grid.engine.fast.FastEngine;
 import org.linewright.grid.plan.TablePlan;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.registry.MoleculeRegistry;
@@ -27,6 +30,13 @@ import org.linewright.ingest.store.LineStore;
  * centres lie within the block's reach. The engine uses the build's threads (same bits for any count).
  */
 public final class CalculatorBlocks implements BlockCalculator {
+    /**
+     * The fast engine's block rule: FFT length ≥ 2.5 × the padding on both sides, so that ≥ 60 % of every
+     * block's transform is the block itself (measured against 1.25 and 5 in docs/performance.md, "Grid: table
+     * blocks sized for the engine").
+     */
+    public static final double TRANSFORM_EFFICIENCY_FACTOR = 2.5;
+
     private final CrossSectionCalculator calculator;
     private final CrossSectionEngine engine;
     private final TablePlan plan;
@@ -74,6 +84,43 @@ public final class CalculatorBlocks implements BlockCalculator {
         }
         return new BlockResult(r.sigmaCm2PerMolecule(), r.linesUsed(), r.linesBelowThreshold(), counts,
                 r.estimatedRelativeError(), r.warnings());
+    }
+
+    /**
+     * The engine's preference; for the fast engine the power-of-two transform rule of {@link
+     * CrossSectionEngine#transformBlockPoints} with factor {@value #TRANSFORM_EFFICIENCY_FACTOR}.
+     */
+    @Override
+    public int preferredBlockPoints(WavenumberGrid grid, double paddingCm1) {
+        // The fast engine states no preference of its own yet (its package is being revised separately); its
+        // rule is applied here until it overrides CrossSectionEngine#preferredBlockPoints itself.
+        if (engine instanceof FastEngine) {
+            return CrossSectionEngine.transformBlockPoints(grid, paddingCm1, TRANSFORM_EFFICIENCY_FACTOR);
+        }
+        return engine.preferredBlockPoints(grid, paddingCm1);
+    }
+
+    /**
+     * max |δ| over the constants the width options can serve for a gas of the background: user constants, and
+     * the defaults unless they are forbidden or left out of the source order. Shifts from rules and tables do
+     * not exist (0), and line-list shifts are the lines' own columns.
+     */
+    @Override
+    public double maxConstantShiftCm1PerAtm() {
+        List<WidthSource> order = widths.order().isEmpty() ? WidthResolver.DEFAULT_ORDER : widths.order();
+        boolean defaults = !widths.forbidDefaults() && order.contains(WidthSource.DEFAULT);
+        boolean user = order.contains(WidthSource.USER_CONSTANT);
+        double max = 0;
+        for (BackgroundGas gas : plan.composition().presentGases()) {
+            GasParameters constant = widths.userConstants().get(gas);
+            if (user && constant != null) {
+                max = Math.max(max, Math.abs(constant.shiftCm1PerAtm()));
+            }
+            if (defaults) {
+                max = Math.max(max, Math.abs(GasParameters.defaultFor(gas).shiftCm1PerAtm()));
+            }
+        }
+        return max;
     }
 
     @Override

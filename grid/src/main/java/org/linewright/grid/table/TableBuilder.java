@@ -16,6 +16,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import org.linewright.broadening.background.Composition;
 import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.manifest.BlockLayout;
 import org.linewright.grid.manifest.BlockStore;
@@ -23,6 +24,7 @@ import org.linewright.grid.manifest.BuildManifest;
 import org.linewright.grid.manifest.LineReachHasher;
 import org.linewright.grid.plan.LineCache;
 import org.linewright.grid.plan.TablePlan;
+import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.ToolVersion;
 import org.linewright.ingest.partition.PartitionSums;
@@ -46,11 +48,17 @@ import org.linewright.ingest.store.SourceMetadata;
  */
 public final class TableBuilder {
     /**
-     * Extra reach per atm of pressure beyond the cutoff, cm⁻¹/atm: lines pushed into a block by their pressure
-     * shift. It is the calculator's own margin, so a table cell sees the lines a single cross section of the
-     * whole grid sees.
+     * The largest shift per atm a block's reach ever allows for, cm⁻¹/atm: the calculator's own read margin
+     * (it never takes a line from farther away), so a table cell never misses a line a single cross section of
+     * the whole grid would use.
      */
     public static final double SHIFT_MARGIN_CM1_PER_ATM = CrossSectionCalculator.SHIFT_MARGIN_CM1_PER_ATM;
+    /**
+     * Grid steps added to a block's reach: a transform engine spreads a line over a position stencil of ±3 of its
+     * internal steps (at most one grid step each) and rounds its kernel length up by one step; 8 covers both
+     * with room for floating-point round-off in ν + δ·p and ν ± cutoff.
+     */
+    public static final int REACH_SLACK_STEPS = 8;
 
     private TableBuilder() {
     }
@@ -96,16 +104,16 @@ public final class TableBuilder {
         MoleculeRegistry registry = registry(plan);
         LineCache.Loaded loaded = LineCache.load(plan.sources(), plan.baseDir().resolve(LineCache.CACHE_DIR),
                 registry, listener);
-        double maxPressureAtm = plan.pressuresAtm()[plan.pressuresBar().length - 1];
-        double reach = plan.profile().cutoffCm1() + SHIFT_MARGIN_CM1_PER_ATM * maxPressureAtm;
-        BlockLayout layout = new BlockLayout(plan.grid(), plan.blockPoints(), reach);
-        LineReachHasher.Result lineHashes = LineReachHasher.hash(loaded.stores(), speciesQuery(plan), layout);
         long linesInStores = 0;
         for (LineStore s : loaded.stores()) {
             linesInStores += s.totalLines();
         }
         Path work = workDir(plan.outputTable());
         try (BlockCalculator calculator = factory.create(plan, loaded.stores(), registry, threads)) {
+            Blocks blocksPlan = blocks(plan, calculator, loaded.stores());
+            BlockLayout layout = blocksPlan.layout();
+            listener.hashing(layout.blocks(), layout.blockPoints(), layout.reachCm1());
+            LineReachHasher.Result lineHashes = LineReachHasher.hash(loaded.stores(), speciesQuery(plan), layout);
             Map<String, String> parameters = parameters(plan, calculator);
             String parametersHash = sha256Hex(parameters.toString().getBytes(StandardCharsets.UTF_8));
             int np = plan.pressuresBar().length;
@@ -118,7 +126,12 @@ public final class TableBuilder {
             manifest.put("parameters_sha256", parametersHash);
             manifest.put("blocks", Integer.toString(nb));
             manifest.put("block_points", Integer.toString(layout.blockPoints()));
-            manifest.put("reach_cm1", Double.toString(reach));
+            manifest.put("block_points_from", blocksPlan.blockPointsFromEngine() ? "engine" : "plan");
+            manifest.put("reach_cm1", Double.toString(layout.reachCm1()));
+            manifest.put("reach.cutoff_cm1", Double.toString(plan.profile().cutoffCm1()));
+            manifest.put("reach.max_shift_cm1_per_atm", Double.toString(blocksPlan.shiftBoundCm1PerAtm()));
+            manifest.put("reach.max_pressure_atm", Double.toString(blocksPlan.maxPressureAtm()));
+            manifest.put("reach.slack_cm1", Double.toString(blocksPlan.slackCm1()));
             for (int b = 0; b < nb; b++) {
                 manifest.put("block." + b + ".range_cm1", layout.slice(b).firstCm1() + " " + layout.slice(b).lastCm1());
                 manifest.put("block." + b + ".lines", Long.toString(lineHashes.lines()[b]));
@@ -241,6 +254,60 @@ public final class TableBuilder {
                     linesInStores, linesUsed, counts, maxError, List.copyOf(warnings), written, loaded.ingested(),
                     (System.nanoTime() - t0) * 1e-9);
         }
+    }
+
+    /**
+     * How a build cuts the grid and how far each block looks for its lines.
+     *
+     * @param layout                the blocks and their reach
+     * @param blockPointsFromEngine true when the plan set no block size and the engine's preference was taken
+     * @param shiftBoundCm1PerAtm   the bound on |δ| used for the reach, cm⁻¹/atm
+     * @param maxPressureAtm        the plan's highest pressure, atm
+     * @param slackCm1              the slack added for the engines' stencils and round-off, cm⁻¹
+     */
+    public record Blocks(BlockLayout layout, boolean blockPointsFromEngine, double shiftBoundCm1PerAtm,
+                         double maxPressureAtm, double slackCm1) {
+    }
+
+    /**
+     * The blocks of {@code plan}'s build with {@code calculator} on the lines of {@code stores}.
+     *
+     * <p>Block size: the plan's {@code block_points}, else the calculator's (engine's) preference for the grid
+     * and the plan's largest cutoff.
+     *
+     * <p>Reach: r = d + δ_max·p_max + s, where d is the largest wing cutoff of the plan (the cap of every cutoff
+     * rule), p_max its highest pressure, s = {@value #REACH_SLACK_STEPS} × the largest grid step, and δ_max
+     * bounds the background shift per atm of every line: the resolved shift is Σ_g x_g·δ_g with Σ x_g ≤ 1 +
+     * {@link Composition#SUM_TOLERANCE} and each δ_g drawn from a line's shift columns (air and foreign
+     * broadeners, {@link LineReachHasher#maxAbsShiftCm1PerAtm} over every line that could reach the grid) or a
+     * constant of the width options ({@link BlockCalculator#maxConstantShiftCm1PerAtm}), so
+     * |δ·p| ≤ (1 + tolerance)·max|δ_g|·p_max. A line contributes only within d of its shifted centre, so a line
+     * whose stored centre is farther than r from a block cannot touch it at any pressure of the plan. δ_max is
+     * capped by {@link #SHIFT_MARGIN_CM1_PER_ATM}, beyond which the calculator reads no lines anyway.
+     */
+    public static Blocks blocks(TablePlan plan, BlockCalculator calculator, List<LineStore> stores)
+            throws IOException {
+        WavenumberGrid grid = plan.grid();
+        double[] points = grid.pointsCm1();
+        double maxStep = 0;
+        for (int i = 1; i < points.length; i++) {
+            maxStep = Math.max(maxStep, points[i] - points[i - 1]);
+        }
+        double maxPressureAtm = 0;
+        for (double p : plan.pressuresAtm()) {
+            maxPressureAtm = Math.max(maxPressureAtm, p);
+        }
+        double cutoff = plan.profile().cutoffCm1();
+        double slack = REACH_SLACK_STEPS * maxStep;
+        double widest = cutoff + SHIFT_MARGIN_CM1_PER_ATM * maxPressureAtm + slack;
+        double lineShift = LineReachHasher.maxAbsShiftCm1PerAtm(stores, speciesQuery(plan),
+                points[0] - widest, points[points.length - 1] + widest);
+        double shiftBound = Math.min(SHIFT_MARGIN_CM1_PER_ATM,
+                Math.max(lineShift, calculator.maxConstantShiftCm1PerAtm()) * (1 + Composition.SUM_TOLERANCE));
+        double reach = cutoff + shiftBound * maxPressureAtm + slack;
+        boolean fromEngine = plan.blockPoints() == TablePlan.ENGINE_BLOCK_POINTS;
+        int blockPoints = fromEngine ? calculator.preferredBlockPoints(grid, cutoff) : plan.blockPoints();
+        return new Blocks(new BlockLayout(grid, blockPoints, reach), fromEngine, shiftBound, maxPressureAtm, slack);
     }
 
     /** The plan's species selection as a line query (every line when none is set). */

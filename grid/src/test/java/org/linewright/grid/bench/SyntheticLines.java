@@ -22,6 +22,8 @@ import org.linewright.ingest.testsupport.SyntheticRecords;
  * fundamental band's region; the spacing is below the Doppler HWHM there, ≈ 0.002 cm⁻¹ at 200–300 K). Every value is rounded to what the
  * 160-character record holds, so the generated store and the generated file carry the same lines.
  *
+ * <p>A wider list (a band system) takes another line spacing: {@link #SyntheticLines(double)}.
+ *
  * <p>A "list update" multiplies the air-broadened widths of a contiguous slice of lines by
  * {@value #UPDATE_WIDTH_FACTOR} (rounded to the record's 4 decimals).
  */
@@ -39,15 +41,32 @@ final class SyntheticLines {
 
     private final LineBatch template;
     private final double[] airWidth = new double[BLOCK];
+    private final double spacingCm1;
 
     SyntheticLines() {
+        this(SPACING_CM1);
+    }
+
+    /** Lines {@code spacingCm1} apart (10⁶ lines at 0.002 cm⁻¹ span 2000–4000 cm⁻¹). */
+    SyntheticLines(double spacingCm1) {
+        this.spacingCm1 = spacingCm1;
         template = SyntheticRecords.block(BLOCK, 7);
         System.arraycopy(template.airWidthCm1PerAtm, 0, airWidth, 0, BLOCK);
     }
 
-    /** Centre of line {@code index}, cm⁻¹ (rounded to the record's 6 decimals). */
+    /** Centre of line {@code index} at the default spacing, cm⁻¹ (rounded to the record's 6 decimals). */
     static double centreCm1(long index) {
         return Math.round((FIRST_CM1 + index * SPACING_CM1) * 1e6) / 1e6;
+    }
+
+    /** Centre of line {@code index} of this generator, cm⁻¹ (rounded to the record's 6 decimals). */
+    double centre(long index) {
+        return Math.round((FIRST_CM1 + index * spacingCm1) * 1e6) / 1e6;
+    }
+
+    /** Distance between consecutive centres, cm⁻¹. */
+    double spacingCm1() {
+        return spacingCm1;
     }
 
     /** Receives each generated block. */
@@ -65,7 +84,7 @@ final class SyntheticLines {
             int n = (int) Math.min(BLOCK, lines - done);
             for (int i = 0; i < n; i++) {
                 long index = done + i;
-                b.wavenumberCm1[i] = centreCm1(index);
+                b.wavenumberCm1[i] = centre(index);
                 b.sourceLine[i] = index + 1;
                 b.airWidthCm1PerAtm[i] = index >= updateFrom && index < updateTo
                         ? Math.round(airWidth[i] * UPDATE_WIDTH_FACTOR * 1e4) / 1e4 : airWidth[i];

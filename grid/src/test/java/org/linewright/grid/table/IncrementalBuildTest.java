@@ -114,8 +114,21 @@ class IncrementalBuildTest {
         BuildReport dry = TableBuilder.build(PlanReader.read(incremental), calculator(-1), 1, true, BuildListener.NONE);
         BuildReport second = build(incremental, -1);
 
-        // Blocks whose reach (block range +- cutoff + 1 cm-1/atm x highest pressure) holds a changed centre
-        double reach = CUTOFF_CM1 + TableBuilder.SHIFT_MARGIN_CM1_PER_ATM * TablePlan.barToAtm(1.0);
+        // Blocks whose reach (block range ± (cutoff + max|δ_air| × highest pressure + 8 grid steps)) holds a changed
+        // centre; δ_air read from the records' columns 60–67 (HITRAN format, Rothman et al. 2005), the sample's
+        // only shift column; 1 + 1e-6 the composition's sum tolerance
+        double maxShift = 0;
+        double seen = CUTOFF_CM1 + 1.0 * TablePlan.barToAtm(1.0) + 8 * STEP_CM1; // lines the calculator may read
+        for (String r : records) {
+            if (centre(r) < FROM_CM1 - seen || centre(r) > 2400.0 + seen) {
+                continue;
+            }
+            maxShift = Math.max(maxShift, Math.abs(Double.parseDouble(r.substring(59, 67).trim())));
+        }
+        assertTrue(maxShift > 0 && maxShift < 0.1, "air shifts of CO lines: " + maxShift);
+        double reach = CUTOFF_CM1 + maxShift * (1 + 1e-6) * TablePlan.barToAtm(1.0) + 8 * STEP_CM1;
+        assertEquals(reach, Double.parseDouble(org.linewright.grid.manifest.BuildManifest
+                .read(TableBuilder.workDir(first.table())).get("reach_cm1")), 1e-9);
         int reached = 0;
         for (int b = 0; b < blocks; b++) {
             double lo = FROM_CM1 + b * BLOCK_POINTS * STEP_CM1 - reach;

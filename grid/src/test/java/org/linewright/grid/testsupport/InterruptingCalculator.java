@@ -29,6 +29,16 @@ public final class InterruptingCalculator implements BlockCalculator {
     }
 
     @Override
+    public int preferredBlockPoints(WavenumberGrid grid, double paddingCm1) {
+        return delegate.preferredBlockPoints(grid, paddingCm1);
+    }
+
+    @Override
+    public double maxConstantShiftCm1PerAtm() {
+        return delegate.maxConstantShiftCm1PerAtm();
+    }
+
+    @Override
     public Map<String, String> describe() {
         return delegate.describe();
     }
