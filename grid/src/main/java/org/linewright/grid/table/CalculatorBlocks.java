@@ -46,7 +46,7 @@ public final class CalculatorBlocks implements BlockCalculator {
 
     private CalculatorBlocks(TablePlan plan, List<LineStore> stores, MoleculeRegistry registry, int threads) {
         this.plan = plan;
-        this.calculator = new CrossSectionCalculator(stores, registry);
+        this.calculator = new CrossSectionCalculator(stores, registry, threads);
         this.wings = plan.profile().wings();
         this.engine = EngineFactory.create(plan.profile().engine(), threads, wings, plan.profile().tolerance());
         int[] molecules = plan.species().molecules().stream().mapToInt(Integer::intValue).toArray();

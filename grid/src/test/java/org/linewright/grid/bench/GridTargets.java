@@ -101,7 +101,7 @@ public final class GridTargets {
                 seconds(t0));
         resetPeaks();
         WavenumberGrid grid = fullGrid(lines);
-        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store), registry());
+        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store), registry(), THREADS);
         CrossSectionRequest request = request(grid, 1.0, 296.0);
         double readSeconds = readOnly(store, LineQuery.all().withColumns(LineQuery.CROSS_SECTION_COLUMNS));
         for (int run = 0; run < 3; run++) {
@@ -131,7 +131,7 @@ public final class GridTargets {
         // Collect the calculator's engine input once with a recording engine, then time the engine on it.
         Recorder rec = new Recorder();
         long p0 = System.nanoTime();
-        new CrossSectionCalculator(List.of(store), registry()).compute(request, rec, ProgressListener.NONE);
+        new CrossSectionCalculator(List.of(store), registry(), THREADS).compute(request, rec, ProgressListener.NONE);
         double prepare = seconds(p0);
         try (CrossSectionEngine engine = EngineFactory.create("fast", THREADS, request.wings(),
                 FastEngine.DEFAULT_TOLERANCE)) {
@@ -329,7 +329,7 @@ public final class GridTargets {
             int lo = WingKernel.firstIndexAtOrAbove(p, 0, p.length, c - cutoffCm1);
             evaluations += WingKernel.firstIndexAbove(p, lo, p.length, c + cutoffCm1) - lo;
         }
-        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store), registry());
+        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store), registry(), THREADS);
         for (int threads : new int[] {1, 2, 1, 2}) {
             double best = 0;
             long used = 0;
