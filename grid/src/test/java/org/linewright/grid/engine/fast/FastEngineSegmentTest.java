@@ -144,6 +144,10 @@ class FastEngineSegmentTest {
         double[] direct = FastEngineAccuracyTest.direct(grid, chunk, wings);
         boolean[] nearEdge = FastEngineAccuracyTest.edgePoints(grid, chunk, 1.0, 3 * h + 1e-9);
         double observed = FastEngineAccuracyTest.maxRelativeError(segmented, direct, nearEdge);
+        System.out.printf("boundaries: %s segments of %s points (ring %s), vs one ring %.2e of max sigma, "
+                        + "vs direct %.2e (estimate %.2e)%n", segPlan[0].get("fast.segments"),
+                segPlan[0].get("fast.segment_points"), segPlan[0].get("fast.segment_fft_length"),
+                maxAbsDifference(segmented, oneRing) / scale, observed, estimate[0]);
         assertTrue(observed <= TOLERANCE, "observed " + observed);
         assertTrue(observed <= estimate[0], "observed " + observed + " > estimate " + estimate[0]);
     }
@@ -163,6 +167,8 @@ class FastEngineSegmentTest {
         double h = Double.parseDouble(plan[0].get("fast.internal_step_cm1"));
         boolean[] nearEdge = FastEngineAccuracyTest.edgePoints(grid, chunk, 0.5, 4 * h);
         double observed = FastEngineAccuracyTest.maxRelativeError(f, d, nearEdge);
+        System.out.printf("pedestal removed: %s segments of %s points, vs direct %.2e (estimate %.2e)%n",
+                plan[0].get("fast.segments"), plan[0].get("fast.segment_points"), observed, estimate[0]);
         assertTrue(observed <= TOLERANCE, "observed " + observed);
         assertTrue(observed <= estimate[0], "observed " + observed + " > estimate " + estimate[0]);
     }
@@ -219,6 +225,11 @@ class FastEngineSegmentTest {
         assertTrue(maxAbsDifference(segmentedAnalytic, oneRing) <= 1e-8 * scale,
                 "analytic segmented vs sampled one ring: " + maxAbsDifference(segmentedAnalytic, oneRing) / scale);
         double observedAnalytic = FastEngineAccuracyTest.maxRelativeError(segmentedAnalytic, direct, nearEdge);
+        System.out.printf("resolving power: %s segments, sampled vs one ring %.2e, analytic vs one ring %.2e of max "
+                        + "sigma; vs direct %.2e / %.2e (estimate %.2e)%n", segPlan[0].get("fast.segments"),
+                maxAbsDifference(segmented, oneRing) / scale,
+                maxAbsDifference(segmentedAnalytic, oneRingAnalytic) / scale, observed, observedAnalytic,
+                estimate[0]);
         assertTrue(observedAnalytic <= TOLERANCE, "observed " + observedAnalytic);
     }
 
@@ -249,6 +260,10 @@ class FastEngineSegmentTest {
         double[] direct = FastEngineAccuracyTest.direct(grid, chunk, wings);
         boolean[] nearEdge = FastEngineAccuracyTest.edgePoints(grid, chunk, 25.0, 3 * 0.004 + 1e-9);
         double observed = FastEngineAccuracyTest.maxRelativeError(segmented, direct, nearEdge);
+        System.out.printf("analytic, shared corrections: %d segments, %s correction transforms, vs one ring %.2e of "
+                        + "max sigma, vs direct %.2e (estimate %.2e)%n", segments,
+                segPlan[0].get("fast.correction_kernels"), maxAbsDifference(segmented, oneRing) / scale, observed,
+                estimate[0]);
         assertTrue(observed <= TOLERANCE, "observed " + observed);
         assertTrue(observed <= estimate[0], "observed " + observed + " > estimate " + estimate[0]);
     }
