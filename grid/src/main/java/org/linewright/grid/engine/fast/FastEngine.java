@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ConcurrentLinkedQueue;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -502,6 +503,9 @@ public final class FastEngine implements CrossSectionEngine {
         double[] sinSquared = anyAnalytic ? sinSquaredTable(fftLength) : null;
         Convolution totals = new Convolution();
         DoubleFFT_1D fft = new DoubleFFT_1D(fftLength);
+        // the blocks' spectra and the threads' scratch, reused by every segment
+        double[][] spectra = new double[BLOCKS][];
+        ConcurrentLinkedQueue<double[][]> scratch = new ConcurrentLinkedQueue<>();
         double[] w = uniform ? null : new double[P];
         int nextOutput = 0;
         long distinctSlices = 0;
@@ -515,7 +519,7 @@ public final class FastEngine implements CrossSectionEngine {
 
             // slices in fixed blocks, spectra summed in a fixed order
             Convolution conv = convolveSlices(families, sliceWidths, sliceReach, dist, h, fft, fftLength,
-                    analyticCutoff, sinSquared, cache, sliceUsed);
+                    analyticCutoff, sinSquared, cache, sliceUsed, spectra, scratch);
             totals.add(conv);
             if (conv.slices == 0) {
                 // no line reaches this segment: σ gets nothing here
@@ -1006,7 +1010,8 @@ public final class FastEngine implements CrossSectionEngine {
     private Convolution convolveSlices(Family[] families, List<double[]> sliceWidths, int[] sliceReach,
                                        Distribution dist, double h, DoubleFFT_1D fft, int fftLength,
                                        double analyticCutoffCm1, double[] sinSquared, CorrectionCache cache,
-                                       boolean[] sliceUsed) {
+                                       boolean[] sliceUsed, double[][] spectra,
+                                       ConcurrentLinkedQueue<double[][]> scratch) {
         // the non-empty slices in family order; within an analytic family Lorentz-node major, so that the slices
         // sharing a Lorentz node (and so a wing correction) are contiguous; otherwise Doppler-node major
         List<Slice> work = new ArrayList<>();
@@ -1060,7 +1065,22 @@ public final class FastEngine implements CrossSectionEngine {
             int from = (int) ((long) b * work.size() / blocks);
             int to = (int) ((long) (b + 1) * work.size() / blocks);
             List<Slice> mine = work.subList(from, to);
-            tasks.add(() -> convolveBlock(mine, ctx));
+            if (spectra[b] == null) {
+                spectra[b] = new double[fftLength];
+            }
+            double[] spectrum = spectra[b];
+            tasks.add(() -> {
+                // lines and kernel scratch: at most one pair per running thread, fully overwritten before use
+                double[][] pair = scratch.poll();
+                if (pair == null) {
+                    pair = new double[][] {new double[fftLength], new double[fftLength]};
+                }
+                try {
+                    return convolveBlock(mine, ctx, spectrum, pair[0], pair[1]);
+                } finally {
+                    scratch.add(pair);
+                }
+            });
         }
         Convolution result = new Convolution();
         result.slices = work.size();
@@ -1114,15 +1134,15 @@ public final class FastEngine implements CrossSectionEngine {
      * transformed when the block reaches the first slice of a node and kept (real, L/2 + 1 values each) for the
      * node's other slices, which follow it in the work order.
      */
-    private BlockOutput convolveBlock(List<Slice> mine, SliceContext ctx) {
+    private BlockOutput convolveBlock(List<Slice> mine, SliceContext ctx, double[] spectrum, double[] lines,
+                                      double[] kernel) {
         int length = ctx.length;
         int half = length / 2;
         Distribution dist = ctx.dist;
         DoubleFFT_1D fft = ctx.fft;
         BlockOutput out = new BlockOutput();
-        double[] spectrum = new double[length];
-        double[] lines = new double[length];
-        double[] kernel = new double[length];
+        // the block's spectrum is kept from segment to segment: cleared here
+        Arrays.fill(spectrum, 0.0);
         double[] profile = new double[ctx.offsetsCm1.length];
         boolean anyGroup = false;
         for (Slice s : mine) {
