@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ConcurrentLinkedQueue;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -121,18 +123,38 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * own αD range and smallest γL/αD, its Lorentz axis chosen like the Voigt family's. At high pressure nearly every
  * line is in it: one Doppler node instead of six or seven (60 → 16 slices on the 100 atm test set).
  *
- * <p><b>Threads and determinism.</b> The non-empty slices are split into {@value #BLOCKS} fixed contiguous blocks;
+ * <p><b>Segments.</b> The convolutions need not run over the whole internal grid at once: it is cut into consecutive
+ * segments ({@link SegmentLayout}), each convolved in its own ring of one power-of-two length L, of which a segment
+ * owns L − 2K − 8 points (K the kernel reach in internal steps; on resolving-power grids 2·{@value
+ * #INTERPOLATION_MARGIN} fewer, the output interpolation stencil's margin). L minimises the estimated FFT time,
+ * segments × L × t(L), t the measured time per point, which jumps by half beyond 2²⁰ (cache): 10⁶ points with a
+ * 25 cm⁻¹ cutoff at 0.0005 cm⁻¹ take three rings of 2¹⁹ instead of one of 2²¹ (48 % padding). A grid that fits a
+ * small ring stays one segment. The plan — m, families, width axes, error estimate — is chosen once from all
+ * lines, so the error contract is the same; each segment takes the lines whose position stencil lies within the
+ * reach of its points (a line near a boundary goes to both neighbours, with the same weights), the slices non-empty
+ * there, one inverse FFT, and σ at the output points it owns. A convolution is local within K, so σ does not depend
+ * on the cut up to round-off with sampled kernels; analytic kernels are those of the profile periodised around the
+ * ring, so their wing-model remainder (in the estimate) moves with L too (tested: 2×10⁻¹⁴ of max σ at
+ * R = 25 cm⁻¹, 4×10⁻¹⁰ at R/αD = 50). The Lorentz nodes' correction transforms depend on L, h, R and γ only: with
+ * several segments they are kept for all of them (at most a quarter of the heap), else redone per segment.
+ * Plan entries: {@code fast.segments}, {@code fast.segment_fft_length}, {@code fast.segment_points};
+ * {@code fast.slices} and {@code fast.ffts} count over all segments, {@code fast.distinct_slices} the width slices
+ * used anywhere.
+ *
+ * <p><b>Threads and determinism.</b> The segment layout depends on the grid and the reach only. Within a segment the
+ * non-empty slices are split into {@value #BLOCKS} fixed contiguous blocks;
  * each block sums its slices' spectra in slice order, and the blocks are summed in block order, so σ is bitwise the
  * same for any thread count. The FFT library's own threading is switched off (a process-wide JTransforms setting),
  * because this engine already runs slices in parallel.
  *
  * <p><b>Memory.</b> {@link #accumulate} keeps the lines (33 bytes each); {@link #finish} needs 124 bytes per
- * line for the distribution weights plus ({@value #BLOCKS} + 2·threads + 1)·L doubles (on the analytic path
- * 3·threads: two half-length transforms per thread for the Lorentz node's corrections, plus L/2 for a sin²
- * table), where L ≈ m·N + 2K (N output
- * points, K the cutoff in internal steps; without a cutoff K spans every line-to-point distance), rounded up to a
- * power of two. {@link #finish} refuses with an {@link InputException} naming the figures when this exceeds the
- * heap.
+ * line for the distribution weights (computed once, for all segments) plus ({@value #BLOCKS} + 2·threads + 1)·L
+ * doubles (on the analytic path 3·threads: two half-length transforms per thread for the Lorentz node's
+ * corrections, plus L/2 for a sin² table), L the segments' ring length (at most m·N + 2K + 8 rounded up to a power
+ * of two, N output points, K the cutoff in internal steps; without a cutoff K spans every line-to-point distance).
+ * {@link #finish} refuses with an {@link InputException} naming the figures when this exceeds the heap. The shared
+ * node corrections (2·(L/2 + 1) doubles per Lorentz node of the analytic families) are kept only when they fit
+ * within a quarter of the heap and the total within the heap.
  */
 public final class FastEngine implements CrossSectionEngine {
 
@@ -157,6 +179,11 @@ public final class FastEngine implements CrossSectionEngine {
 
     /** Round-off allowance 64·2⁻⁵²·log₂L/10⁻⁶ at the largest L accepted. */
     private static final double ROUND_OFF_ALLOWANCE = 64 * 0x1.0p-52 * 29 / FastErrorModel.DEPTH;
+    /**
+     * Internal points kept each side of a segment on resolving-power grids: the output interpolation stencil
+     * reaches 2 points below and 3 above an output point's lower neighbour.
+     */
+    static final int INTERPOLATION_MARGIN = 3;
     /** Points of the position stencil, and how many of them lie below the line's lower neighbour. */
     private static final int P = FastErrorModel.POSITION_POINTS;
     private static final int SHIFT = P / 2 - 1;
@@ -210,6 +237,8 @@ public final class FastEngine implements CrossSectionEngine {
     /** sin²(πn/L) table of the last FFT length on the analytic path. */
     private double[] sinSquared;
     private final Map<String, String> plan = new LinkedHashMap<>();
+    /** Ring length imposed on the segment layout (a power of two), 0 to choose it from the cost model. */
+    private int forcedRingLength;
 
     /**
      * @param threads   worker threads, at least 1
@@ -246,6 +275,19 @@ public final class FastEngine implements CrossSectionEngine {
             t.setDaemon(true);
             return t;
         });
+    }
+
+    /**
+     * Imposes the segments' ring length instead of the cost model's choice (for tests: a grid forced into several
+     * segments); 0 restores the choice.
+     *
+     * @param ringLength a power of two above twice the kernel reach, or 0
+     */
+    void forceRingLength(int ringLength) {
+        if (ringLength != 0 && Integer.bitCount(ringLength) != 1) {
+            throw new IllegalArgumentException("ring length " + ringLength + " (expected a power of two or 0)");
+        }
+        this.forcedRingLength = ringLength;
     }
 
     @Override
@@ -406,23 +448,35 @@ public final class FastEngine implements CrossSectionEngine {
             sliceReach[s] = (int) Math.min(k, MAX_FFT_LENGTH);
             reach = Math.max(reach, k);
         }
-        long needed = internalPoints + 2 * reach + 8;
-        if (needed > MAX_FFT_LENGTH) {
-            throw new InputException("fast engine: an FFT of " + needed + " points would be needed (grid of " + n
+        // segments of the internal grid, each in its own ring: a segment owning U points needs U + pad ring points
+        // (the reach both sides, guard points and, on resolving-power grids, the interpolation stencil's margin)
+        int margin = uniform ? 0 : INTERPOLATION_MARGIN;
+        long pad = 2 * reach + 8 + 2L * margin;
+        if (pad + 1 > MAX_FFT_LENGTH) {
+            throw new InputException("fast engine: an FFT of " + (pad + 1) + " points would be needed (grid of " + n
                     + " points refined " + m + " times, wing reach " + reach + " steps; at most " + MAX_FFT_LENGTH
                     + "; use a cutoff, a smaller range or the exact engine)");
         }
-        int fftLength = fftLength((int) needed);
+        if (internalPoints + 2 * pad >= Integer.MAX_VALUE) {
+            throw new InputException("fast engine: an internal grid of " + internalPoints + " points (grid of " + n
+                    + " points refined " + m + " times) is beyond the engine's index range; use a smaller range or "
+                    + "the exact engine");
+        }
+        SegmentLayout layout = SegmentLayout.choose(internalPoints, pad, MAX_FFT_LENGTH, forcedRingLength);
+        int fftLength = layout.ringLength();
+        int segments = layout.segments();
         int offset = (int) reach + 4;
         // refuse up front, with the figures, rather than fail half-way for want of heap
         double analyticCutoff = analyticCutoffCm1();
         double wingError = 0;
         boolean anyAnalytic = false;
+        int correctionNodes = 0;
         for (int kind : new int[] {BOTH, DOPPLER_DOMINATED, LORENTZ_DOMINATED}) {
             Family f = families[kind];
             if (f != null && isAnalytic(f, analyticCutoff)) {
                 f.analytic = true;
                 anyAnalytic = true;
+                correctionNodes += f.lorentz.size();
                 wingError = Math.max(wingError, AnalyticKernels.wingModelError(f.alphaMax, analyticCutoff));
             }
         }
@@ -437,46 +491,86 @@ public final class FastEngine implements CrossSectionEngine {
                     + ", " + count + " lines) but the heap allows " + heap / (1 << 20)
                     + " MB; use a cutoff, a smaller range, fewer threads, a larger -Xmx or the exact engine");
         }
+        // the node corrections' transforms depend on the ring length, step, cutoff and γ only: with several
+        // segments they are kept for all segments when that fits (at most a quarter of the heap), else redone
+        long cacheBytes = 2L * correctionNodes * (fftLength / 2 + 1) * Double.BYTES;
+        CorrectionCache cache = segments > 1 && correctionNodes > 0 && cacheBytes <= heap / 4
+                && bytes + cacheBytes <= heap ? new CorrectionCache() : null;
 
-        // distribution weights, line by line
-        Distribution dist = distribute(families, origin, h, offset, fftLength);
-
-        // slices in fixed blocks, spectra summed in a fixed order
+        // distribution weights, line by line, once; which lines each segment takes, per segment
+        Distribution dist = distribute(families, origin, h, -offset - margin,
+                layout.start(segments - 1) - margin - offset + fftLength - P);
         double[] sinSquared = anyAnalytic ? sinSquaredTable(fftLength) : null;
-        Convolution conv = convolveSlices(families, sliceWidths, sliceReach, dist, h, fftLength, analyticCutoff,
-                sinSquared);
-        double[][] blockSpectra = conv.spectra;
-        double[] total = blockSpectra[0];
-        for (int b = 1; b < blockSpectra.length; b++) {
-            double[] add = blockSpectra[b];
-            for (int i = 0; i < fftLength; i++) {
-                total[i] += add[i];
-            }
-            blockSpectra[b] = null;
-        }
-        new DoubleFFT_1D(fftLength).realInverse(total, true);
+        Convolution totals = new Convolution();
+        DoubleFFT_1D fft = new DoubleFFT_1D(fftLength);
+        // the blocks' spectra and the threads' scratch, reused by every segment
+        double[][] spectra = new double[BLOCKS][];
+        ConcurrentLinkedQueue<double[][]> scratch = new ConcurrentLinkedQueue<>();
+        double[] w = uniform ? null : new double[P];
+        int nextOutput = 0;
+        long distinctSlices = 0;
+        boolean[] sliceUsed = new boolean[slices];
+        for (int seg = 0; seg < segments; seg++) {
+            long ownedFrom = layout.start(seg);
+            long ownedTo = layout.end(seg);
+            // ring index r holds internal point ringStart + r − offset
+            long ringStart = ownedFrom - margin;
+            dist.bucket(ringStart - offset, ringStart - offset + fftLength - P, (int) (offset - ringStart));
 
-        // values below zero can only be FFT round-off or the blurred cutoff edge, far below the criterion's
-        // 10⁻⁶·max σ: a cross section is never negative, so they are added as zero
-        if (uniform) {
-            for (int k = 0; k < n; k++) {
-                sigmaCm2PerMolecule[k] += Math.max(0.0, total[offset + k * m]);
+            // slices in fixed blocks, spectra summed in a fixed order
+            Convolution conv = convolveSlices(families, sliceWidths, sliceReach, dist, h, fft, fftLength,
+                    analyticCutoff, sinSquared, cache, sliceUsed, spectra, scratch);
+            totals.add(conv);
+            if (conv.slices == 0) {
+                // no line reaches this segment: σ gets nothing here
+                nextOutput = skipOutputs(points, origin, h, m, uniform, nextOutput, ownedTo, seg == segments - 1);
+                continue;
             }
-        } else {
-            double[] w = new double[P];
-            for (int k = 0; k < n; k++) {
-                double pos = (points[k] - origin) / h;
-                int k0 = (int) Math.floor(pos);
-                LagrangeWeights.centred(P, pos - k0, w, 0);
-                int base = offset + k0 - SHIFT;
-                double value = 0;
-                for (int j = 0; j < P; j++) {
-                    value += w[j] * total[base + j];
+            double[][] blockSpectra = conv.spectra;
+            double[] total = blockSpectra[0];
+            for (int b = 1; b < blockSpectra.length; b++) {
+                double[] add = blockSpectra[b];
+                for (int i = 0; i < fftLength; i++) {
+                    total[i] += add[i];
                 }
-                sigmaCm2PerMolecule[k] += Math.max(0.0, value);
+                blockSpectra[b] = null;
+            }
+            fft.realInverse(total, true);
+            totals.ffts++;
+
+            // values below zero can only be FFT round-off or the blurred cutoff edge, far below the criterion's
+            // 10⁻⁶·max σ: a cross section is never negative, so they are added as zero
+            if (uniform) {
+                // output point k is internal point k·m; this segment's are those in [ownedFrom, ownedTo)
+                int to = (int) Math.min(n, (ownedTo - 1) / m + 1);
+                for (int k = nextOutput; k < to; k++) {
+                    sigmaCm2PerMolecule[k] += Math.max(0.0, total[(int) ((long) k * m - ringStart) + offset]);
+                }
+                nextOutput = Math.max(nextOutput, to);
+            } else {
+                // an output point belongs to the segment owning its lower neighbour k0; its stencil
+                // k0 − 2 … k0 + 3 lies within the margin
+                int k = nextOutput;
+                for (; k < n; k++) {
+                    double pos = (points[k] - origin) / h;
+                    int k0 = (int) Math.floor(pos);
+                    if (k0 >= ownedTo && seg < segments - 1) {
+                        break;
+                    }
+                    LagrangeWeights.centred(P, pos - k0, w, 0);
+                    int base = (int) (k0 - SHIFT - ringStart) + offset;
+                    double value = 0;
+                    for (int j = 0; j < P; j++) {
+                        value += w[j] * total[base + j];
+                    }
+                    sigmaCm2PerMolecule[k] += Math.max(0.0, value);
+                }
+                nextOutput = k;
             }
         }
-
+        for (boolean used : sliceUsed) {
+            distinctSlices += used ? 1 : 0;
+        }
         double widthError = 0;
         for (Family f : families) {
             if (f != null) {
@@ -485,22 +579,31 @@ public final class FastEngine implements CrossSectionEngine {
         }
         double roundOff = 64 * Math.ulp(1.0) * (Math.log(fftLength) / Math.log(2)) / FastErrorModel.DEPTH;
         // the analytic path: the wing model's remainder and the alias tail left out of the transforms
-        double analyticError = conv.analyticSlices > 0 ? wingError + conv.aliasError + conv.curvatureError : 0;
+        double analyticError = totals.analyticSlices > 0
+                ? wingError + totals.aliasError + totals.curvatureError : 0;
         estimate = widthError + positionTotal + roundOff + analyticError;
 
         plan.put("fast.lines", Integer.toString(count));
         plan.put("fast.oversampling", Integer.toString(m));
         plan.put("fast.internal_step_cm1", Double.toString(h));
+        plan.put("fast.internal_points", Long.toString(internalPoints));
+        plan.put("fast.segments", Integer.toString(segments));
+        plan.put("fast.segment_fft_length", Integer.toString(fftLength));
+        plan.put("fast.segment_points", Long.toString(layout.end(0) - layout.start(0)));
+        // kept for readers of the one-ring plan: the length of every FFT done
         plan.put("fast.fft_length", Integer.toString(fftLength));
-        plan.put("fast.slices", Integer.toString(dist.nonEmptySlices));
-        plan.put("fast.analytic_slices", Integer.toString(conv.analyticSlices));
-        plan.put("fast.correction_kernels", Integer.toString(conv.corrections));
-        plan.put("fast.ffts", Integer.toString(conv.ffts + 1));
-        if (conv.analyticSlices > 0) {
+        // slice convolutions summed over the segments, and distinct width slices used anywhere
+        plan.put("fast.slices", Integer.toString(totals.slices));
+        plan.put("fast.distinct_slices", Long.toString(distinctSlices));
+        plan.put("fast.analytic_slices", Integer.toString(totals.analyticSlices));
+        plan.put("fast.correction_kernels", Integer.toString(totals.corrections));
+        plan.put("fast.correction_kernels_shared", Boolean.toString(cache != null));
+        plan.put("fast.ffts", Integer.toString(totals.ffts));
+        if (totals.analyticSlices > 0) {
             plan.put("fast.analytic_cutoff_cm1", Double.toString(analyticCutoff));
             plan.put("fast.wing_model_error", String.format(Locale.ROOT, "%.3e", wingError));
-            plan.put("fast.alias_error", String.format(Locale.ROOT, "%.3e", conv.aliasError));
-            plan.put("fast.omitted_curvature_error", String.format(Locale.ROOT, "%.3e", conv.curvatureError));
+            plan.put("fast.alias_error", String.format(Locale.ROOT, "%.3e", totals.aliasError));
+            plan.put("fast.omitted_curvature_error", String.format(Locale.ROOT, "%.3e", totals.curvatureError));
         }
         for (int fi = 0; fi < families.length; fi++) {
             Family f = families[fi];
@@ -713,19 +816,57 @@ public final class FastEngine implements CrossSectionEngine {
         }
     }
 
-    /** Per-line stencils and weights, with lines ordered by their (family, Doppler, Lorentz) stencil. */
+    /**
+     * Per-line stencils and weights (computed once for all segments), and the current segment's lines ordered by
+     * their (family, Doppler, Lorentz) stencil.
+     */
     private static final class Distribution {
-        int[] order;
-        /** bucketStart[key] .. bucketStart[key+1]: lines of stencil key in {@link #order}. */
-        int[] bucketStart;
+        /** Stencil key of each line, −1 for a line outside every ring. */
+        int[] key;
+        /** Internal grid index of each line's first position node. */
         int[] firstPoint;
         double[] positionWeights;
         double[] dopplerWeights;
         double[] lorentzWeights;
-        int nonEmptySlices;
+        /** The current segment's lines: bucketStart[key] .. bucketStart[key+1] of stencil key in {@link #order}. */
+        int[] order;
+        int[] bucketStart;
+        /** Ring index of internal point j in the current segment: j + shift. */
+        int shift;
+
+        /**
+         * Orders the lines whose first position node lies in [lo, hi] (internal indices: their whole stencil then
+         * lies in the segment's ring) by stencil key, in line order within a key.
+         */
+        void bucket(long lo, long hi, int ringShift) {
+            int keys = bucketStart.length - 1;
+            Arrays.fill(bucketStart, 0);
+            int n = key.length;
+            for (int i = 0; i < n; i++) {
+                int p = firstPoint[i];
+                if (key[i] >= 0 && p >= lo && p <= hi) {
+                    bucketStart[key[i] + 1]++;
+                }
+            }
+            for (int k = 0; k < keys; k++) {
+                bucketStart[k + 1] += bucketStart[k];
+            }
+            int[] fill = Arrays.copyOf(bucketStart, keys);
+            for (int i = 0; i < n; i++) {
+                int p = firstPoint[i];
+                if (key[i] >= 0 && p >= lo && p <= hi) {
+                    order[fill[key[i]]++] = i;
+                }
+            }
+            shift = ringShift;
+        }
     }
 
-    private Distribution distribute(Family[] families, double origin, double h, int offset, int fftLength) {
+    /**
+     * Position, Doppler and Lorentz weights of every line; lines whose first position node lies outside
+     * [lo, hi] (internal indices) are in no ring: they lie farther than the kernel reach from every point.
+     */
+    private Distribution distribute(Family[] families, double origin, double h, long lo, long hi) {
         int[] firstPoint = new int[count];
         int[] key = new int[count];
         double[] pw = new double[P * count];
@@ -739,12 +880,11 @@ public final class FastEngine implements CrossSectionEngine {
                 keys += families[kind].doppler.size() * families[kind].lorentz.size();
             }
         }
-        int[] bucketCount = new int[keys + 1];
         for (int i = 0; i < count; i++) {
             double pos = (centerCm1[i] - origin) / h;
             double floor = Math.floor(pos);
-            // lines whose stencil leaves the FFT buffer lie farther than the kernel reach from every point
-            if (floor - SHIFT + offset < 0 || floor - SHIFT + P - 1 + offset >= fftLength) {
+            // compared as doubles: a line far off the grid may lie beyond the int range
+            if (floor - SHIFT < lo || floor - SHIFT > hi) {
                 key[i] = -1;
                 continue;
             }
@@ -753,31 +893,21 @@ public final class FastEngine implements CrossSectionEngine {
             for (int j = 0; j < P; j++) {
                 pw[P * i + j] *= strength[i];
             }
-            firstPoint[i] = k0 - SHIFT + offset;
+            firstPoint[i] = k0 - SHIFT;
             int kind = familyOf(i);
             Family f = families[kind];
             int jg = f.doppler.stencil(dopplerCm1[i], gw, 4 * i);
             int jl = f.lorentz.stencil(lorentzCm1[i], lw, 4 * i);
             key[i] = familyKeyBase[kind] + jg * f.lorentz.size() + jl;
-            bucketCount[key[i] + 1]++;
-        }
-        for (int k = 0; k < keys; k++) {
-            bucketCount[k + 1] += bucketCount[k];
-        }
-        int[] fill = Arrays.copyOf(bucketCount, keys);
-        int[] order = new int[bucketCount[keys]];
-        for (int i = 0; i < count; i++) {
-            if (key[i] >= 0) {
-                order[fill[key[i]]++] = i;
-            }
         }
         Distribution d = new Distribution();
-        d.order = order;
-        d.bucketStart = bucketCount;
+        d.key = key;
         d.firstPoint = firstPoint;
         d.positionWeights = pw;
         d.dopplerWeights = gw;
         d.lorentzWeights = lw;
+        d.order = new int[count];
+        d.bucketStart = new int[keys + 1];
         return d;
     }
 
@@ -812,11 +942,22 @@ public final class FastEngine implements CrossSectionEngine {
     /** The summed spectra of the blocks and what it took. */
     private static final class Convolution {
         double[][] spectra;
+        int slices;
         int ffts;
         int analyticSlices;
         int corrections;
         double aliasError;
         double curvatureError;
+
+        /** Adds another segment's counts (not its spectra). */
+        void add(Convolution other) {
+            slices += other.slices;
+            ffts += other.ffts;
+            analyticSlices += other.analyticSlices;
+            corrections += other.corrections;
+            aliasError = Math.max(aliasError, other.aliasError);
+            curvatureError = Math.max(curvatureError, other.curvatureError);
+        }
     }
 
     /** One block's spectrum and counts. */
@@ -839,11 +980,38 @@ public final class FastEngine implements CrossSectionEngine {
         double cutoffCm1;
         boolean removePedestal;
         double[] sinSquared;
+        /** Node corrections kept across segments, or null: each block transforms its own. */
+        CorrectionCache corrections;
+    }
+
+    /**
+     * Transforms of the Lorentz nodes' correction kernels (real, L/2 + 1 values each), kept for all segments of one
+     * {@link #finish}: they depend on γ, the ring length, the step and the cutoff only. Whichever block first needs
+     * one computes it; the values do not depend on which, so results stay bitwise the same for any thread count.
+     */
+    private static final class CorrectionCache {
+        private final ConcurrentHashMap<Long, double[]> plain = new ConcurrentHashMap<>();
+        private final ConcurrentHashMap<Long, double[]> curvature = new ConcurrentHashMap<>();
+
+        /** The node's correction transform (its second-derivative kernel when {@code second}), counted in out. */
+        double[] get(double lorentzCm1, boolean second, double[] scratch, SliceContext ctx, BlockOutput out) {
+            return (second ? curvature : plain).computeIfAbsent(Double.doubleToLongBits(lorentzCm1), k -> {
+                double[] half = new double[ctx.length / 2 + 1];
+                correctionTransform(lorentzCm1, second, scratch, half, ctx);
+                out.ffts++;
+                if (!second) {
+                    out.corrections++;
+                }
+                return half;
+            });
+        }
     }
 
     private Convolution convolveSlices(Family[] families, List<double[]> sliceWidths, int[] sliceReach,
-                                       Distribution dist, double h, int fftLength, double analyticCutoffCm1,
-                                       double[] sinSquared) {
+                                       Distribution dist, double h, DoubleFFT_1D fft, int fftLength,
+                                       double analyticCutoffCm1, double[] sinSquared, CorrectionCache cache,
+                                       boolean[] sliceUsed, double[][] spectra,
+                                       ConcurrentLinkedQueue<double[][]> scratch) {
         // the non-empty slices in family order; within an analytic family Lorentz-node major, so that the slices
         // sharing a Lorentz node (and so a wing correction) are contiguous; otherwise Doppler-node major
         List<Slice> work = new ArrayList<>();
@@ -862,6 +1030,7 @@ public final class FastEngine implements CrossSectionEngine {
                     int il = f.analytic ? outer : inner;
                     if (linesOfSlice(f, keyBase, ig, il, dist) > 0) {
                         int s = f.firstSlice + ig * nl + il;
+                        sliceUsed[s] = true;
                         work.add(new Slice(f, keyBase, ig, il, sliceWidths.get(s), sliceReach[s],
                                 f.analytic ? groups : -1));
                         groupUsed = true;
@@ -873,11 +1042,11 @@ public final class FastEngine implements CrossSectionEngine {
             }
             keyBase += f.doppler.size() * nl;
         }
-        dist.nonEmptySlices = work.size();
         int blocks = Math.max(1, Math.min(BLOCKS, work.size()));
         SliceContext ctx = new SliceContext();
         ctx.dist = dist;
-        ctx.fft = new DoubleFFT_1D(fftLength);
+        ctx.fft = fft;
+        ctx.corrections = cache;
         ctx.length = fftLength;
         ctx.stepCm1 = h;
         ctx.cutoffCm1 = analyticCutoffCm1;
@@ -896,9 +1065,25 @@ public final class FastEngine implements CrossSectionEngine {
             int from = (int) ((long) b * work.size() / blocks);
             int to = (int) ((long) (b + 1) * work.size() / blocks);
             List<Slice> mine = work.subList(from, to);
-            tasks.add(() -> convolveBlock(mine, ctx));
+            if (spectra[b] == null) {
+                spectra[b] = new double[fftLength];
+            }
+            double[] spectrum = spectra[b];
+            tasks.add(() -> {
+                // lines and kernel scratch: at most one pair per running thread, fully overwritten before use
+                double[][] pair = scratch.poll();
+                if (pair == null) {
+                    pair = new double[][] {new double[fftLength], new double[fftLength]};
+                }
+                try {
+                    return convolveBlock(mine, ctx, spectrum, pair[0], pair[1]);
+                } finally {
+                    scratch.add(pair);
+                }
+            });
         }
         Convolution result = new Convolution();
+        result.slices = work.size();
         result.spectra = new double[blocks][];
         try {
             List<Future<BlockOutput>> futures = pool.invokeAll(tasks);
@@ -949,22 +1134,23 @@ public final class FastEngine implements CrossSectionEngine {
      * transformed when the block reaches the first slice of a node and kept (real, L/2 + 1 values each) for the
      * node's other slices, which follow it in the work order.
      */
-    private BlockOutput convolveBlock(List<Slice> mine, SliceContext ctx) {
+    private BlockOutput convolveBlock(List<Slice> mine, SliceContext ctx, double[] spectrum, double[] lines,
+                                      double[] kernel) {
         int length = ctx.length;
         int half = length / 2;
         Distribution dist = ctx.dist;
         DoubleFFT_1D fft = ctx.fft;
         BlockOutput out = new BlockOutput();
-        double[] spectrum = new double[length];
-        double[] lines = new double[length];
-        double[] kernel = new double[length];
+        // the block's spectrum is kept from segment to segment: cleared here
+        Arrays.fill(spectrum, 0.0);
         double[] profile = new double[ctx.offsetsCm1.length];
         boolean anyGroup = false;
         for (Slice s : mine) {
             anyGroup |= s.group >= 0 && s.lorentzCm1 > 0;
         }
-        double[] plainCorrection = anyGroup ? new double[half + 1] : null;
-        double[] curvatureCorrection = anyGroup ? new double[half + 1] : null;
+        boolean own = anyGroup && ctx.corrections == null;
+        double[] plainCorrection = own ? new double[half + 1] : null;
+        double[] curvatureCorrection = own ? new double[half + 1] : null;
         int loadedGroup = -1;
         boolean curvatureLoaded = false;
         for (Slice s : mine) {
@@ -973,17 +1159,23 @@ public final class FastEngine implements CrossSectionEngine {
             out.ffts++;
             boolean corrected = s.group >= 0 && s.lorentzCm1 > 0;
             if (corrected && s.group != loadedGroup) {
-                correctionTransform(s.lorentzCm1, false, kernel, plainCorrection, ctx);
-                out.ffts++;
-                out.corrections++;
+                if (own) {
+                    correctionTransform(s.lorentzCm1, false, kernel, plainCorrection, ctx);
+                    out.ffts++;
+                    out.corrections++;
+                } else {
+                    plainCorrection = ctx.corrections.get(s.lorentzCm1, false, kernel, ctx, out);
+                }
                 // the curvature term's largest effect, relative to the node's lowest line peak: left out (one FFT
                 // less) when far below round-off, and then counted in the estimate
                 double widestDoppler = s.family.doppler.widthCm1(s.family.doppler.size() - 1);
                 double curvature = curvatureBound(widestDoppler, s.lorentzCm1, ctx.cutoffCm1);
                 curvatureLoaded = curvature > NEGLIGIBLE_CURVATURE;
-                if (curvatureLoaded) {
+                if (curvatureLoaded && own) {
                     correctionTransform(s.lorentzCm1, true, kernel, curvatureCorrection, ctx);
                     out.ffts++;
+                } else if (curvatureLoaded) {
+                    curvatureCorrection = ctx.corrections.get(s.lorentzCm1, true, kernel, ctx, out);
                 } else {
                     out.curvatureError = Math.max(out.curvatureError, curvature / FastErrorModel.DEPTH);
                 }
@@ -1052,7 +1244,7 @@ public final class FastEngine implements CrossSectionEngine {
                 for (int q = dist.bucketStart[k]; q < dist.bucketStart[k + 1]; q++) {
                     int i = dist.order[q];
                     double w = dist.dopplerWeights[4 * i + gIndex] * dist.lorentzWeights[4 * i + lIndex];
-                    int p = dist.firstPoint[i];
+                    int p = dist.firstPoint[i] + dist.shift;
                     for (int j = 0; j < P; j++) {
                         lines[p + j] += w * dist.positionWeights[P * i + j];
                     }
@@ -1150,6 +1342,26 @@ public final class FastEngine implements CrossSectionEngine {
             kernelOut[r] = profileScratch[r];
             kernelOut[length - r] = profileScratch[r];
         }
+    }
+
+    /**
+     * The first output point after segment's own ones (those whose internal point, or on resolving-power grids
+     * whose interpolation stencil's lower neighbour, lies before {@code ownedTo}), as the output loops count them.
+     */
+    private static int skipOutputs(double[] points, double origin, double h, int m, boolean uniform, int next,
+                                   long ownedTo, boolean last) {
+        int n = points.length;
+        if (last) {
+            return n;
+        }
+        if (uniform) {
+            return (int) Math.max(next, Math.min(n, (ownedTo - 1) / m + 1));
+        }
+        int k = next;
+        while (k < n && (int) Math.floor((points[k] - origin) / h) < ownedTo) {
+            k++;
+        }
+        return k;
     }
 
     /**

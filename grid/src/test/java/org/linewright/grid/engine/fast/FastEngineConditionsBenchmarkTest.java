@@ -49,8 +49,8 @@ import org.linewright.ingest.units.PhysicalConstants;
 class FastEngineConditionsBenchmarkTest {
 
     private static final int BLOCK = 20_000;
-    private static final double FIRST_CM1 = 2000.0;
-    private static final double SPACING_CM1 = 0.0005;
+    static final double FIRST_CM1 = 2000.0;
+    static final double SPACING_CM1 = 0.0005;
     private static final int THREADS = 2;
     private static final double[] PRESSURES_BAR = {1e-4, 1.0, 100.0};
     private static final double[] TEMPERATURES_K = {200.0, 2000.0};
@@ -137,18 +137,18 @@ class FastEngineConditionsBenchmarkTest {
     }
 
     /** CPU time of the whole process (all threads, GC included), ns. */
-    private static long processCpuNanos() {
+    static long processCpuNanos() {
         return ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory
                 .getOperatingSystemMXBean()).getProcessCpuTime();
     }
 
-    private static String load() throws IOException {
+    static String load() throws IOException {
         String[] f = Files.readString(Path.of("/proc/loadavg")).trim().split(" ");
         return f[0];
     }
 
     /** The grid targets' synthetic list, written straight into a store. */
-    private static LineStore writeStore(Path storeDir, long lines) throws IOException {
+    static LineStore writeStore(Path storeDir, long lines) throws IOException {
         LineBatch b = SyntheticRecords.block(BLOCK, 7);
         try (LineStoreWriter writer = LineStoreWriter.create(storeDir, "synthetic",
                 SourceMetadata.of("synthetic-co.par", "", "hitran160", Map.of("generator", "benchmark")))) {
@@ -168,7 +168,7 @@ class FastEngineConditionsBenchmarkTest {
     }
 
     /** Keeps a copy of the engine input. */
-    private static final class Recorder implements CrossSectionEngine {
+    static final class Recorder implements CrossSectionEngine {
         final List<LineChunk> chunks = new ArrayList<>();
 
         @Override
