@@ -18,7 +18,6 @@ import org.linewright.grid.calc.ProgressListener;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.EngineFactory;
-import org.linewright.grid.engine.fast.FastEngine;
 import org.linewright.grid.plan.TablePlan;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.registry.MoleculeRegistry;
@@ -30,13 +29,6 @@ import org.linewright.ingest.store.LineStore;
  * centres lie within the block's reach. The engine uses the build's threads (same bits for any count).
  */
 public final class CalculatorBlocks implements BlockCalculator {
-    /**
-     * The fast engine's block rule: FFT length ≥ 2.5 × the padding on both sides, so that ≥ 60 % of every
-     * block's transform is the block itself (measured against 1.25 and 5 in docs/performance.md, "Grid: table
-     * blocks sized for the engine").
-     */
-    public static final double TRANSFORM_EFFICIENCY_FACTOR = 2.5;
-
     private final CrossSectionCalculator calculator;
     private final CrossSectionEngine engine;
     private final TablePlan plan;
@@ -86,17 +78,9 @@ public final class CalculatorBlocks implements BlockCalculator {
                 r.estimatedRelativeError(), r.warnings());
     }
 
-    /**
-     * The engine's preference; for the fast engine the power-of-two transform rule of {@link
-     * CrossSectionEngine#transformBlockPoints} with factor {@value #TRANSFORM_EFFICIENCY_FACTOR}.
-     */
+    /** The engine's preference ({@link CrossSectionEngine#preferredBlockPoints}). */
     @Override
     public int preferredBlockPoints(WavenumberGrid grid, double paddingCm1) {
-        // The fast engine states no preference of its own yet (its package is being revised separately); its
-        // rule is applied here until it overrides CrossSectionEngine#preferredBlockPoints itself.
-        if (engine instanceof FastEngine) {
-            return CrossSectionEngine.transformBlockPoints(grid, paddingCm1, TRANSFORM_EFFICIENCY_FACTOR);
-        }
         return engine.preferredBlockPoints(grid, paddingCm1);
     }
 

@@ -49,6 +49,22 @@ class LineCacheTest {
         LineCache.Loaded changed = LineCache.load(List.of(raw), cache, registry, IngestListener.NONE);
         assertEquals(1, changed.ingested());
         assertEquals(100, changed.stores().get(0).totalLines());
+        // ingested in one pass, yet recorded under the file's own SHA-256 (JDK digest of the bytes)
+        String changedSha = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(raw)));
+        assertEquals(changedSha, changed.inputSha256().get("co.par"));
+        assertTrue(Files.isDirectory(cache.resolve(changedSha.substring(0, 24) + "-v" + ToolVersion.get())));
+
+        // the first content again under a new time stamp: not seen, so read once, and its entry is found and reused
+        Files.copy(sample, raw, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        Files.setLastModifiedTime(raw, java.nio.file.attribute.FileTime.fromMillis(1_000_000_000_000L));
+        LineCache.Loaded back = LineCache.load(List.of(raw), cache, registry, IngestListener.NONE);
+        assertEquals(0, back.ingested());
+        assertEquals(1, back.reused());
+        assertEquals(sha, back.inputSha256().get("co.par"));
+        assertEquals(5381, back.stores().get(0).totalLines());
+        try (var entries = Files.list(cache)) {
+            assertTrue(entries.noneMatch(p -> p.getFileName().toString().startsWith(".partial-")), "no partial entry left");
+        }
     }
 
     @Test
