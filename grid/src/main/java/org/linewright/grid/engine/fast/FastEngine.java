@@ -404,7 +404,7 @@ public final class FastEngine implements CrossSectionEngine {
         double positionError = 0;
         for (Family f : families) {
             if (f != null) {
-                positionError = Math.max(positionError, FastErrorModel.positionError(h, f.alphaMin, f.gammaMin));
+                positionError = Math.max(positionError, FastErrorModel.Planner.position(h, f.alphaMin, f.gammaMin));
             }
         }
         double positionTotal = uniform ? positionError : 2 * positionError;
@@ -653,7 +653,7 @@ public final class FastEngine implements CrossSectionEngine {
         double positionError = 0;
         for (Family f : families) {
             if (f != null) {
-                positionError = Math.max(positionError, FastErrorModel.positionError(h, f.alphaMin, f.gammaMin));
+                positionError = Math.max(positionError, FastErrorModel.Planner.position(h, f.alphaMin, f.gammaMin));
             }
         }
         double positionTotal = uniform ? positionError : 2 * positionError;
@@ -685,8 +685,7 @@ public final class FastEngine implements CrossSectionEngine {
             return;
         }
         double ratio = alphaMin / gammaMax;
-        double step = FastErrorModel.largestStep(s -> FastErrorModel.lorentzAxisError(s, ratio), budget / 2,
-                MIN_LOG_STEP, MAX_LOG_STEP);
+        double step = FastErrorModel.Planner.lorentzStep(ratio, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP);
         double floorCm1 = lorentzFloorCm1(alphaMin, step, budget / 2);
         double split = floorCm1 * Math.exp(step);
         if (gammaMin < split) {
@@ -720,11 +719,9 @@ public final class FastEngine implements CrossSectionEngine {
         }
         double lo = alphaMin;
         double hi = alphaMax;
-        // error grows with 1/r: the largest 1/r within half the budget
-        double inverse = FastErrorModel.largestStep(x -> FastErrorModel.singleDopplerNodeError(lo, hi, 1 / x),
-                budget / 2, 1 / MAX_SPLIT_RATIO, 1.0);
-        double ratio = 1 / inverse;
-        if (FastErrorModel.singleDopplerNodeError(lo, hi, ratio) <= budget / 2 && gammaMax >= ratio * alphaMin) {
+        // error grows with 1/r: the smallest r (largest 1/r) within half the budget
+        double ratio = FastErrorModel.Planner.singleNodeSplitRatio(lo, hi, budget / 2, 1 / MAX_SPLIT_RATIO, 1.0);
+        if (ratio < Double.POSITIVE_INFINITY && gammaMax >= ratio * alphaMin) {
             highSplitRatio = ratio;
         }
     }
@@ -742,15 +739,14 @@ public final class FastEngine implements CrossSectionEngine {
             } else if (kind == LORENTZ_DOMINATED) {
                 // one Doppler node, in the middle of the family's αD² range; error measured at its smallest γL/αD
                 f.doppler = WidthAxis.exact(FastErrorModel.singleDopplerNode(f.alphaMin, f.alphaMax));
-                f.dopplerError = FastErrorModel.singleDopplerNodeError(f.alphaMin, f.alphaMax, f.minLorentzOverDoppler);
+                f.dopplerError = FastErrorModel.Planner.singleNodeError(f.alphaMin, f.alphaMax, f.minLorentzOverDoppler);
             } else {
                 // worst case for the Doppler axis: the most Gaussian line, smallest γL/αD
                 double ratio = f.gammaMin / f.alphaMax;
-                double step = FastErrorModel.largestStep(s -> FastErrorModel.dopplerAxisError(s, ratio), budget / 2,
-                        MIN_LOG_STEP, MAX_LOG_STEP);
+                double step = FastErrorModel.Planner.dopplerStep(ratio, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP);
                 f.doppler = WidthAxis.geometric(f.alphaMin, f.alphaMax, step, 2);
                 f.dopplerError = f.doppler.stencilSize() == 1 ? 0
-                        : FastErrorModel.dopplerAxisError(f.doppler.logStep(), ratio);
+                        : FastErrorModel.Planner.dopplerError(f.doppler.logStep(), ratio);
             }
             if (f.gammaMax == 0) {
                 f.lorentz = WidthAxis.exact(0.0);
@@ -759,16 +755,15 @@ public final class FastEngine implements CrossSectionEngine {
                 // family's own smallest αD (the floor was chosen at the smallest αD of all, within half the budget)
                 f.lorentz = WidthAxis.floored(lowFloorCm1, f.gammaMax, lowLogStep);
                 f.lorentzFloorCm1 = lowFloorCm1;
-                f.lorentzError = FastErrorModel.flooredLorentzError(f.lorentz.logStep(), f.alphaMin / lowFloorCm1);
+                f.lorentzError = FastErrorModel.Planner.floorError(f.lorentz.logStep(), f.alphaMin / lowFloorCm1);
             } else {
                 // worst case for the Lorentz axis: the most Lorentzian line, smallest αD/γL
                 double ratio = f.alphaMin / f.gammaMax;
                 double lorentzBudget = budget - f.dopplerError;
-                double step = FastErrorModel.largestStep(s -> FastErrorModel.lorentzAxisError(s, ratio),
-                        lorentzBudget, MIN_LOG_STEP, MAX_LOG_STEP);
+                double step = FastErrorModel.Planner.lorentzStep(ratio, lorentzBudget, MIN_LOG_STEP, MAX_LOG_STEP);
                 f.lorentz = WidthAxis.geometric(f.gammaMin, f.gammaMax, step, 1);
                 f.lorentzError = f.lorentz.stencilSize() == 1 ? 0
-                        : FastErrorModel.lorentzAxisError(f.lorentz.logStep(), ratio);
+                        : FastErrorModel.Planner.lorentzError(f.lorentz.logStep(), ratio);
             }
         }
     }
@@ -781,8 +776,7 @@ public final class FastEngine implements CrossSectionEngine {
      * the Voigt profile, to the criterion's depth, is interpolated from the zero node and the floor's nodes.
      */
     static double lorentzFloorCm1(double alphaMinCm1, double logStep, double budget) {
-        double r = FastErrorModel.largestStep(x -> FastErrorModel.flooredLorentzError(logStep, 1 / x), budget,
-                MIN_FLOOR_RATIO, 1.0);
+        double r = FastErrorModel.Planner.floorRatio(logStep, budget, MIN_FLOOR_RATIO, 1.0);
         return r * alphaMinCm1;
     }
 
@@ -806,7 +800,7 @@ public final class FastEngine implements CrossSectionEngine {
             double worst = 0;
             for (Family f : families) {
                 if (f != null) {
-                    worst = Math.max(worst, FastErrorModel.positionError(outputStep / m, f.alphaMin, f.gammaMin));
+                    worst = Math.max(worst, FastErrorModel.Planner.position(outputStep / m, f.alphaMin, f.gammaMin));
                 }
             }
             if (worst <= share || m >= MAX_OVERSAMPLING) {

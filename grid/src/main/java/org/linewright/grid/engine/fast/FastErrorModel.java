@@ -16,6 +16,19 @@ import org.linewright.broadening.voigt.VoigtProfile;
  */
 final class FastErrorModel {
 
+    /**
+     * Spacing in ln of the grid that {@link Planner}'s arguments are rounded to (1/64: 1.6 %), always towards the
+     * worse side, so that a rounded call bounds the exact one from above.
+     */
+    static final double ROUNDING_LOG_STEP = 1.0 / 64;
+    /** Largest number of remembered results before the memory is emptied (results do not depend on it). */
+    private static final int MEMORY_LIMIT = 100_000;
+    private static final java.util.concurrent.ConcurrentHashMap<MemoKey, Double> MEMORY =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
+    private record MemoKey(int kind, double a, double b, double c, double d) {
+    }
+
     /** Depth of the criterion: the engine's tolerance applies where σ ≥ 10⁻⁶·max σ. */
     static final double DEPTH = 1e-6;
     /** Points of the position stencil: six, so the position error falls as h⁶ (fewer refinements for narrow lines). */
@@ -213,5 +226,130 @@ final class FastErrorModel {
             }
         }
         return Math.exp(lo);
+    }
+
+    /**
+     * The error measures and step searches as the engine uses them, with their arguments reduced to dimensionless
+     * ratios (the relative error of a profile does not depend on the width scale), rounded on a log grid of
+     * {@link #ROUNDING_LOG_STEP} towards the worse side and remembered across calls. Each measure costs some 25 000
+     * profile evaluations and a step search up to 26 measures; an engine plans every table block afresh from its
+     * own lines, whose width ranges differ only slightly from block to block and from one (p, T) to the next, so
+     * most plans repeat an earlier search exactly. Rounding keeps every answer conservative: an error is measured
+     * at a ratio at least as unfavourable as the true one (the measures fall as a line gets wider relative to the
+     * step or the node spacing, more Gaussian for the Lorentz axis and more Lorentzian for the Doppler axis — the
+     * monotonicity {@code FastErrorModelTest} checks), and a search runs with a budget rounded down. Results are
+     * pure functions of their arguments, so remembering them changes no bit of σ.
+     */
+    static final class Planner {
+        private static final int DOPPLER_STEP = 1;
+        private static final int LORENTZ_STEP = 2;
+        private static final int FLOOR_RATIO = 3;
+        private static final int SINGLE_NODE_INVERSE = 4;
+        private static final int SINGLE_NODE_ERROR = 5;
+        private static final int POSITION = 6;
+        private static final int DOPPLER_ERROR = 7;
+        private static final int LORENTZ_ERROR = 8;
+        private static final int FLOOR_ERROR = 9;
+
+        private Planner() {
+        }
+
+        /** {@code v} rounded up on the log grid (0 and negative values unchanged). */
+        static double up(double v) {
+            return v > 0 && Double.isFinite(v) ? Math.exp(Math.ceil(Math.log(v) / ROUNDING_LOG_STEP) * ROUNDING_LOG_STEP) : v;
+        }
+
+        /** {@code v} rounded down on the log grid (0 and negative values unchanged). */
+        static double down(double v) {
+            return v > 0 && Double.isFinite(v) ? Math.exp(Math.floor(Math.log(v) / ROUNDING_LOG_STEP) * ROUNDING_LOG_STEP) : v;
+        }
+
+        private static double remember(int kind, double a, double b, double c, double d,
+                                       java.util.function.DoubleSupplier measure) {
+            MemoKey key = new MemoKey(kind, a, b, c, d);
+            Double known = MEMORY.get(key);
+            if (known != null) {
+                return known;
+            }
+            double value = measure.getAsDouble();
+            if (MEMORY.size() >= MEMORY_LIMIT) {
+                MEMORY.clear();
+            }
+            MEMORY.put(key, value);
+            return value;
+        }
+
+        /** {@link #largestStep} of {@link #dopplerAxisError} at γL/αD = {@code lorentzOverDoppler}. */
+        static double dopplerStep(double lorentzOverDoppler, double budget, double minStep, double maxStep) {
+            double r = down(lorentzOverDoppler);
+            double b = down(budget);
+            return remember(DOPPLER_STEP, r, b, minStep, maxStep,
+                    () -> largestStep(s -> dopplerAxisError(s, r), b, minStep, maxStep));
+        }
+
+        /** {@link #largestStep} of {@link #lorentzAxisError} at αD/γL = {@code dopplerOverLorentz}. */
+        static double lorentzStep(double dopplerOverLorentz, double budget, double minStep, double maxStep) {
+            double r = down(dopplerOverLorentz);
+            double b = down(budget);
+            return remember(LORENTZ_STEP, r, b, minStep, maxStep,
+                    () -> largestStep(s -> lorentzAxisError(s, r), b, minStep, maxStep));
+        }
+
+        /** The largest floor ratio x = γ_f/αD in [min, max] with {@link #flooredLorentzError}(δ, 1/x) within budget. */
+        static double floorRatio(double logStep, double budget, double minRatio, double maxRatio) {
+            double b = down(budget);
+            return remember(FLOOR_RATIO, logStep, b, minRatio, maxRatio,
+                    () -> largestStep(x -> flooredLorentzError(logStep, 1 / x), b, minRatio, maxRatio));
+        }
+
+        /**
+         * The smallest ratio r = γL/αD, 1/r in [min, max], from which one Doppler node keeps {@link
+         * #singleDopplerNodeError}(lo, hi, r) within budget, for lines of αD in [lo, hi] (the error depends on hi/lo
+         * only, rounded up; it grows with 1/r); +∞ when even 1/r = min exceeds the budget.
+         */
+        static double singleNodeSplitRatio(double loCm1, double hiCm1, double budget, double min, double max) {
+            double spread = up(hiCm1 / loCm1);
+            double b = down(budget);
+            return remember(SINGLE_NODE_INVERSE, spread, b, min, max, () -> {
+                double inverse = largestStep(x -> singleDopplerNodeError(1.0, spread, 1 / x), b, min, max);
+                return singleDopplerNodeError(1.0, spread, 1 / inverse) <= b ? 1 / inverse : Double.POSITIVE_INFINITY;
+            });
+        }
+
+        /** {@link #singleDopplerNodeError}, rounded to the worse side. */
+        static double singleNodeError(double loCm1, double hiCm1, double lorentzOverDoppler) {
+            double spread = up(hiCm1 / loCm1);
+            double r = down(lorentzOverDoppler);
+            return remember(SINGLE_NODE_ERROR, spread, r, 0, 0, () -> singleDopplerNodeError(1.0, spread, r));
+        }
+
+        /** {@link #positionError}, with h/αD rounded up and γL/αD down (h/γL up for pure Lorentz lines). */
+        static double position(double stepCm1, double dopplerHwhmCm1, double lorentzHwhmCm1) {
+            if (dopplerHwhmCm1 > 0) {
+                double h = up(stepCm1 / dopplerHwhmCm1);
+                double g = down(lorentzHwhmCm1 / dopplerHwhmCm1);
+                return remember(POSITION, h, 1, g, 0, () -> positionError(h, 1.0, g));
+            }
+            double h = up(stepCm1 / lorentzHwhmCm1);
+            return remember(POSITION, h, 0, 1, 0, () -> positionError(h, 0.0, 1.0));
+        }
+
+        /** {@link #dopplerAxisError} with the ratio rounded down. */
+        static double dopplerError(double logStep, double lorentzOverDoppler) {
+            double r = down(lorentzOverDoppler);
+            return remember(DOPPLER_ERROR, logStep, r, 0, 0, () -> dopplerAxisError(logStep, r));
+        }
+
+        /** {@link #lorentzAxisError} with the ratio rounded down. */
+        static double lorentzError(double logStep, double dopplerOverLorentz) {
+            double r = down(dopplerOverLorentz);
+            return remember(LORENTZ_ERROR, logStep, r, 0, 0, () -> lorentzAxisError(logStep, r));
+        }
+
+        /** {@link #flooredLorentzError} with the ratio rounded down. */
+        static double floorError(double logStep, double dopplerOverFloor) {
+            double r = down(dopplerOverFloor);
+            return remember(FLOOR_ERROR, logStep, r, 0, 0, () -> flooredLorentzError(logStep, r));
+        }
     }
 }

@@ -79,4 +79,34 @@ class FastErrorModelTest {
         // and it only falls as αD grows against the floor: the smallest αD of a family is its worst case
         assertTrue(FastErrorModel.flooredLorentzError(0.3, 10.0) > FastErrorModel.flooredLorentzError(0.3, 20.0));
     }
+
+    /**
+     * The planner's rounding is conservative: at ratios between two grid values the measured error never exceeds
+     * the error at the value the planner rounds to (the monotonicity its rounding relies on), and its step
+     * searches never return a larger step than the exact search. Checked with the measures themselves at ratios
+     * spread over the ranges the engine meets (a test of the assumption, not of numbers the planner produced).
+     */
+    @Test
+    void plannerRoundingIsOnTheWorseSide() {
+        double[] ratios = {0.013, 0.27, 1.9, 23.0};
+        for (double r : ratios) {
+            double lower = FastErrorModel.Planner.down(r);
+            assertTrue(lower <= r && lower > r * Math.exp(-FastErrorModel.ROUNDING_LOG_STEP) * (1 - 1e-12), "down " + r);
+            assertTrue(FastErrorModel.dopplerAxisError(0.4, lower) >= FastErrorModel.dopplerAxisError(0.4, r), "doppler " + r);
+            assertTrue(FastErrorModel.lorentzAxisError(0.4, lower) >= FastErrorModel.lorentzAxisError(0.4, r), "lorentz " + r);
+            assertTrue(FastErrorModel.Planner.position(0.5, 1.0, r) >= FastErrorModel.positionError(0.5, 1.0, r),
+                    "position " + r);
+            assertTrue(FastErrorModel.Planner.dopplerStep(r, 1e-4, 1e-3, 2.0)
+                    <= FastErrorModel.largestStep(s -> FastErrorModel.dopplerAxisError(s, r), 1e-4, 1e-3, 2.0), "step " + r);
+            assertTrue(FastErrorModel.Planner.lorentzStep(r, 1e-4, 1e-3, 2.0)
+                    <= FastErrorModel.largestStep(s -> FastErrorModel.lorentzAxisError(s, r), 1e-4, 1e-3, 2.0), "step " + r);
+        }
+        for (double a : new double[] {3.3, 17.0}) {
+            assertTrue(FastErrorModel.Planner.floorError(0.3, a) >= FastErrorModel.flooredLorentzError(0.3, a), "floor " + a);
+        }
+        assertTrue(FastErrorModel.Planner.singleNodeError(1.0, 1.37, 12.0)
+                >= FastErrorModel.singleDopplerNodeError(1.0, 1.37, 12.0));
+        // remembered answers are the measures' own values
+        assertEquals(FastErrorModel.Planner.position(0.5, 1.0, 0.27), FastErrorModel.Planner.position(0.5, 1.0, 0.27));
+    }
 }
