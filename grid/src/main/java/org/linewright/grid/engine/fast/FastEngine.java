@@ -147,8 +147,9 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * same for any thread count. The FFT library's own threading is switched off (a process-wide JTransforms setting),
  * because this engine already runs slices in parallel.
  *
- * <p><b>Memory.</b> {@link #accumulate} keeps the lines (33 bytes each); {@link #finish} needs 124 bytes per
- * line for the distribution weights (computed once, for all segments) plus ({@value #BLOCKS} + 2·threads + 1)·L
+ * <p><b>Memory.</b> {@link #accumulate} keeps the lines (33 bytes each); {@link #finish} needs 240 bytes per
+ * line for the distribution weights (computed once, for all segments, and copied in stencil order for the segment
+ * being convolved, so that spreading reads them front to back) plus ({@value #BLOCKS} + 2·threads + 1)·L
  * doubles (on the analytic path 3·threads: two half-length transforms per thread for the Lorentz node's
  * corrections, plus L/2 for a sin² table), L the segments' ring length (at most m·N + 2K + 8 rounded up to a power
  * of two, N output points, K the cutoff in internal steps; without a cutoff K spans every line-to-point distance).
@@ -173,8 +174,11 @@ public final class FastEngine implements CrossSectionEngine {
     /** Largest FFT length accepted. */
     static final int MAX_FFT_LENGTH = 1 << 29;
 
-    /** Working memory per line in {@link #finish}: stencil indices and weights (6 + 4 + 4 doubles, 3 ints). */
-    static final int BYTES_PER_LINE = 14 * Double.BYTES + 3 * Integer.BYTES;
+    /**
+     * Working memory per line in {@link #finish}: stencil indices and weights (6 + 4 + 4 doubles, 3 ints), and their
+     * copy in stencil order for the segment being convolved (at most every line: 14 doubles, 1 int).
+     */
+    static final int BYTES_PER_LINE = 28 * Double.BYTES + 4 * Integer.BYTES;
     /** Bounds of the log-width steps searched. */
     static final double MIN_LOG_STEP = 1e-3;
     static final double MAX_LOG_STEP = 2.0;
@@ -829,6 +833,15 @@ public final class FastEngine implements CrossSectionEngine {
         int[] bucketStart;
         /** Ring index of internal point j in the current segment: j + shift. */
         int shift;
+        /**
+         * The current segment's lines' weights and first nodes copied into {@link #order}'s order, so that spreading
+         * a slice reads them front to back (by line index they are scattered across the arrays: a cache miss per
+         * line and slice).
+         */
+        double[] orderedPositionWeights;
+        double[] orderedDopplerWeights;
+        double[] orderedLorentzWeights;
+        int[] orderedFirstPoint;
 
         /**
          * Orders the lines whose first position node lies in [lo, hi] (internal indices: their whole stencil then
@@ -853,6 +866,20 @@ public final class FastEngine implements CrossSectionEngine {
                 if (key[i] >= 0 && p >= lo && p <= hi) {
                     order[fill[key[i]]++] = i;
                 }
+            }
+            int m = bucketStart[keys];
+            if (orderedFirstPoint == null || orderedFirstPoint.length < m) {
+                orderedPositionWeights = new double[P * m];
+                orderedDopplerWeights = new double[4 * m];
+                orderedLorentzWeights = new double[4 * m];
+                orderedFirstPoint = new int[m];
+            }
+            for (int q = 0; q < m; q++) {
+                int i = order[q];
+                System.arraycopy(positionWeights, P * i, orderedPositionWeights, P * q, P);
+                System.arraycopy(dopplerWeights, 4 * i, orderedDopplerWeights, 4 * q, 4);
+                System.arraycopy(lorentzWeights, 4 * i, orderedLorentzWeights, 4 * q, 4);
+                orderedFirstPoint[q] = firstPoint[i];
             }
             shift = ringShift;
         }
@@ -1237,12 +1264,15 @@ public final class FastEngine implements CrossSectionEngine {
             for (int jl = Math.max(0, s.lorentzNode - sl + 1); jl <= s.lorentzNode; jl++) {
                 int lIndex = s.lorentzNode - jl;
                 int k = s.familyKeyBase + jg * nl + jl;
+                double[] gw = dist.orderedDopplerWeights;
+                double[] lw = dist.orderedLorentzWeights;
+                double[] pw = dist.orderedPositionWeights;
+                int[] first = dist.orderedFirstPoint;
                 for (int q = dist.bucketStart[k]; q < dist.bucketStart[k + 1]; q++) {
-                    int i = dist.order[q];
-                    double w = dist.dopplerWeights[4 * i + gIndex] * dist.lorentzWeights[4 * i + lIndex];
-                    int p = dist.firstPoint[i] + dist.shift;
+                    double w = gw[4 * q + gIndex] * lw[4 * q + lIndex];
+                    int p = first[q] + dist.shift;
                     for (int j = 0; j < P; j++) {
-                        lines[p + j] += w * dist.positionWeights[P * i + j];
+                        lines[p + j] += w * pw[P * q + j];
                     }
                 }
             }
