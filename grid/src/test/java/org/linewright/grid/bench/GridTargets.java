@@ -6,11 +6,10 @@ import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.Locale;
 import java.util.StringJoiner;
+import org.linewright.grid.testsupport.RecordingEngine;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
@@ -129,7 +128,7 @@ public final class GridTargets {
     private static void phaseEngineOnly(LineStore store, WavenumberGrid grid, CrossSectionRequest request)
             throws IOException {
         // Collect the calculator's engine input once with a recording engine, then time the engine on it.
-        Recorder rec = new Recorder();
+        RecordingEngine rec = RecordingEngine.keeping();
         long p0 = System.nanoTime();
         new CrossSectionCalculator(List.of(store), registry(), THREADS).compute(request, rec, ProgressListener.NONE);
         double prepare = seconds(p0);
@@ -515,48 +514,4 @@ public final class GridTargets {
         return sum >> 20;
     }
 
-    /** An engine that only keeps a copy of its input, to time the calculator's own work and replay it. */
-    private static final class Recorder implements CrossSectionEngine {
-        final List<LineChunk> chunks = new ArrayList<>();
-
-        @Override
-        public void begin(WavenumberGrid grid, double pressureAtm, double temperatureK) {
-            chunks.clear();
-        }
-
-        @Override
-        public void accumulate(LineChunk chunk, double[] sigmaCm2PerMolecule) {
-            LineChunk copy = new LineChunk(chunk.size);
-            System.arraycopy(chunk.centerCm1, 0, copy.centerCm1, 0, chunk.size);
-            System.arraycopy(chunk.intensityCmPerMolecule, 0, copy.intensityCmPerMolecule, 0, chunk.size);
-            System.arraycopy(chunk.dopplerHwhmCm1, 0, copy.dopplerHwhmCm1, 0, chunk.size);
-            System.arraycopy(chunk.lorentzHwhmCm1, 0, copy.lorentzHwhmCm1, 0, chunk.size);
-            System.arraycopy(chunk.chiFactor, 0, copy.chiFactor, 0, chunk.size);
-            copy.size = chunk.size;
-            chunks.add(copy);
-        }
-
-        @Override
-        public void finish(double[] sigmaCm2PerMolecule) {
-        }
-
-        @Override
-        public String id() {
-            return "recorder";
-        }
-
-        @Override
-        public Map<String, String> describe() {
-            return Map.of();
-        }
-
-        @Override
-        public double estimatedRelativeError() {
-            return 0;
-        }
-
-        @Override
-        public void close() {
-        }
-    }
 }

@@ -11,13 +11,12 @@ import java.util.Map;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.linewright.grid.testsupport.RecordingEngine;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.HwhmMultipleCutoff;
 import org.linewright.broadening.wings.WingTreatment;
-import org.linewright.grid.engine.CrossSectionEngine;
-import org.linewright.grid.engine.LineChunk;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.partition.PartitionSums;
@@ -93,7 +92,7 @@ class CalculatorThroughputBenchmarkTest {
                     CrossSectionRequest r = new CrossSectionRequest(296.0, 1.0, Composition.parse("air=1"), block,
                             WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0, LineSelection.ALL,
                             WidthOptions.DEFAULTS);
-                    used += calc.compute(r, new CopyingEngine(), from - 26.0, from + span + 26.0,
+                    used += calc.compute(r, RecordingEngine.copying(), from - 26.0, from + span + 26.0,
                             ProgressListener.NONE).linesUsed();
                 }
                 seconds[run] = (System.nanoTime() - t0) * 1e-9;
@@ -113,7 +112,7 @@ class CalculatorThroughputBenchmarkTest {
             double[] processCpu = new double[RUNS];
             double[] callerCpu = new double[RUNS];
             for (int run = 0; run < seconds.length; run++) {
-                CopyingEngine engine = new CopyingEngine();
+                RecordingEngine engine = RecordingEngine.copying();
                 long c0 = PROCESS.getProcessCpuTime();
                 long k0 = THREADS.getCurrentThreadCpuTime();
                 long t0 = System.nanoTime();
@@ -179,48 +178,4 @@ class CalculatorThroughputBenchmarkTest {
         return LineStore.open(dir);
     }
 
-    /** An engine that only copies each chunk into arrays of its own (what any engine reads at least once). */
-    private static final class CopyingEngine implements CrossSectionEngine {
-        final LineChunk copy = new LineChunk(CrossSectionCalculator.CHUNK_LINES);
-        long lines;
-
-        @Override
-        public void begin(WavenumberGrid grid, double pressureAtm, double temperatureK) {
-            lines = 0;
-        }
-
-        @Override
-        public void accumulate(LineChunk chunk, double[] sigmaCm2PerMolecule) {
-            int n = chunk.size;
-            System.arraycopy(chunk.centerCm1, 0, copy.centerCm1, 0, n);
-            System.arraycopy(chunk.intensityCmPerMolecule, 0, copy.intensityCmPerMolecule, 0, n);
-            System.arraycopy(chunk.dopplerHwhmCm1, 0, copy.dopplerHwhmCm1, 0, n);
-            System.arraycopy(chunk.lorentzHwhmCm1, 0, copy.lorentzHwhmCm1, 0, n);
-            System.arraycopy(chunk.chiFactor, 0, copy.chiFactor, 0, n);
-            lines += n;
-        }
-
-        @Override
-        public void finish(double[] sigmaCm2PerMolecule) {
-        }
-
-        @Override
-        public String id() {
-            return "copy";
-        }
-
-        @Override
-        public Map<String, String> describe() {
-            return Map.of();
-        }
-
-        @Override
-        public double estimatedRelativeError() {
-            return 0;
-        }
-
-        @Override
-        public void close() {
-        }
-    }
 }

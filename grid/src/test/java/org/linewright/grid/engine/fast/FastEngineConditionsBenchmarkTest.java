@@ -6,7 +6,6 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
@@ -14,6 +13,7 @@ import java.util.Map;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.linewright.grid.testsupport.RecordingEngine;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
@@ -22,7 +22,6 @@ import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.calc.CrossSectionRequest;
 import org.linewright.grid.calc.LineSelection;
 import org.linewright.grid.calc.ProgressListener;
-import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.LineChunk;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.line.LineBatch;
@@ -96,7 +95,7 @@ class FastEngineConditionsBenchmarkTest {
                 CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm,
                         Composition.parse("air=1"), grid, WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0,
                         LineSelection.ALL, WidthOptions.DEFAULTS);
-                Recorder rec = new Recorder();
+                RecordingEngine rec = RecordingEngine.keeping();
                 calc.compute(request, rec, ProgressListener.NONE);
                 double[][] sigma = new double[2][];
                 // alternate the two paths, twice each, so that load changes hit both alike
@@ -167,48 +166,4 @@ class FastEngineConditionsBenchmarkTest {
         return LineStore.open(storeDir);
     }
 
-    /** Keeps a copy of the engine input. */
-    static final class Recorder implements CrossSectionEngine {
-        final List<LineChunk> chunks = new ArrayList<>();
-
-        @Override
-        public void begin(WavenumberGrid grid, double pressureAtm, double temperatureK) {
-            chunks.clear();
-        }
-
-        @Override
-        public void accumulate(LineChunk chunk, double[] sigmaCm2PerMolecule) {
-            LineChunk copy = new LineChunk(chunk.size);
-            System.arraycopy(chunk.centerCm1, 0, copy.centerCm1, 0, chunk.size);
-            System.arraycopy(chunk.intensityCmPerMolecule, 0, copy.intensityCmPerMolecule, 0, chunk.size);
-            System.arraycopy(chunk.dopplerHwhmCm1, 0, copy.dopplerHwhmCm1, 0, chunk.size);
-            System.arraycopy(chunk.lorentzHwhmCm1, 0, copy.lorentzHwhmCm1, 0, chunk.size);
-            System.arraycopy(chunk.chiFactor, 0, copy.chiFactor, 0, chunk.size);
-            copy.size = chunk.size;
-            chunks.add(copy);
-        }
-
-        @Override
-        public void finish(double[] sigmaCm2PerMolecule) {
-        }
-
-        @Override
-        public String id() {
-            return "recorder";
-        }
-
-        @Override
-        public Map<String, String> describe() {
-            return Map.of();
-        }
-
-        @Override
-        public double estimatedRelativeError() {
-            return 0;
-        }
-
-        @Override
-        public void close() {
-        }
-    }
 }

@@ -13,6 +13,7 @@ import java.util.Map;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.linewright.grid.testsupport.RecordingEngine;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
@@ -26,7 +27,6 @@ import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.partition.PartitionSums;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
-import org.linewright.ingest.units.PhysicalConstants;
 
 /**
  * Engine time with the segmented rings the cost model chooses against one ring for the whole grid, alternated on
@@ -84,7 +84,7 @@ class FastEngineSegmentsBenchmarkTest {
             CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm,
                     Composition.parse("air=1"), grid, WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0,
                     LineSelection.ALL, WidthOptions.DEFAULTS);
-            FastEngineConditionsBenchmarkTest.Recorder rec = new FastEngineConditionsBenchmarkTest.Recorder();
+            RecordingEngine rec = RecordingEngine.keeping();
             calc.compute(request, rec, ProgressListener.NONE);
             double[][] sigma = new double[2][];
             for (int round = 0; round < 2; round++) {
