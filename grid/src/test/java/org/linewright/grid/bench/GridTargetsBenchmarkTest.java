@@ -1,20 +1,17 @@
 package org.linewright.grid.bench;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.linewright.grid.testsupport.ChildJvm;
 
 /**
  * The grid module's end-to-end performance targets (excluded from the default build), each in a child JVM with
@@ -91,32 +88,12 @@ class GridTargetsBenchmarkTest {
     }
 
     private static String run(String target) throws IOException, InterruptedException {
-        Path dir = Files.createTempDirectory("lw-grid-bench-");
-        try {
-            String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-            String blockPoints = "-Dlinewright.benchmark.blockPoints="
-                    + Integer.getInteger("linewright.benchmark.blockPoints", 0);
-            Process p = new ProcessBuilder(List.of(java, "-Xmx2g", "--add-opens=java.base/java.nio=ALL-UNNAMED", blockPoints,
-                    "-cp", System.getProperty("surefire.test.class.path", System.getProperty("java.class.path")),
-                    GridTargets.class.getName(), target, Long.toString(LINES), dir.toString()))
-                    .redirectErrorStream(true).start();
-            StringBuilder out = new StringBuilder();
-            try (var r = p.inputReader(StandardCharsets.UTF_8)) {
-                String line;
-                while ((line = r.readLine()) != null) {
-                    System.out.println(line); // as it comes, so a long run shows its phases
-                    out.append(line).append('\n');
-                }
-            }
-            // non-zero on OutOfMemoryError or a wrong result
-            assertEquals(0, p.waitFor(), out.toString());
-            System.out.printf(Locale.ROOT, "load average after the run: %s%n",
-                    Files.readString(Path.of("/proc/loadavg")).trim());
-            return out.toString();
-        } finally {
-            try (Stream<Path> walk = Files.walk(dir)) {
-                walk.sorted(Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
-            }
-        }
+        String blockPoints = "-Dlinewright.benchmark.blockPoints="
+                + Integer.getInteger("linewright.benchmark.blockPoints", 0);
+        // the child exits non-zero on OutOfMemoryError or a wrong result
+        String out = ChildJvm.run(GridTargets.class, List.of(blockPoints), target, Long.toString(LINES));
+        System.out.printf(Locale.ROOT, "load average after the run: %s%n",
+                Files.readString(Path.of("/proc/loadavg")).trim());
+        return out;
     }
 }

@@ -1,18 +1,15 @@
 package org.linewright.grid.engine.fast;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.linewright.grid.testsupport.ChildJvm;
 import org.linewright.grid.testsupport.RecordingEngine;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.sources.WidthOptions;
@@ -57,27 +54,7 @@ class FastEngineConditionsBenchmarkTest {
     @Test
     void enginePerCondition() throws Exception {
         long lines = Long.getLong("linewright.benchmark.lines", 1_000_000L);
-        Path dir = Files.createTempDirectory("lw-fast-conditions-");
-        try {
-            String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-            Process p = new ProcessBuilder(List.of(java, "-Xmx2g", "--add-opens=java.base/java.nio=ALL-UNNAMED",
-                    "-cp", System.getProperty("surefire.test.class.path", System.getProperty("java.class.path")),
-                    FastEngineConditionsBenchmarkTest.class.getName(), Long.toString(lines), dir.toString()))
-                    .redirectErrorStream(true).start();
-            StringBuilder out = new StringBuilder();
-            try (var r = p.inputReader(StandardCharsets.UTF_8)) {
-                String line;
-                while ((line = r.readLine()) != null) {
-                    System.out.println(line);
-                    out.append(line).append('\n');
-                }
-            }
-            assertEquals(0, p.waitFor(), out.toString());
-        } finally {
-            try (Stream<Path> walk = Files.walk(dir)) {
-                walk.sorted(Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
-            }
-        }
+        ChildJvm.run(FastEngineConditionsBenchmarkTest.class, List.of(), Long.toString(lines));
     }
 
     public static void main(String[] args) throws IOException {
