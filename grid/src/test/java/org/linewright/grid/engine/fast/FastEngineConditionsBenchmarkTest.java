@@ -47,7 +47,7 @@ class FastEngineConditionsBenchmarkTest {
     private static final int BLOCK = 20_000;
     static final double FIRST_CM1 = 2000.0;
     static final double SPACING_CM1 = 0.0005;
-    private static final int THREADS = 2;
+    static final int THREADS = 2;
     private static final double[] PRESSURES_BAR = {1e-4, 1.0, 100.0};
     private static final double[] TEMPERATURES_K = {200.0, 2000.0};
 
@@ -57,23 +57,33 @@ class FastEngineConditionsBenchmarkTest {
         ChildJvm.run(FastEngineConditionsBenchmarkTest.class, List.of(), Long.toString(lines));
     }
 
+    /** The calculator of the benchmark's store (built-in registry); prints the set-up. */
+    static CrossSectionCalculator calculator(LineStore store, long lines, WavenumberGrid grid) {
+        System.out.printf(Locale.ROOT, "%d lines, grid %d points, %d threads, %d cores, java %s%n", lines,
+                grid.size(), THREADS, Runtime.getRuntime().availableProcessors(), System.getProperty("java.version"));
+        return new CrossSectionCalculator(List.of(store), PartitionSums.of(MoleculeRegistry.builtIn()).attachedRegistry());
+    }
+
+    /** The engine input at (p, T) in air, default wings, Voigt: the calculator's chunks, recorded once. */
+    static RecordingEngine engineInput(CrossSectionCalculator calc, WavenumberGrid grid, double pressureAtm,
+                                       double temperatureK) throws IOException {
+        CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm, Composition.parse("air=1"),
+                grid, WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0, LineSelection.ALL, WidthOptions.DEFAULTS);
+        RecordingEngine rec = RecordingEngine.keeping();
+        calc.compute(request, rec, ProgressListener.NONE);
+        return rec;
+    }
+
     public static void main(String[] args) throws IOException {
         long lines = Long.parseLong(args[0]);
         Path work = Path.of(args[1]);
         LineStore store = writeStore(work.resolve("store"), lines);
         WavenumberGrid grid = WavenumberGrid.uniform(FIRST_CM1, FIRST_CM1 + lines * SPACING_CM1, SPACING_CM1);
-        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store),
-                PartitionSums.of(MoleculeRegistry.builtIn()).attachedRegistry());
-        System.out.printf(Locale.ROOT, "%d lines, grid %d points, %d threads, %d cores, java %s%n", lines,
-                grid.size(), THREADS, Runtime.getRuntime().availableProcessors(), System.getProperty("java.version"));
+        CrossSectionCalculator calc = calculator(store, lines, grid);
         for (double pressureBar : PRESSURES_BAR) {
             for (double temperatureK : TEMPERATURES_K) {
                 double pressureAtm = pressureBar * 1e5 / PhysicalConstants.STANDARD_ATMOSPHERE_PA;
-                CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm,
-                        Composition.parse("air=1"), grid, WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0,
-                        LineSelection.ALL, WidthOptions.DEFAULTS);
-                RecordingEngine rec = RecordingEngine.keeping();
-                calc.compute(request, rec, ProgressListener.NONE);
+                RecordingEngine rec = engineInput(calc, grid, pressureAtm, temperatureK);
                 double[][] sigma = new double[2][];
                 // alternate the two paths, twice each, so that load changes hit both alike
                 for (int round = 0; round < 2; round++) {

@@ -10,18 +10,10 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.linewright.grid.testsupport.ChildJvm;
 import org.linewright.grid.testsupport.RecordingEngine;
-import org.linewright.broadening.background.Composition;
-import org.linewright.broadening.sources.WidthOptions;
-import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.calc.CrossSectionCalculator;
-import org.linewright.grid.calc.CrossSectionRequest;
-import org.linewright.grid.calc.LineSelection;
-import org.linewright.grid.calc.ProgressListener;
 import org.linewright.grid.engine.LineChunk;
 import org.linewright.grid.wavenumber.WavenumberGrid;
-import org.linewright.ingest.partition.PartitionSums;
-import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
 
 /**
@@ -35,7 +27,7 @@ import org.linewright.ingest.store.LineStore;
 @Tag("benchmark")
 class FastEngineSegmentsBenchmarkTest {
 
-    private static final int THREADS = 2;
+    private static final int THREADS = FastEngineConditionsBenchmarkTest.THREADS;
     private static final double[][] CONDITIONS = {{1.0, 296.0}, {1e-4 / 1.01325, 200.0}};
 
     @Test
@@ -50,18 +42,11 @@ class FastEngineSegmentsBenchmarkTest {
         double first = FastEngineConditionsBenchmarkTest.FIRST_CM1;
         double step = FastEngineConditionsBenchmarkTest.SPACING_CM1;
         WavenumberGrid grid = WavenumberGrid.uniform(first, first + lines * step, step);
-        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store),
-                PartitionSums.of(MoleculeRegistry.builtIn()).attachedRegistry());
-        System.out.printf(Locale.ROOT, "%d lines, grid %d points, %d threads, %d cores, java %s%n", lines,
-                grid.size(), THREADS, Runtime.getRuntime().availableProcessors(), System.getProperty("java.version"));
+        CrossSectionCalculator calc = FastEngineConditionsBenchmarkTest.calculator(store, lines, grid);
         for (double[] c : CONDITIONS) {
             double pressureAtm = c[0];
             double temperatureK = c[1];
-            CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm,
-                    Composition.parse("air=1"), grid, WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0,
-                    LineSelection.ALL, WidthOptions.DEFAULTS);
-            RecordingEngine rec = RecordingEngine.keeping();
-            calc.compute(request, rec, ProgressListener.NONE);
+            RecordingEngine rec = FastEngineConditionsBenchmarkTest.engineInput(calc, grid, pressureAtm, temperatureK);
             double[][] sigma = new double[2][];
             for (int round = 0; round < 2; round++) {
                 for (int mode = 0; mode < 2; mode++) {
