@@ -128,7 +128,7 @@ public final class BuildCommand implements Callable<Integer> {
             for (Map.Entry<String, Long> e : report.counts().entrySet()) {
                 out.printf(Locale.ROOT, "  %s: %d%n", e.getKey(), e.getValue());
             }
-            out.printf(Locale.ROOT, "engine %s, estimated relative error %.3g; %.2f s%n", plan.profile().engine(),
+            out.printf(Locale.ROOT, "engine %s, worst estimated relative error of the cells %.3g (criterion: relative error where sigma >= 1e-6 max sigma; per cell in the table metadata); %.2f s%n", plan.profile().engine(),
                     report.estimatedRelativeError(), report.seconds());
             int shownWarnings = 0;
             for (String w : report.warnings()) {

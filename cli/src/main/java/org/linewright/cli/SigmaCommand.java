@@ -201,6 +201,18 @@ public final class SigmaCommand implements Callable<Integer> {
         for (String line : r.widthSources().report()) {
             w.println("width sources, " + line);
         }
+        String criterion = r.metadata().get("engine.fast.criterion");
+        if (criterion != null) {
+            w.printf(Locale.ROOT, "estimated error: %.2e (tolerance %s; %s)%n", r.estimatedRelativeError(),
+                    r.metadata().get("engine.fast.tolerance"), criterion);
+            String direct = r.metadata().get("engine.fast.direct_lines");
+            if (direct != null && !direct.equals("0")) {
+                w.println("summed exactly instead of by the transform: " + direct + " lines ("
+                        + r.metadata().get("engine.fast.direct_reason") + ")");
+            }
+        } else {
+            w.println("estimated error: 0 (exact summation; profile accuracy about 1e-9)");
+        }
         for (String warning : r.warnings()) {
             w.println("warning: " + warning);
         }

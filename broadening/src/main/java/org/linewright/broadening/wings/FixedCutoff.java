@@ -27,4 +27,9 @@ public record FixedCutoff(double distanceCm1) implements WingCutoff {
         m.put("wing.cutoff.distance_cm-1", Double.toString(distanceCm1));
         return m;
     }
+
+    @Override
+    public boolean dependsOnWidths() {
+        return false;
+    }
 }

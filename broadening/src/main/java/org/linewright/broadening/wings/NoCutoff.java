@@ -25,4 +25,9 @@ public final class NoCutoff implements WingCutoff {
     public String toString() {
         return "NoCutoff";
     }
+
+    @Override
+    public boolean dependsOnWidths() {
+        return false;
+    }
 }

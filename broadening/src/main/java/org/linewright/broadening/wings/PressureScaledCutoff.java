@@ -40,4 +40,9 @@ public record PressureScaledCutoff(double distancePerAtmCm1, double minDistanceC
         m.put("wing.cutoff.formula", "min(max, max(min, k*p))");
         return m;
     }
+
+    @Override
+    public boolean dependsOnWidths() {
+        return false;
+    }
 }

@@ -25,6 +25,16 @@ public interface WingCutoff {
     /** @return metadata describing this policy (keys {@code wing.cutoff.rule} and rule parameters) */
     Map<String, String> describe();
 
+    /**
+     * Whether the distance depends on the line's widths (then two lines at one (p, T) may have different cutoffs).
+     * Engines that share one kernel across lines need to know.
+     *
+     * @return true unless the policy gives every line at one pressure the same distance
+     */
+    default boolean dependsOnWidths() {
+        return true;
+    }
+
     /** @return the default policy: a fixed 25 cm⁻¹ cutoff */
     static WingCutoff defaultCutoff() {
         return fixed(DEFAULT_DISTANCE_CM1);

@@ -166,6 +166,8 @@ public final class TableBuilder {
             manifest.write(work);
             long linesUsed = 0;
             double maxError = 0;
+            // each cell's estimate: the largest over its blocks
+            double[][] cellError = new double[np][nt];
             Map<String, Long> counts = new TreeMap<>();
             java.util.Set<String> warnings = new java.util.LinkedHashSet<>();
             double[] pressuresAtm = plan.pressuresAtm();
@@ -204,6 +206,7 @@ public final class TableBuilder {
                         }
                         linesUsed += r.linesUsed();
                         maxError = Math.max(maxError, r.estimatedRelativeError());
+                        cellError[p][t] = Math.max(cellError[p][t], r.estimatedRelativeError());
                         r.counts().forEach((k, v) -> counts.merge(k, v, Long::sum));
                         counts.merge("lines_below_threshold", r.linesBelowThreshold(), Long::sum);
                         warnings.addAll(r.warnings());
@@ -223,6 +226,14 @@ public final class TableBuilder {
             metadata.put("lines_used_summed_over_cells", Long.toString(linesUsed));
             counts.forEach((k, v) -> metadata.put("count." + k, Long.toString(v)));
             metadata.put("estimated_relative_error", Double.toString(maxError));
+            StringBuilder byCell = new StringBuilder();
+            for (int p = 0; p < np; p++) {
+                for (int t = 0; t < nt; t++) {
+                    byCell.append(byCell.length() == 0 ? "" : ",").append(cellError[p][t]);
+                }
+            }
+            // pressure-major, as the cells are stored
+            metadata.put("estimated_relative_error_by_cell", byCell.toString());
             metadata.put("build_cells", Integer.toString(cells));
             int w = 0;
             for (String text : warnings) {

@@ -114,7 +114,7 @@ class AnalyticKernelsTest {
         WingKernel wings = WingTreatment.defaults().withCutoff(WingCutoff.fixed(cutoff)).withPedestalRemoval(pedestal)
                 .atConditions(1.0, 296.0);
         double[] truncated = new double[length];
-        FastEngine.sampleKernel(wings, alpha, gamma, offsets, reach, new double[reach + 1], truncated);
+        SliceConvolver.sampleKernel(wings, alpha, gamma, offsets, reach, new double[reach + 1], truncated);
 
         double[] half = new double[length];
         AnalyticKernels.voigtTransform(alpha, gamma, h, length, half);

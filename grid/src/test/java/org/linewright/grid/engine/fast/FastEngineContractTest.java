@@ -68,17 +68,32 @@ class FastEngineContractTest {
     }
 
     @Test
-    void linesFarNarrowerThanTheGridAreReportedAsBeyondTheTolerance() {
-        // αD = 10⁻⁵ cm⁻¹ on a 0.01 cm⁻¹ grid would need a refinement far above the cap: the estimate says so
+    void linesFarNarrowerThanTheGridAreSummedDirectly() {
+        // αD = 10⁻⁵ cm⁻¹ on a 0.01 cm⁻¹ grid would need a refinement far above the cap: those lines are summed
+        // exactly instead (beside a wide line that the transform takes), and σ equals a direct summation
         WavenumberGrid grid = WavenumberGrid.uniform(100, 101, 0.01);
-        LineChunk chunk = FastEngineAccuracyTest.lines(12, 5, 100.2, 100.8, 1e-5, 2e-5, 0, 0);
+        LineChunk narrow = FastEngineAccuracyTest.lines(12, 5, 100.2, 100.8, 1e-5, 2e-5, 0, 0);
+        LineChunk chunk = new LineChunk(6);
+        chunk.size = 6;
+        for (int i = 0; i < 5; i++) {
+            chunk.centerCm1[i] = narrow.centerCm1[i];
+            chunk.intensityCmPerMolecule[i] = narrow.intensityCmPerMolecule[i];
+            chunk.dopplerHwhmCm1[i] = narrow.dopplerHwhmCm1[i];
+        }
+        chunk.centerCm1[5] = 100.5;
+        chunk.intensityCmPerMolecule[5] = 1e-20;
+        chunk.dopplerHwhmCm1[5] = 0.001;
+        chunk.lorentzHwhmCm1[5] = 0.07;
         try (FastEngine engine = new FastEngine(1, WingTreatment.defaults(), 1e-3)) {
             double[] sigma = new double[grid.size()];
             engine.begin(grid, 1.0, 296.0);
             engine.accumulate(chunk, sigma);
             engine.finish(sigma);
-            assertTrue(engine.estimatedRelativeError() > 1e-3, "estimate " + engine.estimatedRelativeError());
-            assertEquals(String.valueOf(FastEngine.MAX_OVERSAMPLING), engine.describe().get("fast.oversampling"));
+            assertEquals("5", engine.describe().get("fast.direct_lines"));
+            assertTrue(engine.estimatedRelativeError() <= 1e-3, "estimate " + engine.estimatedRelativeError());
+            double[] direct = FastEngineAccuracyTest.direct(grid, chunk, WingTreatment.defaults());
+            double observed = FastEngineAccuracyTest.maxRelativeError(sigma, direct, null);
+            assertTrue(observed <= 1e-3, "observed " + observed);
         }
     }
 

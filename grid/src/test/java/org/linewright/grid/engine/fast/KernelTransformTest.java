@@ -31,7 +31,7 @@ class KernelTransformTest {
         }
         WingKernel wings = WingTreatment.defaults().withCutoff(WingCutoff.none()).atConditions(1.0, 296.0);
         double[] kernel = new double[LENGTH];
-        FastEngine.sampleKernel(wings, alpha, gamma, offsets, reach, new double[reach + 1], kernel);
+        SliceConvolver.sampleKernel(wings, alpha, gamma, offsets, reach, new double[reach + 1], kernel);
         new DoubleFFT_1D(LENGTH).realForward(kernel);
         // the Lorentz wings beyond ±L·h/2 = ±65.5 cm⁻¹ are outside the kernel: (2/π)·atan(γ/65.5) of the area, so
         // the comparison allows that much plus rounding

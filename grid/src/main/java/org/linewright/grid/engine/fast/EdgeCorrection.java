@@ -1,0 +1,142 @@
+package org.linewright.grid.engine.fast;
+
+import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.wings.WingKernel;
+
+/**
+ * Makes the cutoff edges exact. With a cutoff R the exact engine's line jumps from S·(V(R) − pedestal)·χ(R) to 0
+ * at ν₀ ± R; the transform spreads each line over six position nodes, so near ν₀ ± R some nodes see the kernel and
+ * some do not, and the jump comes out blurred over three internal steps each side — an error of the order of the
+ * jump itself, large against σ where σ is weak (between bands, in troughs, where a strong line's cut wing is a
+ * large part of σ).
+ *
+ * <p>The correction is local and exact in position: at every output point whose value the transform computed from
+ * a stencil that straddles one of the line's edges, the line's transform value — Σ_j w_j·K(q − x_j), its position
+ * weights w_j (times S) on the nodes x_j against the truncated kernel at internal offsets, interpolated to the
+ * output point on resolving-power grids as {@link OutputSampler} does — is replaced by the exact engine's value
+ * ({@link WingKernel#addLine} at the point). K is evaluated with the line's own widths; the slices evaluate it at
+ * their node widths and interpolate, so what remains is the width interpolation's error at detunings near R
+ * (counted in the plan's edge term). Cost: about 13 profile values and up to 12 output points per line,
+ * independent of R and of the grid.
+ */
+final class EdgeCorrection {
+    private static final int P = FastPlanner.P;
+    /** Kernel offsets kept below the last one inside the cutoff: the windows need at most 4 + 3 + 1. */
+    private static final int KERNEL_SPAN = 12;
+
+    private EdgeCorrection() {
+    }
+
+    /**
+     * Applies the correction of every transformed line to the raw output values.
+     *
+     * @param raw σ at the output points as the transform gave it (before clipping)
+     */
+    static void apply(FastPlan plan, LineBuffer lines, LineDistribution dist, double[] raw) {
+        double cutoff = plan.edgeCutoffCm1;
+        if (Double.isNaN(cutoff)) {
+            return;
+        }
+        double h = plan.stepCm1;
+        // the last internal offset the kernels keep: r·h ≤ R, computed as the kernels compute their offsets
+        long last = (long) Math.floor(cutoff / h);
+        while ((last + 1) * h <= cutoff) {
+            last++;
+        }
+        while (last > 0 && last * h > cutoff) {
+            last--;
+        }
+        int lo = (int) Math.max(0, last - KERNEL_SPAN);
+        int span = (int) (last - lo + 1);
+        double[] offsets = new double[span];
+        for (int r = 0; r < span; r++) {
+            offsets[r] = (lo + r) * h;
+        }
+        double[] kernel = new double[span];
+        double[] lambda = new double[P];
+        double[] points = plan.pointsCm1;
+        int n = points.length;
+        for (int i = 0; i < lines.count; i++) {
+            if (dist.key[i] < 0) {
+                continue;
+            }
+            WingKernel wings = plan.families[plan.lineFamily[i]].kernel;
+            double c = lines.centerCm1[i];
+            double a = lines.dopplerCm1[i];
+            double g = lines.lorentzCm1[i];
+            java.util.Arrays.fill(kernel, 0.0);
+            wings.addLine(LineShapeKind.VOIGT, offsets, 0, span, 0.0, a, g, 1.0, kernel);
+            long f = dist.firstPoint[i];
+            // internal points whose six offsets q − f − j straddle an edge: right [f+R+1, f+R+5], left [f−R, f−R+4]
+            long leftLo = f - last;
+            long leftHi = f - last + P - 2;
+            long rightLo = f + last + 1;
+            long rightHi = f + last + P - 1;
+            if (leftHi >= rightLo - 1) {
+                correct(plan, lines, dist, i, leftLo, rightHi, kernel, lo, last, wings, lambda, raw, n);
+            } else {
+                correct(plan, lines, dist, i, leftLo, leftHi, kernel, lo, last, wings, lambda, raw, n);
+                correct(plan, lines, dist, i, rightLo, rightHi, kernel, lo, last, wings, lambda, raw, n);
+            }
+        }
+    }
+
+    /** Replaces line i's transform value by the exact value at the output points fed by internal points [qLo, qHi]. */
+    private static void correct(FastPlan plan, LineBuffer lines, LineDistribution dist, int i, long qLo, long qHi,
+                                double[] kernel, int kernelLo, long last, WingKernel wings, double[] lambda,
+                                double[] raw, int n) {
+        double[] points = plan.pointsCm1;
+        int from;
+        int to;
+        if (plan.uniform) {
+            int m = plan.oversampling;
+            from = (int) Math.max(0, Math.floorDiv(qLo + m - 1, m));
+            to = (int) Math.min(n, Math.floorDiv(qHi, m) + 1);
+            if (from >= to) {
+                return;
+            }
+            for (int k = from; k < to; k++) {
+                raw[k] -= transformValue(dist, i, (long) k * m, kernel, kernelLo, last);
+            }
+        } else {
+            double origin = plan.originCm1;
+            double h = plan.stepCm1;
+            // output points whose interpolation stencil k0 − 2 … k0 + 3 reaches [qLo, qHi]
+            from = WingKernel.firstIndexAtOrAbove(points, 0, n, origin + (qLo - FastPlanner.SHIFT - 1) * h);
+            to = from;
+            while (to < n && Math.floor((points[to] - origin) / h) <= qHi + FastPlanner.SHIFT) {
+                to++;
+            }
+            for (int k = from; k < to; k++) {
+                double pos = (points[k] - origin) / h;
+                long k0 = (long) Math.floor(pos);
+                LagrangeWeights.centred(P, pos - k0, lambda, 0);
+                double value = 0;
+                for (int t = 0; t < P; t++) {
+                    value += lambda[t] * transformValue(dist, i, k0 - FastPlanner.SHIFT + t, kernel, kernelLo, last);
+                }
+                raw[k] -= value;
+            }
+            if (from >= to) {
+                return;
+            }
+        }
+        wings.addLine(LineShapeKind.VOIGT, points, from, to, lines.centerCm1[i], lines.dopplerCm1[i],
+                lines.lorentzCm1[i], lines.strength[i], raw);
+    }
+
+    /** Σ_j w_j·K(|q − f − j|) of line i at internal point q, K zero beyond the last offset inside the cutoff. */
+    private static double transformValue(LineDistribution dist, int i, long q, double[] kernel, int kernelLo,
+                                         long last) {
+        long r0 = q - dist.firstPoint[i];
+        double value = 0;
+        for (int j = 0; j < P; j++) {
+            long r = Math.abs(r0 - j);
+            if (r <= last) {
+                // offsets below the kept span never occur in a window (it lies within 8 steps of the edge)
+                value += dist.positionWeights[P * i + j] * kernel[(int) (r - kernelLo)];
+            }
+        }
+        return value;
+    }
+}

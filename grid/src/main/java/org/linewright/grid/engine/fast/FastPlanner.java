@@ -1,0 +1,499 @@
+package org.linewright.grid.engine.fast;
+
+import org.linewright.broadening.wings.WingKernel;
+import org.linewright.broadening.wings.WingTreatment;
+import org.linewright.grid.engine.fast.Family.FamilyStatistics;
+import org.linewright.grid.wavenumber.WavenumberGrid;
+import org.linewright.ingest.InputException;
+
+/**
+ * Chooses the {@link FastPlan} of one computation from its lines, grid, wing treatment and tolerance ε: the internal
+ * step, the families and their width axes, the slices, the segments, the lines summed directly, and the a-priori
+ * error terms. All errors are measured by {@link FastErrorModel} on the profile itself.
+ *
+ * <p><b>Internal step.</b> The output step divided by the smallest integer m ≤ {@value #MAX_OVERSAMPLING} whose
+ * position error for each family's narrowest widths is within ε/4 (on resolving-power grids the output
+ * interpolation costs it again). Lines too narrow for the finest internal grid are summed directly (exactly)
+ * instead, so capping m never breaks the tolerance.
+ *
+ * <p><b>Width budget.</b> The width axes share B = 0.8·(ε − position error − edge error) − round-off allowance
+ * (at least ε/10). Doppler log step: the largest whose error at the family's most Gaussian width ratio is within
+ * B/2; Lorentz log step: the largest whose error at the most Lorentzian ratio is within B minus the Doppler axis's
+ * actual error.
+ *
+ * <p><b>Families.</b> Lines with αD &gt; 0 are split at γ_s = γ_f·e^δ: below it (pure Doppler included) the
+ * Doppler-dominated family, whose Lorentz axis is one floored stencil {0, γ_f, γ_f·e^δ, γ_f·e^(2δ)}
+ * ({@link WidthAxis#floored}); δ is the Lorentz log step with half the budget at the most Lorentzian ratio, γ_f the
+ * largest floor r·αD,min (r ≥ {@value #MIN_FLOOR_RATIO}) whose first-stencil error is within B/2. Lines with
+ * γL/αD above r_L (the smallest ratio at which one Doppler node keeps half the budget,
+ * {@link FastErrorModel#singleDopplerNodeError}) form the Lorentz-dominated family with one Doppler node; αD = 0
+ * gives the pure Lorentz family; each kind splits again by the χ flag.
+ *
+ * <p><b>Lines summed directly.</b> (1) Every line when the cutoff depends on the line widths (a multiple of the
+ * HWHM): a slice's kernel is cut at its node widths, not at each line's own distance, and interpolating kernels of
+ * different supports is not accurate at their edges; (2) lines narrower than the finest internal grid resolves.
+ * The plan says how many and why.
+ */
+final class FastPlanner {
+    /** Largest internal refinement of the output step. */
+    static final int MAX_OVERSAMPLING = 32;
+    /** Largest number of slices accepted (beyond it the exact engine is the better tool). */
+    static final int MAX_SLICES = 20_000;
+    /** Bounds of the log-width steps searched. */
+    static final double MIN_LOG_STEP = 1e-3;
+    static final double MAX_LOG_STEP = 2.0;
+    /** Largest γL/αD searched for the Lorentz-dominated family's lower bound. */
+    static final double MAX_SPLIT_RATIO = 1e6;
+    /** Smallest Lorentz floor searched, relative to the smallest Doppler HWHM. */
+    static final double MIN_FLOOR_RATIO = 1e-9;
+    /** Smallest cutoff, in Doppler HWHM, for the analytic kernel path (its wing model needs R ≫ αD). */
+    static final double MIN_CUTOFF_OVER_DOPPLER = 10;
+    /** Fewest Doppler nodes per Lorentz node for which the analytic path saves FFTs. */
+    static final int MIN_DOPPLER_NODES_SHARING = 3;
+    /** Round-off allowance 64·2⁻⁵²·log₂L/10⁻⁶ at the largest L accepted. */
+    static final double ROUND_OFF_ALLOWANCE = 64 * 0x1.0p-52 * 29 / FastErrorModel.DEPTH;
+    /** Points of the position stencil, and how many of them lie below the line's lower neighbour. */
+    static final int P = FastErrorModel.POSITION_POINTS;
+    static final int SHIFT = P / 2 - 1;
+    /**
+     * Internal points kept each side of a segment on resolving-power grids: the output interpolation stencil
+     * reaches 2 points below and 3 above an output point's lower neighbour.
+     */
+    static final int INTERPOLATION_MARGIN = 3;
+
+    private final LineBuffer lines;
+    private final WavenumberGrid grid;
+    private final WingTreatment wings;
+    private final WingKernel wingKernel;
+    private final WingKernel plainKernel;
+    private final double tolerance;
+    private final boolean analyticKernels;
+
+    // family splits, set while planning
+    private double lowSplitCm1;
+    private double lowFloorCm1;
+    private double lowLogStep;
+    private double highSplitRatio = Double.POSITIVE_INFINITY;
+
+    /**
+     * @param wingKernel  the treatment at this (p, T), for lines with the χ factor
+     * @param plainKernel the same without χ (the same object when χ is off)
+     */
+    FastPlanner(LineBuffer lines, WavenumberGrid grid, WingTreatment wings, WingKernel wingKernel,
+                WingKernel plainKernel, double tolerance, boolean analyticKernels) {
+        this.lines = lines;
+        this.grid = grid;
+        this.wings = wings;
+        this.wingKernel = wingKernel;
+        this.plainKernel = plainKernel;
+        this.tolerance = tolerance;
+        this.analyticKernels = analyticKernels;
+    }
+
+    /**
+     * The plan.
+     *
+     * @param threads          worker threads (for the memory check)
+     * @param forcedRingLength a ring length imposed on the segments (tests), or 0
+     * @throws InputException when the plan would exceed the slice, FFT or heap limits (before any work)
+     */
+    FastPlan plan(int threads, int forcedRingLength) {
+        FastPlan.Builder b = new FastPlan.Builder();
+        b.grid = grid;
+        b.uniform = grid.spacing() == WavenumberGrid.Spacing.UNIFORM;
+        int count = lines.count;
+        b.lineFamily = new byte[count];
+        double[] points = grid.pointsCm1();
+        int n = points.length;
+        double outputStep = b.uniform ? grid.stepCm1()
+                : (n >= 2 ? points[1] - points[0] : points[0] / grid.resolvingPower());
+        b.edgeCutoffCm1 = edgeCutoffCm1();
+
+        if (wings.cutoff().dependsOnWidths()) {
+            // every line directly: slices cut at their node widths cannot reproduce each line's own cutoff edge
+            java.util.Arrays.fill(b.lineFamily, FastPlan.DIRECT);
+            b.directLines = count;
+            b.directReason = "cutoff depends on each line's widths";
+            b.stepCm1 = outputStep;
+            b.originCm1 = points[0];
+            b.layout = null;
+            return new FastPlan(b);
+        }
+
+        // first all lines with αD > 0 in one family, to choose the internal step and the split
+        lowSplitCm1 = 0;
+        highSplitRatio = Double.POSITIVE_INFINITY;
+        classify(b.lineFamily);
+        FamilyStatistics[] stats = gather(b.lineFamily);
+        int m = chooseOversampling(stats, outputStep, tolerance / 4);
+        double h = outputStep / m;
+        // lines the finest internal grid cannot resolve are summed directly
+        if (worstPositionError(stats, h) > tolerance / 4) {
+            b.directLines = markUnresolved(b.lineFamily, h, tolerance / 4);
+            b.directReason = b.directLines + " lines narrower than the finest internal grid (step " + h + " cm-1)";
+            stats = gather(b.lineFamily);
+        }
+        double widthBudget = widthBudget(stats, h, b.uniform);
+        chooseLorentzSplit(stats[Family.VOIGT], stats[Family.VOIGT + Family.KINDS], widthBudget);
+        chooseDopplerSplit(stats[Family.VOIGT], stats[Family.VOIGT + Family.KINDS], widthBudget);
+        classify(b.lineFamily);
+        stats = gather(b.lineFamily);
+        double position = worstPositionError(stats, h);
+        b.positionError = b.uniform ? position : 2 * position;
+        b.oversampling = m;
+        b.stepCm1 = h;
+        planFamilies(b, stats, widthBudget(stats, h, b.uniform));
+
+        b.originCm1 = b.uniform ? points[0] : points[0] - INTERPOLATION_MARGIN * h;
+        b.internalPoints = b.uniform ? (long) (n - 1) * m + 1
+                : (long) Math.ceil((points[n - 1] - points[0]) / h) + 2 * INTERPOLATION_MARGIN + 1;
+        if (b.internalPoints + 2L * FastEngine.MAX_FFT_LENGTH >= Integer.MAX_VALUE) {
+            throw new InputException("fast engine: an internal grid of " + b.internalPoints + " points (grid of " + n
+                    + " points refined " + m + " times) is beyond the engine's index range; use a smaller range or "
+                    + "the exact engine");
+        }
+        planSlices(b, forcedRingLength);
+        double widthError = 0;
+        for (Family f : b.families) {
+            if (f != null) {
+                widthError = Math.max(widthError, f.dopplerError + f.lorentzError);
+            }
+        }
+        b.widthError = widthError;
+        if (b.layout != null) {
+            b.roundOffError = 64 * Math.ulp(1.0) * (Math.log(b.layout.ringLength()) / Math.log(2))
+                    / FastErrorModel.DEPTH;
+        }
+        checkMemory(b, threads);
+        return new FastPlan(b);
+    }
+
+    /** The cutoff whose edges {@link EdgeCorrection} treats: finite and the same for every line, else NaN. */
+    private double edgeCutoffCm1() {
+        if (wings.cutoff().dependsOnWidths()) {
+            return Double.NaN;
+        }
+        double d = wingKernel.cutoffCm1(0.0, 0.0);
+        return Double.isFinite(d) && d > 0 ? d : Double.NaN;
+    }
+
+    /** Family of each line not summed directly, from the current splits. */
+    private void classify(byte[] lineFamily) {
+        for (int i = 0; i < lines.count; i++) {
+            if (lineFamily[i] != FastPlan.DIRECT) {
+                lineFamily[i] = (byte) familyOf(lines.dopplerCm1[i], lines.lorentzCm1[i], lines.chi[i]);
+            }
+        }
+    }
+
+    /** Width kind (Voigt, Doppler-dominated, pure Lorentz, Lorentz-dominated), plus {@link Family#KINDS} with χ. */
+    private int familyOf(double a, double g, boolean chi) {
+        int kind = a == 0 ? Family.LORENTZ_ONLY
+                : (g < lowSplitCm1 ? Family.DOPPLER_DOMINATED
+                : (g >= highSplitRatio * a ? Family.LORENTZ_DOMINATED : Family.VOIGT));
+        return chi ? kind + Family.KINDS : kind;
+    }
+
+    private FamilyStatistics[] gather(byte[] lineFamily) {
+        FamilyStatistics[] stats = new FamilyStatistics[Family.COUNT];
+        for (int i = 0; i < lines.count; i++) {
+            int f = lineFamily[i];
+            if (f == FastPlan.DIRECT) {
+                continue;
+            }
+            if (stats[f] == null) {
+                stats[f] = new FamilyStatistics();
+            }
+            stats[f].add(lines.dopplerCm1[i], lines.lorentzCm1[i]);
+        }
+        return stats;
+    }
+
+    private static double worstPositionError(FamilyStatistics[] stats, double h) {
+        double worst = 0;
+        for (FamilyStatistics f : stats) {
+            if (f != null) {
+                worst = Math.max(worst, FastErrorModel.Planner.position(h, f.alphaMin, f.gammaMin));
+            }
+        }
+        return worst;
+    }
+
+    /** Marks the lines whose own position error at step h exceeds the share as summed directly; their count. */
+    private int markUnresolved(byte[] lineFamily, double h, double share) {
+        int direct = 0;
+        for (int i = 0; i < lines.count; i++) {
+            if (FastErrorModel.Planner.position(h, lines.dopplerCm1[i], lines.lorentzCm1[i]) > share) {
+                lineFamily[i] = FastPlan.DIRECT;
+                direct++;
+            }
+        }
+        return direct;
+    }
+
+    /**
+     * The width axes' share B = 0.8·(ε − position error) − round-off allowance, at least ε/10; the position error
+     * counted twice on resolving-power grids.
+     */
+    private double widthBudget(FamilyStatistics[] stats, double h, boolean uniform) {
+        double position = worstPositionError(stats, h);
+        double positionTotal = uniform ? position : 2 * position;
+        return Math.max(0.1 * tolerance, 0.8 * (tolerance - positionTotal) - ROUND_OFF_ALLOWANCE);
+    }
+
+    /** Smallest m ≤ {@link #MAX_OVERSAMPLING} whose position error is within the share for every family. */
+    private static int chooseOversampling(FamilyStatistics[] stats, double outputStep, double share) {
+        int m = 1;
+        while (true) {
+            double worst = worstPositionError(stats, outputStep / m);
+            if (worst <= share || m >= MAX_OVERSAMPLING) {
+                return m;
+            }
+            // the error falls about as h⁴: jump close to the answer, then step by one
+            int guess = (int) Math.ceil(m * Math.pow(worst / share, 0.25));
+            m = Math.min(MAX_OVERSAMPLING, Math.max(m + 1, guess - 1));
+        }
+    }
+
+    /**
+     * Sets the Lorentz floor γ_f and the split γ_f·e^δ between the Doppler-dominated family and the Voigt family,
+     * from the lines with αD &gt; 0 (both χ kinds): δ is the log step the Voigt family's Lorentz axis would take with
+     * half the width budget, γ_f the largest floor whose first stencil keeps within that half. No split when every
+     * such line has γL = 0, or none has γL below the split.
+     */
+    private void chooseLorentzSplit(FamilyStatistics plain, FamilyStatistics withChi, double budget) {
+        lowSplitCm1 = 0;
+        lowFloorCm1 = 0;
+        lowLogStep = 0;
+        double alphaMin = Double.POSITIVE_INFINITY;
+        double gammaMin = Double.POSITIVE_INFINITY;
+        double gammaMax = 0;
+        for (FamilyStatistics f : new FamilyStatistics[] {plain, withChi}) {
+            if (f != null) {
+                alphaMin = Math.min(alphaMin, f.alphaMin);
+                gammaMin = Math.min(gammaMin, f.gammaMin);
+                gammaMax = Math.max(gammaMax, f.gammaMax);
+            }
+        }
+        if (!(gammaMax > 0)) {
+            return;
+        }
+        double step = FastErrorModel.Planner.lorentzStep(alphaMin / gammaMax, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP);
+        double floorCm1 = lorentzFloorCm1(alphaMin, step, budget / 2);
+        double split = floorCm1 * Math.exp(step);
+        if (gammaMin < split) {
+            lowSplitCm1 = split;
+            lowFloorCm1 = floorCm1;
+            lowLogStep = step;
+        }
+    }
+
+    /**
+     * Sets the ratio γL/αD from which lines with αD &gt; 0 form the Lorentz-dominated family (one Doppler node):
+     * the smallest ratio r ≤ {@value #MAX_SPLIT_RATIO} at which one node for the whole αD range keeps the error
+     * within half the width budget. None when no such ratio exists or no line reaches it.
+     */
+    private void chooseDopplerSplit(FamilyStatistics plain, FamilyStatistics withChi, double budget) {
+        highSplitRatio = Double.POSITIVE_INFINITY;
+        double alphaMin = Double.POSITIVE_INFINITY;
+        double alphaMax = 0;
+        double gammaMax = 0;
+        for (FamilyStatistics f : new FamilyStatistics[] {plain, withChi}) {
+            if (f != null) {
+                alphaMin = Math.min(alphaMin, f.alphaMin);
+                alphaMax = Math.max(alphaMax, f.alphaMax);
+                gammaMax = Math.max(gammaMax, f.gammaMax);
+            }
+        }
+        if (!(alphaMax > 0) || !(gammaMax > 0)) {
+            return;
+        }
+        // error grows with 1/r: the smallest r (largest 1/r) within half the budget
+        double ratio = FastErrorModel.Planner.singleNodeSplitRatio(alphaMin, alphaMax, budget / 2,
+                1 / MAX_SPLIT_RATIO, 1.0);
+        if (ratio < Double.POSITIVE_INFINITY && gammaMax >= ratio * alphaMin) {
+            highSplitRatio = ratio;
+        }
+    }
+
+    /**
+     * The Lorentz floor γ_f of a family whose narrowest Doppler HWHM is {@code alphaMinCm1}: the largest
+     * γ_f = r·αD,min, r ∈ [{@value #MIN_FLOOR_RATIO}, 1], whose floored first stencil keeps the profile error within
+     * {@code budget} ({@link FastErrorModel#flooredLorentzError}, at the smallest αD, the worst case).
+     */
+    static double lorentzFloorCm1(double alphaMinCm1, double logStep, double budget) {
+        double r = FastErrorModel.Planner.floorRatio(logStep, budget, MIN_FLOOR_RATIO, 1.0);
+        return r * alphaMinCm1;
+    }
+
+    /** Each family's width axes (the Doppler axis gets half the budget, the Lorentz axis the rest), kernel path. */
+    private void planFamilies(FastPlan.Builder b, FamilyStatistics[] stats, double budget) {
+        double analyticCutoff = b.edgeCutoffCm1;
+        int slices = 0;
+        int keys = 0;
+        for (int index = 0; index < Family.COUNT; index++) {
+            FamilyStatistics f = stats[index];
+            if (f == null) {
+                continue;
+            }
+            int kind = Family.kind(index);
+            WidthAxis doppler;
+            double dopplerError = 0;
+            if (kind == Family.LORENTZ_ONLY) {
+                doppler = WidthAxis.exact(0.0);
+            } else if (kind == Family.LORENTZ_DOMINATED) {
+                // one Doppler node, in the middle of the family's αD² range; error measured at its smallest γL/αD
+                doppler = WidthAxis.exact(FastErrorModel.singleDopplerNode(f.alphaMin, f.alphaMax));
+                dopplerError = FastErrorModel.Planner.singleNodeError(f.alphaMin, f.alphaMax, f.minLorentzOverDoppler);
+            } else {
+                // worst case for the Doppler axis: the most Gaussian line, smallest γL/αD
+                double ratio = f.gammaMin / f.alphaMax;
+                double step = FastErrorModel.Planner.dopplerStep(ratio, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP);
+                doppler = WidthAxis.geometric(f.alphaMin, f.alphaMax, step, 2);
+                dopplerError = doppler.stencilSize() == 1 ? 0
+                        : FastErrorModel.Planner.dopplerError(doppler.logStep(), ratio);
+            }
+            WidthAxis lorentz;
+            double lorentzError = 0;
+            double floor = 0;
+            if (f.gammaMax == 0) {
+                lorentz = WidthAxis.exact(0.0);
+            } else if (kind == Family.DOPPLER_DOMINATED) {
+                // 0 ≤ γL < γ_f·e^δ: one floored stencil, its error measured at the family's own smallest αD
+                lorentz = WidthAxis.floored(lowFloorCm1, f.gammaMax, lowLogStep);
+                floor = lowFloorCm1;
+                lorentzError = FastErrorModel.Planner.floorError(lorentz.logStep(), f.alphaMin / lowFloorCm1);
+            } else {
+                // worst case for the Lorentz axis: the most Lorentzian line, smallest αD/γL
+                double ratio = f.alphaMin / f.gammaMax;
+                double step = FastErrorModel.Planner.lorentzStep(ratio, budget - dopplerError, MIN_LOG_STEP,
+                        MAX_LOG_STEP);
+                lorentz = WidthAxis.geometric(f.gammaMin, f.gammaMax, step, 1);
+                lorentzError = lorentz.stencilSize() == 1 ? 0
+                        : FastErrorModel.Planner.lorentzError(lorentz.logStep(), ratio);
+            }
+            WingKernel kernel = Family.withChi(index) ? wingKernel : plainKernel;
+            boolean analytic = isAnalytic(kernel, doppler, f, analyticCutoff);
+            b.families[index] = new Family(index, f, kernel, doppler, lorentz, dopplerError, lorentzError, floor,
+                    slices, keys, analytic);
+            slices += b.families[index].slices();
+            keys += b.families[index].slices();
+        }
+        b.keys = keys;
+        if (slices > MAX_SLICES) {
+            throw new InputException("fast engine: the line widths need " + slices + " width slices at tolerance "
+                    + tolerance + " (at most " + MAX_SLICES + "; loosen the tolerance or use the exact engine)");
+        }
+    }
+
+    /**
+     * Whether a family takes the analytic path: at least {@value #MIN_DOPPLER_NODES_SHARING} Doppler nodes sharing
+     * each Lorentz node, a width-independent finite cutoff R, no χ factor, αD &gt; 0, and R ≫ αD
+     * (αD,max ≤ R/{@value #MIN_CUTOFF_OVER_DOPPLER} and the wing model's remainder within ε/100).
+     */
+    private boolean isAnalytic(WingKernel kernel, WidthAxis doppler, FamilyStatistics f, double cutoffCm1) {
+        return analyticKernels && !Double.isNaN(cutoffCm1) && kernel == plainKernel && kernel.chiFactor() == null
+                && doppler.size() >= MIN_DOPPLER_NODES_SHARING && f.alphaMin > 0
+                && f.alphaMax * MIN_CUTOFF_OVER_DOPPLER <= cutoffCm1
+                && AnalyticKernels.wingModelError(f.alphaMax, cutoffCm1) <= tolerance / 100;
+    }
+
+    /** Slice widths and reaches, the kernel reach, the segment layout and the analytic kernels' terms. */
+    private void planSlices(FastPlan.Builder b, int forcedRingLength) {
+        double h = b.stepCm1;
+        double[] points = grid.pointsCm1();
+        double lineMin = Double.POSITIVE_INFINITY;
+        double lineMax = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < lines.count; i++) {
+            if (b.lineFamily[i] != FastPlan.DIRECT) {
+                lineMin = Math.min(lineMin, lines.centerCm1[i]);
+                lineMax = Math.max(lineMax, lines.centerCm1[i]);
+            }
+        }
+        int slices = 0;
+        for (Family f : b.families) {
+            slices += f == null ? 0 : f.slices();
+        }
+        b.sliceWidths = new double[slices][];
+        b.sliceReach = new int[slices];
+        if (slices == 0) {
+            return;
+        }
+        // kernel half-length K: the cutoff, or every line-to-point distance without one
+        double internalEnd = b.originCm1 + (b.internalPoints - 1) * h;
+        long maxReach = (long) Math.ceil(Math.max(Math.max(internalEnd - lineMin, lineMax - b.originCm1), 0) / h) + 4;
+        long reach = 0;
+        for (Family f : b.families) {
+            if (f == null) {
+                continue;
+            }
+            for (int ig = 0; ig < f.doppler.size(); ig++) {
+                for (int il = 0; il < f.lorentz.size(); il++) {
+                    int s = f.firstSlice + ig * f.lorentz.size() + il;
+                    double[] w = {f.doppler.widthCm1(ig), f.lorentz.widthCm1(il)};
+                    b.sliceWidths[s] = w;
+                    double d = wingKernel.cutoffCm1(w[0], w[1]);
+                    long k = Double.isInfinite(d) ? maxReach : Math.min(maxReach, (long) Math.floor(d / h) + 1);
+                    b.sliceReach[s] = (int) Math.min(k, FastEngine.MAX_FFT_LENGTH);
+                    reach = Math.max(reach, k);
+                }
+            }
+        }
+        b.reach = reach;
+        // segments of the internal grid, each in its own ring: a segment owning U points needs U + pad ring points
+        // (the reach both sides, guard points and, on resolving-power grids, the interpolation stencil's margin)
+        b.margin = b.uniform ? 0 : INTERPOLATION_MARGIN;
+        long pad = 2 * reach + 8 + 2L * b.margin;
+        if (pad + 1 > FastEngine.MAX_FFT_LENGTH) {
+            throw new InputException("fast engine: an FFT of " + (pad + 1) + " points would be needed (grid of "
+                    + points.length + " points refined " + b.oversampling + " times, wing reach " + reach
+                    + " steps; at most " + FastEngine.MAX_FFT_LENGTH + "; use a cutoff, a smaller range or the exact "
+                    + "engine)");
+        }
+        b.layout = SegmentLayout.choose(b.internalPoints, pad, FastEngine.MAX_FFT_LENGTH, forcedRingLength);
+        b.offset = (int) reach + 4;
+        for (Family f : b.families) {
+            if (f != null && f.analytic) {
+                b.anyAnalytic = true;
+                b.wingModelError = Math.max(b.wingModelError, AnalyticKernels.wingModelError(f.alphaMax,
+                        b.edgeCutoffCm1));
+            }
+        }
+        b.analyticCutoffCm1 = b.anyAnalytic ? b.edgeCutoffCm1 : Double.NaN;
+    }
+
+    /**
+     * Refuses up front, with the figures, rather than fail half-way for want of heap; decides whether the Lorentz
+     * nodes' correction transforms are kept across segments (at most a quarter of the heap).
+     */
+    private void checkMemory(FastPlan.Builder b, int threads) {
+        if (b.layout == null) {
+            return;
+        }
+        int fftLength = b.layout.ringLength();
+        int slices = b.sliceWidths.length;
+        int correctionNodes = 0;
+        for (Family f : b.families) {
+            if (f != null && f.analytic) {
+                correctionNodes += f.lorentz.size();
+            }
+        }
+        // per thread: lines, kernel and, on the analytic path, two half-length node corrections; the sin² table;
+        // the raw output values
+        long perThread = b.anyAnalytic ? 3 : 2;
+        long bytes = ((long) Math.min(SliceConvolver.BLOCKS, slices) + perThread * threads + 1) * fftLength
+                * Double.BYTES
+                + (b.anyAnalytic ? (long) (fftLength / 2 + 1) * Double.BYTES : 0)
+                + (long) grid.size() * Double.BYTES
+                + (long) lines.count * FastEngine.BYTES_PER_LINE;
+        long heap = Runtime.getRuntime().maxMemory();
+        if (bytes > heap) {
+            throw new InputException("fast engine: about " + bytes / (1 << 20) + " MB needed (FFT length " + fftLength
+                    + ", " + lines.count + " lines) but the heap allows " + heap / (1 << 20)
+                    + " MB; use a cutoff, a smaller range, fewer threads, a larger -Xmx or the exact engine");
+        }
+        long cacheBytes = 2L * correctionNodes * (fftLength / 2 + 1) * Double.BYTES;
+        b.shareCorrections = b.layout.segments() > 1 && correctionNodes > 0 && cacheBytes <= heap / 4
+                && bytes + cacheBytes <= heap;
+    }
+}
