@@ -130,6 +130,10 @@ class FastEngineRegimeMatrixTest {
         String where = worstAt < 0 ? "" : String.format(" at %.4f cm-1 (sigma/max %.2e)",
                 grid.pointsCm1()[worstAt], a[worstAt] / max);
         double estimate = fast.estimatedRelativeError();
+        System.out.printf(java.util.Locale.ROOT, "%s %s %s bar %s K %s %s %s %s tol %s: observed %.2e, estimate %.2e, "
+                        + "absolute %.2e of max, %s of %d lines summed directly, %d points%n", store, gridSpec,
+                pressureBar, temperatureK, background, cutoff, pedestal, chi, tolerance, worst, estimate, worstAbsolute,
+                fast.metadata().getOrDefault("engine.fast.direct_lines", "0"), fast.linesUsed(), a.length);
         assertTrue(worst <= tolerance, "worst relative difference " + worst + where + " above the tolerance "
                 + tolerance + " (estimate " + estimate + ")");
         assertTrue(worst <= estimate, "observed " + worst + where + " beyond the estimate " + estimate);

@@ -26,7 +26,7 @@ final class FastErrorModel {
     private static final java.util.concurrent.ConcurrentHashMap<MemoKey, Double> MEMORY =
             new java.util.concurrent.ConcurrentHashMap<>();
 
-    private record MemoKey(int kind, double a, double b, double c, double d) {
+    private record MemoKey(int kind, double a, double b, double c, double d, Form form) {
     }
 
     /** Depth of the criterion: the engine's tolerance applies where σ ≥ 10⁻⁶·max σ. */
@@ -40,25 +40,143 @@ final class FastErrorModel {
     }
 
     /**
+     * The kernel a measure is made for, in units of the measured line's reference width (its αD for the Doppler axis,
+     * its γL for the Lorentz axis, the floor for the floored axis, the smallest αD for the single node, αD for the
+     * position): the cutoff R (+∞ for none), whether the pedestal V(R) is removed, the criterion's depth D (10⁻⁶, or
+     * less when the output grid samples line peaks coarsely: then 10⁻⁶ of max σ is less than 10⁻⁶ of a line's peak)
+     * and the width of the band below R in which the edge correction replaces the transform's value (where only the
+     * width interpolation's error remains).
+     *
+     * <p>The measure of a kernel form is the largest of (1) |Δ(x) − Δ_p| / max(|K(x)|, D·V(0)) over 0 ≤ x ≤ R, where
+     * Δ = approximation − profile, K = V − p the kernel (p the pedestal, Δ_p its approximation's error, both 0 when
+     * the pedestal is kept): the error relative to the line's own contribution, or to the criterion's floor D·max σ
+     * where the line is weaker than that (σ ≥ D·max σ ≥ D·S·V(0) wherever the criterion applies), and (2) with the
+     * pedestal kept, Λ·|Δ(x)| / (D·V(0)) for x in the band below R: at points just beyond a line's cutoff its exact
+     * value is 0 and σ may be made of other lines alone, while the corrected value still carries the width error of
+     * the line's six position nodes (Λ, the six-point Lagrange weights' largest Σ|w_j|).
+     *
+     * @param cutoff         R in reference widths, or +∞
+     * @param removePedestal whether the kernel is V − V(R)
+     * @param depth          D
+     * @param band           the edge band below R, in reference widths
+     */
+    record Form(double cutoff, boolean removePedestal, double depth, double band) {
+        /** No cutoff, the criterion's own depth: the measure of the untruncated profile. */
+        static final Form UNTRUNCATED = new Form(Double.POSITIVE_INFINITY, false, DEPTH, 0);
+
+        boolean finite() {
+            return Double.isFinite(cutoff);
+        }
+
+        /** The same form for another reference width, {@code factor} times the current one. */
+        Form rescaled(double factor) {
+            return new Form(cutoff / factor, removePedestal, depth, band / factor);
+        }
+    }
+
+    /** Largest Σ|w_j| of the six-point centred Lagrange weights over positions in (0, 1) (their Lebesgue constant). */
+    static final double LEBESGUE = lebesgue();
+
+    private static double lebesgue() {
+        double[] w = new double[POSITION_POINTS];
+        double worst = 0;
+        for (int p = 0; p <= 1000; p++) {
+            LagrangeWeights.centred(POSITION_POINTS, p / 1000.0, w, 0);
+            double sum = 0;
+            for (double v : w) {
+                sum += Math.abs(v);
+            }
+            worst = Math.max(worst, sum);
+        }
+        return worst;
+    }
+
+    /**
+     * Detunings of a measure: {@value #DETUNINGS} + 1 placed densely near the centre, x_k = X·(k/256)³ up to
+     * X = min(R, 4·x_D) (x_D where the profile falls to D of its peak), then, for a finite cutoff, 16 evenly in the
+     * band below R and R itself (last).
+     */
+    private static double[] detunings(double alpha, double gamma, Form form) {
+        double xDepth = depthDetuning(alpha, gamma, form.depth());
+        double end = Math.min(form.cutoff(), 4 * xDepth);
+        int extra = form.finite() ? 17 : 0;
+        double[] x = new double[DETUNINGS + 1 + extra];
+        for (int k = 0; k <= DETUNINGS; k++) {
+            double f = (double) k / DETUNINGS;
+            x[k] = end * f * f * f;
+        }
+        if (form.finite()) {
+            double from = Math.max(0, form.cutoff() - form.band());
+            for (int k = 0; k < 16; k++) {
+                x[DETUNINGS + 1 + k] = from + (form.cutoff() - from) * k / 16.0;
+            }
+            x[x.length - 1] = form.cutoff();
+        }
+        return x;
+    }
+
+    /**
+     * The measure of {@link Form} for one placement of the line: {@code exact[k]} and {@code approx[k]} at the
+     * detunings {@code x} of {@link #detunings} (the last one R when the cutoff is finite), V(0) = {@code peak}.
+     */
+    private static double formError(double[] x, double[] exact, double[] approx, double peak, Form form) {
+        int n = x.length;
+        double floor = form.depth() * peak;
+        double pedestal = 0;
+        double pedestalError = 0;
+        if (form.finite() && form.removePedestal()) {
+            pedestal = exact[n - 1];
+            pedestalError = approx[n - 1] - exact[n - 1];
+        }
+        double worst = 0;
+        double bandFrom = form.finite() ? form.cutoff() - form.band() : Double.POSITIVE_INFINITY;
+        for (int k = 0; k < n; k++) {
+            double delta = approx[k] - exact[k];
+            double kernel = Math.abs(exact[k] - pedestal);
+            worst = Math.max(worst, Math.abs(delta - pedestalError) / Math.max(kernel, floor));
+            if (!form.removePedestal() && x[k] >= bandFrom) {
+                worst = Math.max(worst, LEBESGUE * Math.abs(delta) / floor);
+            }
+        }
+        return worst;
+    }
+
+    /**
      * Doppler-axis error: a line of αD = 1, γL = {@code lorentzOverDoppler} placed between log-spaced nodes
-     * {@code logStep} apart, weights Lagrange in αD².
+     * {@code logStep} apart, weights Lagrange in αD², measured for the untruncated profile.
      */
     static double dopplerAxisError(double logStep, double lorentzOverDoppler) {
-        return widthAxisError(logStep, lorentzOverDoppler, true);
+        return widthAxisError(logStep, lorentzOverDoppler, true, Form.UNTRUNCATED);
+    }
+
+    /** Doppler-axis error for a kernel form (in units of the line's αD). */
+    static double dopplerAxisError(double logStep, double lorentzOverDoppler, Form form) {
+        return widthAxisError(logStep, lorentzOverDoppler, true, form);
     }
 
     /**
      * Lorentz-axis error: a line of γL = 1, αD = {@code dopplerOverLorentz} placed between log-spaced nodes
-     * {@code logStep} apart, weights Lagrange in γL.
+     * {@code logStep} apart, weights Lagrange in γL, measured for the untruncated profile.
      */
     static double lorentzAxisError(double logStep, double dopplerOverLorentz) {
-        return widthAxisError(logStep, dopplerOverLorentz, false);
+        return widthAxisError(logStep, dopplerOverLorentz, false, Form.UNTRUNCATED);
     }
 
-    private static double widthAxisError(double logStep, double otherWidth, boolean dopplerAxis) {
+    /** Lorentz-axis error for a kernel form (in units of the line's γL). */
+    static double lorentzAxisError(double logStep, double dopplerOverLorentz, Form form) {
+        return widthAxisError(logStep, dopplerOverLorentz, false, form);
+    }
+
+    private static double widthAxisError(double logStep, double otherWidth, boolean dopplerAxis, Form form) {
         double alpha = dopplerAxis ? 1.0 : otherWidth;
         double gamma = dopplerAxis ? otherWidth : 1.0;
-        double xDepth = depthDetuning(alpha, gamma);
+        double[] x = detunings(alpha, gamma, form);
+        double[] exact = new double[x.length];
+        double[] approx = new double[x.length];
+        for (int k = 0; k < x.length; k++) {
+            exact[k] = VoigtProfile.value(x[k], alpha, gamma);
+        }
+        double peak = VoigtProfile.value(0, alpha, gamma);
         double[] nodes = new double[4];
         double[] variable = new double[4];
         double[] weights = new double[4];
@@ -72,17 +190,15 @@ final class FastErrorModel {
             }
             // the line's own width is 1, so its variable (w or w²) is 1 as well
             LagrangeWeights.general(1.0, variable, 0, weights, 0);
-            for (int k = 0; k <= DETUNINGS; k++) {
-                double f = (double) k / DETUNINGS;
-                double x = xDepth * f * f * f;
-                double exact = VoigtProfile.value(x, alpha, gamma);
-                double approx = 0;
+            for (int k = 0; k < x.length; k++) {
+                double a = 0;
                 for (int j = 0; j < 4; j++) {
-                    approx += weights[j] * (dopplerAxis ? VoigtProfile.value(x, nodes[j], gamma)
-                            : VoigtProfile.value(x, alpha, nodes[j]));
+                    a += weights[j] * (dopplerAxis ? VoigtProfile.value(x[k], nodes[j], gamma)
+                            : VoigtProfile.value(x[k], alpha, nodes[j]));
                 }
-                worst = Math.max(worst, Math.abs(approx - exact) / exact);
+                approx[k] = a;
             }
+            worst = Math.max(worst, formError(x, exact, approx, peak, form));
         }
         return worst;
     }
@@ -96,24 +212,30 @@ final class FastErrorModel {
      * only makes it smaller, so the family's smallest αD is the worst case.
      */
     static double flooredLorentzError(double logStep, double dopplerOverFloor) {
+        return flooredLorentzError(logStep, dopplerOverFloor, Form.UNTRUNCATED);
+    }
+
+    /** {@link #flooredLorentzError(double, double)} for a kernel form (in units of the floor). */
+    static double flooredLorentzError(double logStep, double dopplerOverFloor, Form form) {
         double alpha = dopplerOverFloor;
         double[] nodes = {0.0, 1.0, Math.exp(logStep), Math.exp(2 * logStep)};
         double[] weights = new double[4];
         double worst = 0;
         for (int p = 1; p <= POSITIONS; p++) {
             double gamma = p / (POSITIONS + 1.0) * nodes[2];
-            double xDepth = depthDetuning(alpha, gamma);
+            double[] x = detunings(alpha, gamma, form);
+            double[] exact = new double[x.length];
+            double[] approx = new double[x.length];
             LagrangeWeights.general(gamma, nodes, 0, weights, 0);
-            for (int k = 0; k <= DETUNINGS; k++) {
-                double f = (double) k / DETUNINGS;
-                double x = xDepth * f * f * f;
-                double exact = VoigtProfile.value(x, alpha, gamma);
-                double approx = 0;
+            for (int k = 0; k < x.length; k++) {
+                exact[k] = VoigtProfile.value(x[k], alpha, gamma);
+                double a = 0;
                 for (int j = 0; j < 4; j++) {
-                    approx += weights[j] * VoigtProfile.value(x, alpha, nodes[j]);
+                    a += weights[j] * VoigtProfile.value(x[k], alpha, nodes[j]);
                 }
-                worst = Math.max(worst, Math.abs(approx - exact) / exact);
+                approx[k] = a;
             }
+            worst = Math.max(worst, formError(x, exact, approx, VoigtProfile.value(0, alpha, gamma), form));
         }
         return worst;
     }
@@ -130,51 +252,76 @@ final class FastErrorModel {
     /**
      * Error of one Doppler node ({@link #singleDopplerNode}) for lines of αD in [lo, hi] and γL = r·αD, r =
      * {@code lorentzOverDoppler} (the family's smallest ratio, the worst case): the profile at the node's αD
-     * against the line's own, at 9 values of αD evenly spaced in αD² over the range (the ends included), over
-     * 257 detunings to the criterion's depth. For r ≫ 1 it falls as (αD/γL)²: V − L ≈ (s²/2)·L'' near the centre.
+     * against the line's own, at 9 values of αD evenly spaced in αD² over the range (the ends included), for the
+     * untruncated profile. For r ≫ 1 it falls as (αD/γL)²: V − L ≈ (s²/2)·L'' near the centre.
      */
     static double singleDopplerNodeError(double alphaLoCm1, double alphaHiCm1, double lorentzOverDoppler) {
+        return singleDopplerNodeError(alphaLoCm1, alphaHiCm1, lorentzOverDoppler, Form.UNTRUNCATED);
+    }
+
+    /** {@link #singleDopplerNodeError(double, double, double)} for a kernel form (in units of {@code alphaLoCm1}). */
+    static double singleDopplerNodeError(double alphaLoCm1, double alphaHiCm1, double lorentzOverDoppler, Form form) {
         double node = singleDopplerNode(alphaLoCm1, alphaHiCm1);
+        Form absolute = form.rescaled(1 / alphaLoCm1);
         double worst = 0;
         for (int p = 0; p <= 8; p++) {
             double alpha = Math.sqrt(alphaLoCm1 * alphaLoCm1
                     + p / 8.0 * (alphaHiCm1 * alphaHiCm1 - alphaLoCm1 * alphaLoCm1));
             double gamma = lorentzOverDoppler * alpha;
-            double xDepth = depthDetuning(alpha, gamma);
-            for (int k = 0; k <= DETUNINGS; k++) {
-                double f = (double) k / DETUNINGS;
-                double x = xDepth * f * f * f;
-                double exact = VoigtProfile.value(x, alpha, gamma);
-                double approx = VoigtProfile.value(x, node, gamma);
-                worst = Math.max(worst, Math.abs(approx - exact) / exact);
+            double[] x = detunings(alpha, gamma, absolute);
+            double[] exact = new double[x.length];
+            double[] approx = new double[x.length];
+            for (int k = 0; k < x.length; k++) {
+                exact[k] = VoigtProfile.value(x[k], alpha, gamma);
+                approx[k] = VoigtProfile.value(x[k], node, gamma);
             }
+            worst = Math.max(worst, formError(x, exact, approx, VoigtProfile.value(0, alpha, gamma), absolute));
         }
         return worst;
     }
 
     /**
      * Position error: a line of widths (αD, γL) spread over {@link #POSITION_POINTS} grid points {@code stepCm1}
-     * apart with the weights of {@link LagrangeWeights#centred}, both sides of the centre.
+     * apart with the weights of {@link LagrangeWeights#centred}, both sides of the centre, untruncated profile.
      */
     static double positionError(double stepCm1, double dopplerHwhmCm1, double lorentzHwhmCm1) {
-        double xDepth = depthDetuning(dopplerHwhmCm1, lorentzHwhmCm1);
+        return positionError(stepCm1, dopplerHwhmCm1, lorentzHwhmCm1, Form.UNTRUNCATED);
+    }
+
+    /**
+     * Position error for a kernel form (in cm⁻¹ here: the form's widths in the same unit as the step). Detunings
+     * inside the edge band are left out: there the edge correction replaces the transform's value exactly in
+     * position ({@link EdgeCorrection}).
+     */
+    static double positionError(double stepCm1, double dopplerHwhmCm1, double lorentzHwhmCm1, Form form) {
+        double[] x = detunings(dopplerHwhmCm1, lorentzHwhmCm1, form);
+        int n = x.length;
+        double bandFrom = form.finite() ? form.cutoff() - form.band() : Double.POSITIVE_INFINITY;
+        double floor = form.depth() * VoigtProfile.value(0, dopplerHwhmCm1, lorentzHwhmCm1);
+        double pedestal = form.finite() && form.removePedestal()
+                ? VoigtProfile.value(form.cutoff(), dopplerHwhmCm1, lorentzHwhmCm1) : 0;
         double[] weights = new double[POSITION_POINTS];
         int shift = POSITION_POINTS / 2 - 1;
         double worst = 0;
         for (int p = 1; p <= POSITIONS; p++) {
             double tau = p / (POSITIONS + 1.0);
             LagrangeWeights.centred(POSITION_POINTS, tau, weights, 0);
-            for (int k = -DETUNINGS; k <= DETUNINGS; k++) {
-                double f = (double) k / DETUNINGS;
-                double x = xDepth * f * f * f;
-                double exact = VoigtProfile.value(x, dopplerHwhmCm1, lorentzHwhmCm1);
-                double approx = 0;
-                for (int j = 0; j < POSITION_POINTS; j++) {
-                    // node j − shift sits (τ − (j − shift))·h away from the true centre
-                    approx += weights[j] * VoigtProfile.value(x + (tau - (j - shift)) * stepCm1, dopplerHwhmCm1,
-                            lorentzHwhmCm1);
+            for (int side = -1; side <= 1; side += 2) {
+                for (int k = 0; k < n; k++) {
+                    if (x[k] >= bandFrom) {
+                        continue;
+                    }
+                    double xs = side * x[k];
+                    double exact = VoigtProfile.value(xs, dopplerHwhmCm1, lorentzHwhmCm1);
+                    double approx = 0;
+                    for (int j = 0; j < POSITION_POINTS; j++) {
+                        // node j − shift sits (τ − (j − shift))·h away from the true centre
+                        approx += weights[j] * VoigtProfile.value(xs + (tau - (j - shift)) * stepCm1, dopplerHwhmCm1,
+                                lorentzHwhmCm1);
+                    }
+                    // a constant pedestal is reproduced exactly by the weights (they sum to 1)
+                    worst = Math.max(worst, Math.abs(approx - exact) / Math.max(Math.abs(exact - pedestal), floor));
                 }
-                worst = Math.max(worst, Math.abs(approx - exact) / exact);
             }
         }
         return worst;
@@ -182,7 +329,12 @@ final class FastErrorModel {
 
     /** The detuning where the profile falls to {@link #DEPTH} of its peak (doubling, then 60 bisections). */
     static double depthDetuning(double dopplerHwhmCm1, double lorentzHwhmCm1) {
-        double target = DEPTH * VoigtProfile.value(0, dopplerHwhmCm1, lorentzHwhmCm1);
+        return depthDetuning(dopplerHwhmCm1, lorentzHwhmCm1, DEPTH);
+    }
+
+    /** The detuning where the profile falls to {@code depth} of its peak (doubling, then 60 bisections). */
+    static double depthDetuning(double dopplerHwhmCm1, double lorentzHwhmCm1, double depth) {
+        double target = depth * VoigtProfile.value(0, dopplerHwhmCm1, lorentzHwhmCm1);
         double hi = Math.max(dopplerHwhmCm1, lorentzHwhmCm1);
         while (VoigtProfile.value(hi, dopplerHwhmCm1, lorentzHwhmCm1) > target) {
             hi *= 2;
@@ -264,9 +416,17 @@ final class FastErrorModel {
             return v > 0 && Double.isFinite(v) ? Math.exp(Math.floor(Math.log(v) / ROUNDING_LOG_STEP) * ROUNDING_LOG_STEP) : v;
         }
 
-        private static double remember(int kind, double a, double b, double c, double d,
+        /**
+         * A form rounded to the worse side: a shorter cutoff (the edge and the pedestal weigh more), a shallower
+         * depth and a wider band.
+         */
+        static Form worse(Form f) {
+            return new Form(down(f.cutoff()), f.removePedestal(), down(f.depth()), up(f.band()));
+        }
+
+        private static double remember(int kind, double a, double b, double c, double d, Form form,
                                        java.util.function.DoubleSupplier measure) {
-            MemoKey key = new MemoKey(kind, a, b, c, d);
+            MemoKey key = new MemoKey(kind, a, b, c, d, form);
             Double known = MEMORY.get(key);
             if (known != null) {
                 return known;
@@ -280,76 +440,94 @@ final class FastErrorModel {
         }
 
         /** {@link #largestStep} of {@link #dopplerAxisError} at γL/αD = {@code lorentzOverDoppler}. */
-        static double dopplerStep(double lorentzOverDoppler, double budget, double minStep, double maxStep) {
+        static double dopplerStep(double lorentzOverDoppler, double budget, double minStep, double maxStep, Form form) {
             double r = down(lorentzOverDoppler);
             double b = down(budget);
-            return remember(DOPPLER_STEP, r, b, minStep, maxStep,
-                    () -> largestStep(s -> dopplerAxisError(s, r), b, minStep, maxStep));
+            Form f = worse(form);
+            return remember(DOPPLER_STEP, r, b, minStep, maxStep, f,
+                    () -> largestStep(s -> dopplerAxisError(s, r, f), b, minStep, maxStep));
         }
 
         /** {@link #largestStep} of {@link #lorentzAxisError} at αD/γL = {@code dopplerOverLorentz}. */
-        static double lorentzStep(double dopplerOverLorentz, double budget, double minStep, double maxStep) {
+        static double lorentzStep(double dopplerOverLorentz, double budget, double minStep, double maxStep, Form form) {
             double r = down(dopplerOverLorentz);
             double b = down(budget);
-            return remember(LORENTZ_STEP, r, b, minStep, maxStep,
-                    () -> largestStep(s -> lorentzAxisError(s, r), b, minStep, maxStep));
+            Form f = worse(form);
+            return remember(LORENTZ_STEP, r, b, minStep, maxStep, f,
+                    () -> largestStep(s -> lorentzAxisError(s, r, f), b, minStep, maxStep));
         }
 
-        /** The largest floor ratio x = γ_f/αD in [min, max] with {@link #flooredLorentzError}(δ, 1/x) within budget. */
-        static double floorRatio(double logStep, double budget, double minRatio, double maxRatio) {
+        /**
+         * The largest floor ratio x = γ_f/αD in [min, max] with {@link #flooredLorentzError}(δ, 1/x) within budget;
+         * {@code formPerAlpha} in units of αD (rescaled to the floor for each ratio tried).
+         */
+        static double floorRatio(double logStep, double budget, double minRatio, double maxRatio, Form formPerAlpha) {
             double b = down(budget);
-            return remember(FLOOR_RATIO, logStep, b, minRatio, maxRatio,
-                    () -> largestStep(x -> flooredLorentzError(logStep, 1 / x), b, minRatio, maxRatio));
+            Form f = worse(formPerAlpha);
+            return remember(FLOOR_RATIO, logStep, b, minRatio, maxRatio, f,
+                    () -> largestStep(x -> flooredLorentzError(logStep, 1 / x, f.rescaled(x)), b, minRatio, maxRatio));
         }
 
         /**
          * The smallest ratio r = γL/αD, 1/r in [min, max], from which one Doppler node keeps {@link
          * #singleDopplerNodeError}(lo, hi, r) within budget, for lines of αD in [lo, hi] (the error depends on hi/lo
-         * only, rounded up; it grows with 1/r); +∞ when even 1/r = min exceeds the budget.
+         * only, rounded up; it grows with 1/r); +∞ when even 1/r = min exceeds the budget. {@code form} in units of
+         * lo.
          */
-        static double singleNodeSplitRatio(double loCm1, double hiCm1, double budget, double min, double max) {
+        static double singleNodeSplitRatio(double loCm1, double hiCm1, double budget, double min, double max,
+                                           Form form) {
             double spread = up(hiCm1 / loCm1);
             double b = down(budget);
-            return remember(SINGLE_NODE_INVERSE, spread, b, min, max, () -> {
-                double inverse = largestStep(x -> singleDopplerNodeError(1.0, spread, 1 / x), b, min, max);
-                return singleDopplerNodeError(1.0, spread, 1 / inverse) <= b ? 1 / inverse : Double.POSITIVE_INFINITY;
+            Form f = worse(form);
+            return remember(SINGLE_NODE_INVERSE, spread, b, min, max, f, () -> {
+                double inverse = largestStep(x -> singleDopplerNodeError(1.0, spread, 1 / x, f), b, min, max);
+                return singleDopplerNodeError(1.0, spread, 1 / inverse, f) <= b ? 1 / inverse : Double.POSITIVE_INFINITY;
             });
         }
 
-        /** {@link #singleDopplerNodeError}, rounded to the worse side. */
-        static double singleNodeError(double loCm1, double hiCm1, double lorentzOverDoppler) {
+        /** {@link #singleDopplerNodeError}, rounded to the worse side ({@code form} in units of lo). */
+        static double singleNodeError(double loCm1, double hiCm1, double lorentzOverDoppler, Form form) {
             double spread = up(hiCm1 / loCm1);
             double r = down(lorentzOverDoppler);
-            return remember(SINGLE_NODE_ERROR, spread, r, 0, 0, () -> singleDopplerNodeError(1.0, spread, r));
+            Form f = worse(form);
+            return remember(SINGLE_NODE_ERROR, spread, r, 0, 0, f, () -> singleDopplerNodeError(1.0, spread, r, f));
         }
 
-        /** {@link #positionError}, with h/αD rounded up and γL/αD down (h/γL up for pure Lorentz lines). */
-        static double position(double stepCm1, double dopplerHwhmCm1, double lorentzHwhmCm1) {
+        /**
+         * {@link #positionError}, with h/αD rounded up and γL/αD down (h/γL up for pure Lorentz lines); {@code
+         * formCm1} in cm⁻¹ (rescaled here to the line's reference width).
+         */
+        static double position(double stepCm1, double dopplerHwhmCm1, double lorentzHwhmCm1, Form formCm1) {
             if (dopplerHwhmCm1 > 0) {
                 double h = up(stepCm1 / dopplerHwhmCm1);
                 double g = down(lorentzHwhmCm1 / dopplerHwhmCm1);
-                return remember(POSITION, h, 1, g, 0, () -> positionError(h, 1.0, g));
+                Form f = worse(formCm1.rescaled(dopplerHwhmCm1));
+                return remember(POSITION, h, 1, g, 0, f, () -> positionError(h, 1.0, g, f));
             }
             double h = up(stepCm1 / lorentzHwhmCm1);
-            return remember(POSITION, h, 0, 1, 0, () -> positionError(h, 0.0, 1.0));
+            Form f = worse(formCm1.rescaled(lorentzHwhmCm1));
+            return remember(POSITION, h, 0, 1, 0, f, () -> positionError(h, 0.0, 1.0, f));
         }
 
-        /** {@link #dopplerAxisError} with the ratio rounded down. */
-        static double dopplerError(double logStep, double lorentzOverDoppler) {
+        /** {@link #dopplerAxisError} with the ratio rounded down ({@code form} in units of αD). */
+        static double dopplerError(double logStep, double lorentzOverDoppler, Form form) {
             double r = down(lorentzOverDoppler);
-            return remember(DOPPLER_ERROR, logStep, r, 0, 0, () -> dopplerAxisError(logStep, r));
+            Form f = worse(form);
+            return remember(DOPPLER_ERROR, logStep, r, 0, 0, f, () -> dopplerAxisError(logStep, r, f));
         }
 
-        /** {@link #lorentzAxisError} with the ratio rounded down. */
-        static double lorentzError(double logStep, double dopplerOverLorentz) {
+        /** {@link #lorentzAxisError} with the ratio rounded down ({@code form} in units of γL). */
+        static double lorentzError(double logStep, double dopplerOverLorentz, Form form) {
             double r = down(dopplerOverLorentz);
-            return remember(LORENTZ_ERROR, logStep, r, 0, 0, () -> lorentzAxisError(logStep, r));
+            Form f = worse(form);
+            return remember(LORENTZ_ERROR, logStep, r, 0, 0, f, () -> lorentzAxisError(logStep, r, f));
         }
 
-        /** {@link #flooredLorentzError} with the ratio rounded down. */
-        static double floorError(double logStep, double dopplerOverFloor) {
+        /** {@link #flooredLorentzError} with the ratio rounded down ({@code form} in units of the floor). */
+        static double floorError(double logStep, double dopplerOverFloor, Form form) {
             double r = down(dopplerOverFloor);
-            return remember(FLOOR_ERROR, logStep, r, 0, 0, () -> flooredLorentzError(logStep, r));
+            Form f = worse(form);
+            return remember(FLOOR_ERROR, logStep, r, 0, 0, f, () -> flooredLorentzError(logStep, r, f));
         }
     }
 }

@@ -55,8 +55,11 @@ final class FastPlan {
     /** Largest Doppler + Lorentz axis error over the families. */
     final double widthError;
     final double roundOffError;
-    /** Error of the edge correction's own-width kernels (width interpolation at the cutoff). */
-    final double edgeError;
+    /**
+     * The criterion's depth the errors were measured to: 10⁻⁶, lowered by the ratio of the strongest line peak to a
+     * lower bound of max σ on the grid when the grid samples peaks coarsely.
+     */
+    final double effectiveDepth;
 
     FastPlan(Builder b) {
         grid = b.grid;
@@ -85,7 +88,7 @@ final class FastPlan {
         positionError = b.positionError;
         widthError = b.widthError;
         roundOffError = b.roundOffError;
-        edgeError = b.edgeError;
+        effectiveDepth = b.effectiveDepth;
     }
 
     /** Lines that go through the transform. */
@@ -97,9 +100,12 @@ final class FastPlan {
         return sliceWidths.length;
     }
 
-    /** The a-priori estimate: width axes, position, round-off and edge terms (the analytic terms come at run time). */
+    /**
+     * The a-priori estimate: width axes (their cutoff-edge terms included), position and round-off (the analytic
+     * terms come at run time).
+     */
     double plannedError() {
-        return widthError + positionError + roundOffError + edgeError;
+        return widthError + positionError + roundOffError;
     }
 
     /** Mutable fields the planner fills. */
@@ -129,6 +135,6 @@ final class FastPlan {
         double positionError;
         double widthError;
         double roundOffError;
-        double edgeError;
+        double effectiveDepth = FastErrorModel.DEPTH;
     }
 }

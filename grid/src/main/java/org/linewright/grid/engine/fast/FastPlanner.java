@@ -69,6 +69,13 @@ final class FastPlanner {
     private final double tolerance;
     private final boolean analyticKernels;
 
+    /** The kernel's cutoff (+∞ for none), whether the pedestal is removed, the criterion's effective depth. */
+    private double cutoffCm1 = Double.POSITIVE_INFINITY;
+    private boolean removePedestal;
+    private double depth = FastErrorModel.DEPTH;
+    /** The current internal step (the edge band is six of them). */
+    private double stepCm1;
+
     // family splits, set while planning
     private double lowSplitCm1;
     private double lowFloorCm1;
@@ -120,6 +127,11 @@ final class FastPlanner {
             return new FastPlan(b);
         }
 
+        cutoffCm1 = Double.isNaN(b.edgeCutoffCm1) ? Double.POSITIVE_INFINITY : b.edgeCutoffCm1;
+        removePedestal = wings.removePedestal() && Double.isFinite(cutoffCm1);
+        depth = FastErrorModel.DEPTH / peakRatio();
+        b.effectiveDepth = depth;
+
         // first all lines with αD > 0 in one family, to choose the internal step and the split
         lowSplitCm1 = 0;
         highSplitRatio = Double.POSITIVE_INFINITY;
@@ -127,22 +139,53 @@ final class FastPlanner {
         FamilyStatistics[] stats = gather(b.lineFamily);
         int m = chooseOversampling(stats, outputStep, tolerance / 4);
         double h = outputStep / m;
+        stepCm1 = h;
         // lines the finest internal grid cannot resolve are summed directly
         if (worstPositionError(stats, h) > tolerance / 4) {
-            b.directLines = markUnresolved(b.lineFamily, h, tolerance / 4);
-            b.directReason = b.directLines + " lines narrower than the finest internal grid (step " + h + " cm-1)";
+            int unresolved = markUnresolved(b.lineFamily, h, tolerance / 4);
+            b.directLines += unresolved;
+            b.directReason = unresolved + " lines narrower than the finest internal grid (step " + h + " cm-1)";
             stats = gather(b.lineFamily);
         }
-        double widthBudget = widthBudget(stats, h, b.uniform);
-        chooseLorentzSplit(stats[Family.VOIGT], stats[Family.VOIGT + Family.KINDS], widthBudget);
-        chooseDopplerSplit(stats[Family.VOIGT], stats[Family.VOIGT + Family.KINDS], widthBudget);
-        classify(b.lineFamily);
-        stats = gather(b.lineFamily);
-        double position = worstPositionError(stats, h);
-        b.positionError = b.uniform ? position : 2 * position;
         b.oversampling = m;
         b.stepCm1 = h;
-        planFamilies(b, stats, widthBudget(stats, h, b.uniform));
+        // a family whose width axes cannot keep the budget even at the finest step (a cutoff within a few widths,
+        // where the edge weighs much against the criterion's floor) is summed directly instead
+        while (true) {
+            double widthBudget = widthBudget(stats, h, b.uniform);
+            chooseLorentzSplit(stats[Family.VOIGT], stats[Family.VOIGT + Family.KINDS], widthBudget);
+            chooseDopplerSplit(stats[Family.VOIGT], stats[Family.VOIGT + Family.KINDS], widthBudget);
+            classify(b.lineFamily);
+            stats = gather(b.lineFamily);
+            double budget = widthBudget(stats, h, b.uniform);
+            int failing = planFamilies(b, stats, budget);
+            if (failing < 0) {
+                break;
+            }
+            int moved = 0;
+            for (int i = 0; i < count; i++) {
+                if (b.lineFamily[i] == failing) {
+                    b.lineFamily[i] = FastPlan.DIRECT;
+                    moved++;
+                }
+            }
+            b.directLines += moved;
+            b.directReason = (b.directReason.isEmpty() ? "" : b.directReason + "; ") + moved + " lines of family "
+                    + Family.name(failing) + " whose width interpolation cannot keep the tolerance at the cutoff "
+                    + cutoffCm1 + " cm-1";
+            java.util.Arrays.fill(b.families, null);
+            stats = gather(b.lineFamily);
+            boolean any = false;
+            for (FamilyStatistics f : stats) {
+                any |= f != null;
+            }
+            if (!any) {
+                b.originCm1 = points[0];
+                return new FastPlan(b);
+            }
+        }
+        double position = worstPositionError(stats, h);
+        b.positionError = b.uniform ? position : 2 * position;
 
         b.originCm1 = b.uniform ? points[0] : points[0] - INTERPOLATION_MARGIN * h;
         b.internalPoints = b.uniform ? (long) (n - 1) * m + 1
@@ -161,8 +204,7 @@ final class FastPlanner {
         }
         b.widthError = widthError;
         if (b.layout != null) {
-            b.roundOffError = 64 * Math.ulp(1.0) * (Math.log(b.layout.ringLength()) / Math.log(2))
-                    / FastErrorModel.DEPTH;
+            b.roundOffError = 64 * Math.ulp(1.0) * (Math.log(b.layout.ringLength()) / Math.log(2)) / depth;
         }
         checkMemory(b, threads);
         return new FastPlan(b);
@@ -209,21 +251,74 @@ final class FastPlanner {
         return stats;
     }
 
-    private static double worstPositionError(FamilyStatistics[] stats, double h) {
+    /**
+     * The kernel form in cm⁻¹ at internal step h: the cutoff, the pedestal, the effective depth and the edge band
+     * (the six internal steps below R in which {@link EdgeCorrection} replaces the transform's values).
+     */
+    private FastErrorModel.Form formCm1(double h) {
+        return new FastErrorModel.Form(cutoffCm1, removePedestal, depth, Double.isFinite(cutoffCm1) ? 6 * h : 0);
+    }
+
+    /**
+     * The largest position error over the families at step h: at each family's narrowest widths (the hardest to
+     * interpolate) and at its widest (whose kernel weighs most at the cutoff).
+     */
+    private double worstPositionError(FamilyStatistics[] stats, double h) {
+        FastErrorModel.Form form = formCm1(h);
         double worst = 0;
         for (FamilyStatistics f : stats) {
             if (f != null) {
-                worst = Math.max(worst, FastErrorModel.Planner.position(h, f.alphaMin, f.gammaMin));
+                worst = Math.max(worst, FastErrorModel.Planner.position(h, f.alphaMin, f.gammaMin, form));
+                worst = Math.max(worst, FastErrorModel.Planner.position(h, f.alphaMax, f.gammaMax, form));
             }
         }
         return worst;
+    }
+
+    /**
+     * max S·V(0) over the transformed lines divided by a lower bound of max σ on the grid — the largest
+     * S·(V(d) − pedestal) of any line, d the distance from its centre to the nearest grid point — at least 1. When
+     * the grid samples line peaks coarsely, 10⁻⁶·max σ is below 10⁻⁶ of the strongest peak by this factor, and
+     * the measures' depth is lowered by it.
+     */
+    private double peakRatio() {
+        double[] points = grid.pointsCm1();
+        int n = points.length;
+        double upper = 0;
+        double lower = 0;
+        for (int i = 0; i < lines.count; i++) {
+            double a = lines.dopplerCm1[i];
+            double g = lines.lorentzCm1[i];
+            double s = lines.strength[i];
+            double peak = s * org.linewright.broadening.voigt.VoigtProfile.value(0, a, g);
+            upper = Math.max(upper, peak);
+            if (peak <= lower) {
+                continue;
+            }
+            double c = lines.centerCm1[i];
+            int k = WingKernel.firstIndexAtOrAbove(points, 0, n, c);
+            double d = Double.POSITIVE_INFINITY;
+            if (k < n) {
+                d = points[k] - c;
+            }
+            if (k > 0) {
+                d = Math.min(d, c - points[k - 1]);
+            }
+            if (d > cutoffCm1) {
+                continue;
+            }
+            double pedestal = removePedestal ? org.linewright.broadening.voigt.VoigtProfile.value(cutoffCm1, a, g) : 0;
+            lower = Math.max(lower, s * (org.linewright.broadening.voigt.VoigtProfile.value(d, a, g) - pedestal));
+        }
+        return lower > 0 ? Math.max(1, upper / lower) : 1;
     }
 
     /** Marks the lines whose own position error at step h exceeds the share as summed directly; their count. */
     private int markUnresolved(byte[] lineFamily, double h, double share) {
         int direct = 0;
         for (int i = 0; i < lines.count; i++) {
-            if (FastErrorModel.Planner.position(h, lines.dopplerCm1[i], lines.lorentzCm1[i]) > share) {
+            if (lineFamily[i] != FastPlan.DIRECT
+                    && FastErrorModel.Planner.position(h, lines.dopplerCm1[i], lines.lorentzCm1[i], formCm1(h)) > share) {
                 lineFamily[i] = FastPlan.DIRECT;
                 direct++;
             }
@@ -242,7 +337,7 @@ final class FastPlanner {
     }
 
     /** Smallest m ≤ {@link #MAX_OVERSAMPLING} whose position error is within the share for every family. */
-    private static int chooseOversampling(FamilyStatistics[] stats, double outputStep, double share) {
+    private int chooseOversampling(FamilyStatistics[] stats, double outputStep, double share) {
         int m = 1;
         while (true) {
             double worst = worstPositionError(stats, outputStep / m);
@@ -278,8 +373,9 @@ final class FastPlanner {
         if (!(gammaMax > 0)) {
             return;
         }
-        double step = FastErrorModel.Planner.lorentzStep(alphaMin / gammaMax, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP);
-        double floorCm1 = lorentzFloorCm1(alphaMin, step, budget / 2);
+        double step = FastErrorModel.Planner.lorentzStep(alphaMin / gammaMax, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP,
+                formCm1(stepCm1).rescaled(gammaMax));
+        double floorCm1 = lorentzFloorCm1(alphaMin, step, budget / 2, formCm1(stepCm1).rescaled(alphaMin));
         double split = floorCm1 * Math.exp(step);
         if (gammaMin < split) {
             lowSplitCm1 = split;
@@ -310,7 +406,7 @@ final class FastPlanner {
         }
         // error grows with 1/r: the smallest r (largest 1/r) within half the budget
         double ratio = FastErrorModel.Planner.singleNodeSplitRatio(alphaMin, alphaMax, budget / 2,
-                1 / MAX_SPLIT_RATIO, 1.0);
+                1 / MAX_SPLIT_RATIO, 1.0, formCm1(stepCm1).rescaled(alphaMin));
         if (ratio < Double.POSITIVE_INFINITY && gammaMax >= ratio * alphaMin) {
             highSplitRatio = ratio;
         }
@@ -321,16 +417,25 @@ final class FastPlanner {
      * γ_f = r·αD,min, r ∈ [{@value #MIN_FLOOR_RATIO}, 1], whose floored first stencil keeps the profile error within
      * {@code budget} ({@link FastErrorModel#flooredLorentzError}, at the smallest αD, the worst case).
      */
-    static double lorentzFloorCm1(double alphaMinCm1, double logStep, double budget) {
-        double r = FastErrorModel.Planner.floorRatio(logStep, budget, MIN_FLOOR_RATIO, 1.0);
+    static double lorentzFloorCm1(double alphaMinCm1, double logStep, double budget, FastErrorModel.Form formPerAlpha) {
+        double r = FastErrorModel.Planner.floorRatio(logStep, budget, MIN_FLOOR_RATIO, 1.0, formPerAlpha);
         return r * alphaMinCm1;
     }
 
-    /** Each family's width axes (the Doppler axis gets half the budget, the Lorentz axis the rest), kernel path. */
-    private void planFamilies(FastPlan.Builder b, FamilyStatistics[] stats, double budget) {
+    /**
+     * Each family's width axes (the Doppler axis gets half the budget, the Lorentz axis the rest) and kernel path,
+     * every error measured for the kernel form of this computation (cutoff, pedestal, depth, edge band).
+     *
+     * @return the index of a family whose axes cannot keep the budget even at the finest log step, or −1 when every
+     *         family keeps it (the families are then set in the builder)
+     */
+    private int planFamilies(FastPlan.Builder b, FamilyStatistics[] stats, double budget) {
         double analyticCutoff = b.edgeCutoffCm1;
+        FastErrorModel.Form form = formCm1(stepCm1);
         int slices = 0;
         int keys = 0;
+        int widest = -1;
+        int widestSlices = 0;
         for (int index = 0; index < Family.COUNT; index++) {
             FamilyStatistics f = stats[index];
             if (f == null) {
@@ -344,14 +449,21 @@ final class FastPlanner {
             } else if (kind == Family.LORENTZ_DOMINATED) {
                 // one Doppler node, in the middle of the family's αD² range; error measured at its smallest γL/αD
                 doppler = WidthAxis.exact(FastErrorModel.singleDopplerNode(f.alphaMin, f.alphaMax));
-                dopplerError = FastErrorModel.Planner.singleNodeError(f.alphaMin, f.alphaMax, f.minLorentzOverDoppler);
+                dopplerError = FastErrorModel.Planner.singleNodeError(f.alphaMin, f.alphaMax, f.minLorentzOverDoppler,
+                        form.rescaled(f.alphaMin));
             } else {
-                // worst case for the Doppler axis: the most Gaussian line, smallest γL/αD
-                double ratio = f.gammaMin / f.alphaMax;
-                double step = FastErrorModel.Planner.dopplerStep(ratio, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP);
+                // the Doppler axis at the family's widest αD: its most Gaussian line (smallest γL/αD, the hardest to
+                // interpolate) and its most Lorentzian (whose cutoff edge weighs most)
+                FastErrorModel.Form perAlpha = form.rescaled(f.alphaMax);
+                double gaussian = f.gammaMin / f.alphaMax;
+                double lorentzian = f.gammaMax / f.alphaMax;
+                double step = Math.min(
+                        FastErrorModel.Planner.dopplerStep(gaussian, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP, perAlpha),
+                        FastErrorModel.Planner.dopplerStep(lorentzian, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP, perAlpha));
                 doppler = WidthAxis.geometric(f.alphaMin, f.alphaMax, step, 2);
                 dopplerError = doppler.stencilSize() == 1 ? 0
-                        : FastErrorModel.Planner.dopplerError(doppler.logStep(), ratio);
+                        : Math.max(FastErrorModel.Planner.dopplerError(doppler.logStep(), gaussian, perAlpha),
+                        FastErrorModel.Planner.dopplerError(doppler.logStep(), lorentzian, perAlpha));
             }
             WidthAxis lorentz;
             double lorentzError = 0;
@@ -362,28 +474,48 @@ final class FastPlanner {
                 // 0 ≤ γL < γ_f·e^δ: one floored stencil, its error measured at the family's own smallest αD
                 lorentz = WidthAxis.floored(lowFloorCm1, f.gammaMax, lowLogStep);
                 floor = lowFloorCm1;
-                lorentzError = FastErrorModel.Planner.floorError(lorentz.logStep(), f.alphaMin / lowFloorCm1);
+                lorentzError = FastErrorModel.Planner.floorError(lorentz.logStep(), f.alphaMin / lowFloorCm1,
+                        form.rescaled(lowFloorCm1));
             } else {
-                // worst case for the Lorentz axis: the most Lorentzian line, smallest αD/γL
+                // worst case for the Lorentz axis: the most Lorentzian line, smallest αD/γL, at the widest γL
                 double ratio = f.alphaMin / f.gammaMax;
+                FastErrorModel.Form perGamma = form.rescaled(f.gammaMax);
                 double step = FastErrorModel.Planner.lorentzStep(ratio, budget - dopplerError, MIN_LOG_STEP,
-                        MAX_LOG_STEP);
+                        MAX_LOG_STEP, perGamma);
                 lorentz = WidthAxis.geometric(f.gammaMin, f.gammaMax, step, 1);
                 lorentzError = lorentz.stencilSize() == 1 ? 0
-                        : FastErrorModel.Planner.lorentzError(lorentz.logStep(), ratio);
+                        : FastErrorModel.Planner.lorentzError(lorentz.logStep(), ratio, perGamma);
+            }
+            if (dopplerError + lorentzError > budget) {
+                return index;
             }
             WingKernel kernel = Family.withChi(index) ? wingKernel : plainKernel;
             boolean analytic = isAnalytic(kernel, doppler, f, analyticCutoff);
             b.families[index] = new Family(index, f, kernel, doppler, lorentz, dopplerError, lorentzError, floor,
                     slices, keys, analytic);
-            slices += b.families[index].slices();
-            keys += b.families[index].slices();
+            int familySlices = b.families[index].slices();
+            slices += familySlices;
+            keys += familySlices;
+            if (familySlices > widestSlices) {
+                widest = index;
+                widestSlices = familySlices;
+            }
         }
         b.keys = keys;
-        if (slices > MAX_SLICES) {
-            throw new InputException("fast engine: the line widths need " + slices + " width slices at tolerance "
-                    + tolerance + " (at most " + MAX_SLICES + "; loosen the tolerance or use the exact engine)");
-        }
+        // beyond the slice limit the transform costs more than summing the lines directly: the family with the
+        // most slices goes that way
+        return slices > MAX_SLICES ? widest : -1;
+    }
+
+    /**
+     * The wing model's remainder ({@link AnalyticKernels#wingModelError}, relative to a line's value at R) against
+     * the criterion: amplified where R lies within the criterion's depth, by V(R)/(D·V(0)) of the family's widest
+     * line (beyond R the exact kernel is 0 and σ may be made of other lines alone).
+     */
+    private double amplifiedWingModelError(FamilyStatistics f, double cutoff) {
+        double atCutoff = org.linewright.broadening.voigt.VoigtProfile.value(cutoff, f.alphaMax, f.gammaMax)
+                / (depth * org.linewright.broadening.voigt.VoigtProfile.value(0, f.alphaMax, f.gammaMax));
+        return AnalyticKernels.wingModelError(f.alphaMax, cutoff) * Math.max(1, atCutoff);
     }
 
     /**
@@ -395,7 +527,7 @@ final class FastPlanner {
         return analyticKernels && !Double.isNaN(cutoffCm1) && kernel == plainKernel && kernel.chiFactor() == null
                 && doppler.size() >= MIN_DOPPLER_NODES_SHARING && f.alphaMin > 0
                 && f.alphaMax * MIN_CUTOFF_OVER_DOPPLER <= cutoffCm1
-                && AnalyticKernels.wingModelError(f.alphaMax, cutoffCm1) <= tolerance / 100;
+                && amplifiedWingModelError(f, cutoffCm1) <= tolerance / 100;
     }
 
     /** Slice widths and reaches, the kernel reach, the segment layout and the analytic kernels' terms. */
@@ -454,9 +586,10 @@ final class FastPlanner {
         b.offset = (int) reach + 4;
         for (Family f : b.families) {
             if (f != null && f.analytic) {
+                FamilyStatistics widths = new FamilyStatistics();
+                widths.add(f.alphaMax, f.gammaMax);
                 b.anyAnalytic = true;
-                b.wingModelError = Math.max(b.wingModelError, AnalyticKernels.wingModelError(f.alphaMax,
-                        b.edgeCutoffCm1));
+                b.wingModelError = Math.max(b.wingModelError, amplifiedWingModelError(widths, b.edgeCutoffCm1));
             }
         }
         b.analyticCutoffCm1 = b.anyAnalytic ? b.edgeCutoffCm1 : Double.NaN;

@@ -67,7 +67,7 @@ final class PlanDescription {
                 : "exact at the cutoff " + plan.edgeCutoffCm1 + " cm-1");
         m.put("fast.position_error", format(plan.positionError));
         m.put("fast.width_error", format(plan.widthError));
-        m.put("fast.edge_error", format(plan.edgeError));
+        m.put("fast.criterion_depth", format(plan.effectiveDepth));
         m.put("fast.round_off_error", format(plan.roundOffError));
         for (Family f : plan.families) {
             if (f != null) {

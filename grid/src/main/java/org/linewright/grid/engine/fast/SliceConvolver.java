@@ -246,7 +246,7 @@ final class SliceConvolver {
                 } else if (curvatureLoaded) {
                     curvatureCorrection = cache.get(s.lorentzCm1, true, kernel, out);
                 } else {
-                    out.curvatureError = Math.max(out.curvatureError, curvature / FastErrorModel.DEPTH);
+                    out.curvatureError = Math.max(out.curvatureError, curvature / plan.effectiveDepth);
                 }
                 loadedGroup = s.group;
             }
@@ -257,7 +257,7 @@ final class SliceConvolver {
                 // a line's weakest point of interest is 10⁻⁶ of its peak; the neglected aliases are at most
                 // tail/h anywhere in real space
                 double peak = VoigtProfile.value(0, s.dopplerCm1, s.lorentzCm1);
-                out.aliasError = Math.max(out.aliasError, tail / (plan.stepCm1 * FastErrorModel.DEPTH * peak));
+                out.aliasError = Math.max(out.aliasError, tail / (plan.stepCm1 * plan.effectiveDepth * peak));
                 if (corrected && curvatureLoaded) {
                     double w = 0.5 * AnalyticKernels.dopplerVariance(s.dopplerCm1);
                     for (int k = 0; k <= half; k++) {

@@ -89,24 +89,44 @@ class FastErrorModelTest {
     @Test
     void plannerRoundingIsOnTheWorseSide() {
         double[] ratios = {0.013, 0.27, 1.9, 23.0};
+        FastErrorModel.Form untruncated = FastErrorModel.Form.UNTRUNCATED;
         for (double r : ratios) {
             double lower = FastErrorModel.Planner.down(r);
             assertTrue(lower <= r && lower > r * Math.exp(-FastErrorModel.ROUNDING_LOG_STEP) * (1 - 1e-12), "down " + r);
             assertTrue(FastErrorModel.dopplerAxisError(0.4, lower) >= FastErrorModel.dopplerAxisError(0.4, r), "doppler " + r);
             assertTrue(FastErrorModel.lorentzAxisError(0.4, lower) >= FastErrorModel.lorentzAxisError(0.4, r), "lorentz " + r);
-            assertTrue(FastErrorModel.Planner.position(0.5, 1.0, r) >= FastErrorModel.positionError(0.5, 1.0, r),
-                    "position " + r);
-            assertTrue(FastErrorModel.Planner.dopplerStep(r, 1e-4, 1e-3, 2.0)
+            assertTrue(FastErrorModel.Planner.position(0.5, 1.0, r, untruncated)
+                            >= FastErrorModel.positionError(0.5, 1.0, r), "position " + r);
+            assertTrue(FastErrorModel.Planner.dopplerStep(r, 1e-4, 1e-3, 2.0, untruncated)
                     <= FastErrorModel.largestStep(s -> FastErrorModel.dopplerAxisError(s, r), 1e-4, 1e-3, 2.0), "step " + r);
-            assertTrue(FastErrorModel.Planner.lorentzStep(r, 1e-4, 1e-3, 2.0)
+            assertTrue(FastErrorModel.Planner.lorentzStep(r, 1e-4, 1e-3, 2.0, untruncated)
                     <= FastErrorModel.largestStep(s -> FastErrorModel.lorentzAxisError(s, r), 1e-4, 1e-3, 2.0), "step " + r);
         }
         for (double a : new double[] {3.3, 17.0}) {
-            assertTrue(FastErrorModel.Planner.floorError(0.3, a) >= FastErrorModel.flooredLorentzError(0.3, a), "floor " + a);
+            assertTrue(FastErrorModel.Planner.floorError(0.3, a, untruncated) >= FastErrorModel.flooredLorentzError(0.3, a),
+                    "floor " + a);
         }
-        assertTrue(FastErrorModel.Planner.singleNodeError(1.0, 1.37, 12.0)
+        assertTrue(FastErrorModel.Planner.singleNodeError(1.0, 1.37, 12.0, untruncated)
                 >= FastErrorModel.singleDopplerNodeError(1.0, 1.37, 12.0));
         // remembered answers are the measures' own values
-        assertEquals(FastErrorModel.Planner.position(0.5, 1.0, 0.27), FastErrorModel.Planner.position(0.5, 1.0, 0.27));
+        assertEquals(FastErrorModel.Planner.position(0.5, 1.0, 0.27, untruncated),
+                FastErrorModel.Planner.position(0.5, 1.0, 0.27, untruncated));
+    }
+
+    /**
+     * With a cutoff a few widths away the kernel's edge and its pedestal weigh against the criterion's floor: the
+     * measured error grows as the cutoff shortens (the monotonicity the planner's rounding of the cutoff relies on),
+     * and the planner's rounded form never measures less than the exact one.
+     */
+    @Test
+    void aCloserCutoffWeighsMore() {
+        for (boolean removed : new boolean[] {false, true}) {
+            double far = FastErrorModel.lorentzAxisError(0.3, 0.1, new FastErrorModel.Form(40.0, removed, 1e-6, 0.05));
+            double near = FastErrorModel.lorentzAxisError(0.3, 0.1, new FastErrorModel.Form(4.0, removed, 1e-6, 0.05));
+            assertTrue(near > far, "pedestal removed " + removed + ": near " + near + ", far " + far);
+            FastErrorModel.Form form = new FastErrorModel.Form(7.3, removed, 3e-7, 0.05);
+            assertTrue(FastErrorModel.Planner.lorentzError(0.3, 0.1, form) >= FastErrorModel.lorentzAxisError(0.3, 0.1, form));
+            assertTrue(FastErrorModel.Planner.dopplerError(0.3, 0.5, form) >= FastErrorModel.dopplerAxisError(0.3, 0.5, form));
+        }
     }
 }
