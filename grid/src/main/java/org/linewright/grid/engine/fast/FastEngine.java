@@ -88,6 +88,8 @@ public final class FastEngine implements CrossSectionEngine {
     private final WingTreatment wings;
     private final double tolerance;
     private final boolean analyticKernels;
+    /** Whether families cheaper summed directly are (false: the transform whenever it keeps the tolerance). */
+    private final boolean costChoice;
     private final ExecutorService pool;
     private final LineBuffer lines = new LineBuffer();
 
@@ -113,7 +115,7 @@ public final class FastEngine implements CrossSectionEngine {
      * @throws InputException for a tolerance out of range
      */
     public FastEngine(int threads, WingTreatment wings, double tolerance) {
-        this(threads, wings, tolerance, true);
+        this(threads, wings, tolerance, true, true);
     }
 
     /**
@@ -122,8 +124,11 @@ public final class FastEngine implements CrossSectionEngine {
      * @param tolerance        relative tolerance, in [{@value #MIN_TOLERANCE}, {@value #MAX_TOLERANCE}]
      * @param analyticKernels  whether slices may take the closed-form kernel transforms (false: every kernel sampled
      *                         and transformed numerically, the reference for tests and benchmarks)
+     * @param costChoice       whether a family of lines cheaper summed directly than transformed is summed directly
+     *                         (false, for tests of the transform itself: only lines it cannot treat within the
+     *                         tolerance are)
      */
-    FastEngine(int threads, WingTreatment wings, double tolerance, boolean analyticKernels) {
+    FastEngine(int threads, WingTreatment wings, double tolerance, boolean analyticKernels, boolean costChoice) {
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be at least 1, got " + threads);
         }
@@ -132,6 +137,7 @@ public final class FastEngine implements CrossSectionEngine {
         this.wings = wings;
         this.tolerance = tolerance;
         this.analyticKernels = analyticKernels;
+        this.costChoice = costChoice;
         // slices already run in parallel here; the FFT's own threads would only compete (and are process-wide)
         ConcurrencyUtils.setNumberOfThreads(1);
         this.pool = Executors.newFixedThreadPool(threads, r -> {
@@ -139,6 +145,16 @@ public final class FastEngine implements CrossSectionEngine {
             t.setDaemon(true);
             return t;
         });
+    }
+
+    /** {@link #transformOnly(int, WingTreatment, double, boolean)} with the analytic kernels allowed. */
+    static FastEngine transformOnly(int threads, WingTreatment wings, double tolerance) {
+        return transformOnly(threads, wings, tolerance, true);
+    }
+
+    /** An engine that transforms every line it can treat within the tolerance (tests of the transform itself). */
+    static FastEngine transformOnly(int threads, WingTreatment wings, double tolerance, boolean analyticKernels) {
+        return new FastEngine(threads, wings, tolerance, analyticKernels, false);
     }
 
     /**
@@ -203,8 +219,8 @@ public final class FastEngine implements CrossSectionEngine {
             plan.put("fast.lines", "0");
             return;
         }
-        FastPlan p = new FastPlanner(lines, grid, wings, wingKernel, plainKernel, tolerance, analyticKernels)
-                .plan(threads, forcedRingLength);
+        FastPlan p = new FastPlanner(lines, grid, wings, wingKernel, plainKernel, tolerance, analyticKernels,
+                costChoice).plan(threads, forcedRingLength);
         SliceConvolver.Counts counts = new SliceConvolver.Counts();
         int distinctSlices = 0;
         if (p.transformedLines() > 0 && p.slices() > 0) {

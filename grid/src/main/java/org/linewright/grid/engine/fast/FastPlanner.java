@@ -68,6 +68,8 @@ final class FastPlanner {
     private final WingKernel plainKernel;
     private final double tolerance;
     private final boolean analyticKernels;
+    /** Whether a family whose transform would cost more than summing its lines directly is summed directly. */
+    private final boolean costChoice;
 
     /** The kernel's cutoff (+∞ for none), whether the pedestal is removed, the criterion's effective depth. */
     private double cutoffCm1 = Double.POSITIVE_INFINITY;
@@ -87,7 +89,7 @@ final class FastPlanner {
      * @param plainKernel the same without χ (the same object when χ is off)
      */
     FastPlanner(LineBuffer lines, WavenumberGrid grid, WingTreatment wings, WingKernel wingKernel,
-                WingKernel plainKernel, double tolerance, boolean analyticKernels) {
+                WingKernel plainKernel, double tolerance, boolean analyticKernels, boolean costChoice) {
         this.lines = lines;
         this.grid = grid;
         this.wings = wings;
@@ -95,6 +97,7 @@ final class FastPlanner {
         this.plainKernel = plainKernel;
         this.tolerance = tolerance;
         this.analyticKernels = analyticKernels;
+        this.costChoice = costChoice;
     }
 
     /**
@@ -149,6 +152,14 @@ final class FastPlanner {
         }
         b.oversampling = m;
         b.stepCm1 = h;
+        b.originCm1 = b.uniform ? points[0] : points[0] - INTERPOLATION_MARGIN * h;
+        b.internalPoints = b.uniform ? (long) (n - 1) * m + 1
+                : (long) Math.ceil((points[n - 1] - points[0]) / h) + 2 * INTERPOLATION_MARGIN + 1;
+        if (b.internalPoints + 2L * FastEngine.MAX_FFT_LENGTH >= Integer.MAX_VALUE) {
+            throw new InputException("fast engine: an internal grid of " + b.internalPoints + " points (grid of " + n
+                    + " points refined " + m + " times) is beyond the engine's index range; use a smaller range or "
+                    + "the exact engine");
+        }
         // a family whose width axes cannot keep the budget even at the finest step (a cutoff within a few widths,
         // where the edge weighs much against the criterion's floor) is summed directly instead
         while (true) {
@@ -158,6 +169,7 @@ final class FastPlanner {
             classify(b.lineFamily);
             stats = gather(b.lineFamily);
             double budget = widthBudget(stats, h, b.uniform);
+            cheaperDirect = false;
             int failing = planFamilies(b, stats, budget);
             if (failing < 0) {
                 break;
@@ -171,8 +183,8 @@ final class FastPlanner {
             }
             b.directLines += moved;
             b.directReason = (b.directReason.isEmpty() ? "" : b.directReason + "; ") + moved + " lines of family "
-                    + Family.name(failing) + " whose width interpolation cannot keep the tolerance at the cutoff "
-                    + cutoffCm1 + " cm-1";
+                    + Family.name(failing) + (cheaperDirect ? " cheaper summed directly than transformed"
+                    : " whose width interpolation cannot keep the tolerance at the cutoff " + cutoffCm1 + " cm-1");
             java.util.Arrays.fill(b.families, null);
             stats = gather(b.lineFamily);
             boolean any = false;
@@ -180,21 +192,12 @@ final class FastPlanner {
                 any |= f != null;
             }
             if (!any) {
-                b.originCm1 = points[0];
                 return new FastPlan(b);
             }
         }
         double position = worstPositionError(stats, h);
         b.positionError = b.uniform ? position : 2 * position;
 
-        b.originCm1 = b.uniform ? points[0] : points[0] - INTERPOLATION_MARGIN * h;
-        b.internalPoints = b.uniform ? (long) (n - 1) * m + 1
-                : (long) Math.ceil((points[n - 1] - points[0]) / h) + 2 * INTERPOLATION_MARGIN + 1;
-        if (b.internalPoints + 2L * FastEngine.MAX_FFT_LENGTH >= Integer.MAX_VALUE) {
-            throw new InputException("fast engine: an internal grid of " + b.internalPoints + " points (grid of " + n
-                    + " points refined " + m + " times) is beyond the engine's index range; use a smaller range or "
-                    + "the exact engine");
-        }
         planSlices(b, forcedRingLength);
         double widthError = 0;
         for (Family f : b.families) {
@@ -491,6 +494,10 @@ final class FastPlanner {
             }
             WingKernel kernel = Family.withChi(index) ? wingKernel : plainKernel;
             boolean analytic = isAnalytic(kernel, doppler, f, analyticCutoff);
+            if (costChoice && directCheaper(b, f, doppler.size() * lorentz.size(), analytic)) {
+                cheaperDirect = true;
+                return index;
+            }
             b.families[index] = new Family(index, f, kernel, doppler, lorentz, dopplerError, lorentzError, floor,
                     slices, keys, analytic);
             int familySlices = b.families[index].slices();
@@ -505,6 +512,32 @@ final class FastPlanner {
         // beyond the slice limit the transform costs more than summing the lines directly: the family with the
         // most slices goes that way
         return slices > MAX_SLICES ? widest : -1;
+    }
+
+    /** Set by {@link #planFamilies} when the family it returns is cheaper summed directly (not beyond the budget). */
+    private boolean cheaperDirect;
+    /** Time of one profile value of direct summation, one thread (docs/performance.md: about 300 M/s). */
+    static final double DIRECT_NANOS_PER_VALUE = 3.3;
+
+    /**
+     * Whether summing a family's lines directly is estimated to cost less than its transform: lines × output points
+     * within the cutoff × {@value #DIRECT_NANOS_PER_VALUE} ns against slices × transforms per slice (2 sampled, about
+     * 1.2 analytic) × ring points × the measured FFT time per point ({@link SegmentLayout#nanosPerPoint}), the ring
+     * covering the internal grid and twice the reach. Where a cutoff lies within a few widths the width axes must
+     * be fine (the edge weighs much against the criterion's floor) and few lines fill few points: direct summation
+     * is then both exact and cheaper.
+     */
+    private boolean directCheaper(FastPlan.Builder b, FamilyStatistics f, int slices, boolean analytic) {
+        double[] points = grid.pointsCm1();
+        int n = points.length;
+        double span = n > 1 ? points[n - 1] - points[0] : 1;
+        double inCutoff = Double.isFinite(cutoffCm1) ? Math.min(n, n * 2 * cutoffCm1 / span + 1) : n;
+        double direct = f.lines * inCutoff * DIRECT_NANOS_PER_VALUE;
+        double reach = Double.isFinite(cutoffCm1) ? cutoffCm1 / stepCm1 : b.internalPoints;
+        long ring = FastEngine.fftLength((int) Math.min(FastEngine.MAX_FFT_LENGTH,
+                (long) ((double) b.internalPoints + 2 * reach + 8)));
+        double transform = slices * (analytic ? 1.2 : 2.0) * ring * SegmentLayout.nanosPerPoint((int) ring);
+        return direct < transform;
     }
 
     /**

@@ -95,7 +95,7 @@ class FastEngineConditionsBenchmarkTest {
                         Map<String, String> plan;
                         double estimate;
                         try (FastEngine engine = new FastEngine(THREADS, WingTreatment.defaults(),
-                                FastEngine.DEFAULT_TOLERANCE, analytic)) {
+                                FastEngine.DEFAULT_TOLERANCE, analytic, true)) {
                             engine.begin(grid, pressureAtm, temperatureK);
                             for (LineChunk c : rec.chunks) {
                                 engine.accumulate(c, s);

@@ -18,7 +18,7 @@ class FastEngineContractTest {
 
     @Test
     void describesItselfAndItsWingTreatment() {
-        try (FastEngine engine = new FastEngine(1, WingTreatment.defaults(), 1e-3)) {
+        try (FastEngine engine = FastEngine.transformOnly(1, WingTreatment.defaults(), 1e-3)) {
             assertEquals("fast", engine.id());
             Map<String, String> m = engine.describe();
             assertEquals("fast", m.get("engine"));
@@ -34,7 +34,7 @@ class FastEngineContractTest {
         WavenumberGrid grid = WavenumberGrid.uniform(100, 101, 0.01);
         double[] sigma = new double[grid.size()];
         sigma[3] = 7.0;
-        try (FastEngine engine = new FastEngine(2, WingTreatment.defaults(), 1e-3)) {
+        try (FastEngine engine = FastEngine.transformOnly(2, WingTreatment.defaults(), 1e-3)) {
             engine.begin(grid, 1.0, 296.0);
             LineChunk chunk = new LineChunk(4);
             chunk.size = 0;
@@ -52,7 +52,7 @@ class FastEngineContractTest {
         WavenumberGrid grid = WavenumberGrid.uniform(100, 101, 0.01);
         LineChunk chunk = FastEngineAccuracyTest.lines(11, 20, 110, 120, 0.001, 0.002, 0.01, 0.05);
         double[] sigma = new double[grid.size()];
-        try (FastEngine engine = new FastEngine(1, WingTreatment.defaults().withCutoff(WingCutoff.fixed(5.0)), 1e-3)) {
+        try (FastEngine engine = FastEngine.transformOnly(1, WingTreatment.defaults().withCutoff(WingCutoff.fixed(5.0)), 1e-3)) {
             engine.begin(grid, 1.0, 296.0);
             engine.accumulate(chunk, sigma);
             engine.finish(sigma);
@@ -84,7 +84,7 @@ class FastEngineContractTest {
         chunk.intensityCmPerMolecule[5] = 1e-20;
         chunk.dopplerHwhmCm1[5] = 0.001;
         chunk.lorentzHwhmCm1[5] = 0.07;
-        try (FastEngine engine = new FastEngine(1, WingTreatment.defaults(), 1e-3)) {
+        try (FastEngine engine = FastEngine.transformOnly(1, WingTreatment.defaults(), 1e-3)) {
             double[] sigma = new double[grid.size()];
             engine.begin(grid, 1.0, 296.0);
             engine.accumulate(chunk, sigma);
@@ -101,8 +101,10 @@ class FastEngineContractTest {
     void refusesBadArguments() {
         assertThrows(InputException.class, () -> new FastEngine(1, WingTreatment.defaults(), 0.0));
         assertThrows(InputException.class, () -> new FastEngine(1, WingTreatment.defaults(), 0.5));
+        // below the smallest tolerance the transforms' round-off is not small against the criterion: refused
+        assertThrows(InputException.class, () -> new FastEngine(1, WingTreatment.defaults(), 1e-9));
         assertThrows(IllegalArgumentException.class, () -> new FastEngine(0, WingTreatment.defaults(), 1e-3));
-        try (FastEngine engine = new FastEngine(1, WingTreatment.defaults(), 1e-3)) {
+        try (FastEngine engine = FastEngine.transformOnly(1, WingTreatment.defaults(), 1e-3)) {
             WavenumberGrid grid = WavenumberGrid.uniform(100, 101, 0.01);
             engine.begin(grid, 1.0, 296.0);
             LineChunk chunk = new LineChunk(1);

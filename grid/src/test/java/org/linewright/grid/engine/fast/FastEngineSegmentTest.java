@@ -32,7 +32,7 @@ class FastEngineSegmentTest {
 
     private static double[] run(WavenumberGrid grid, LineChunk chunk, WingTreatment wings, int threads,
                                 int ringLength, boolean analytic, Map<String, String>[] plan, double[] estimate) {
-        try (FastEngine engine = new FastEngine(threads, wings, TOLERANCE, analytic)) {
+        try (FastEngine engine = FastEngine.transformOnly(threads, wings, TOLERANCE, analytic)) {
             engine.forceRingLength(ringLength);
             double[] sigma = new double[grid.size()];
             engine.begin(grid, 1.0, 296.0);
@@ -142,7 +142,7 @@ class FastEngineSegmentTest {
 
         // and against direct summation, away from the blurred cutoff edges (a documented difference)
         double[] direct = FastEngineAccuracyTest.direct(grid, chunk, wings);
-        boolean[] nearEdge = FastEngineAccuracyTest.edgePoints(grid, chunk, 1.0, 3 * h + 1e-9);
+        boolean[] nearEdge = null; // every point, the cutoff edges included
         double observed = FastEngineAccuracyTest.maxRelativeError(segmented, direct, nearEdge);
         System.out.printf("boundaries: %s segments of %s points (ring %s), vs one ring %.2e of max sigma, "
                         + "vs direct %.2e (estimate %.2e)%n", segPlan[0].get("fast.segments"),
@@ -165,7 +165,7 @@ class FastEngineSegmentTest {
         assertTrue(Integer.parseInt(plan[0].get("fast.segments")) >= 4, plan[0].toString());
         double[] d = FastEngineAccuracyTest.direct(grid, chunk, wings);
         double h = Double.parseDouble(plan[0].get("fast.internal_step_cm1"));
-        boolean[] nearEdge = FastEngineAccuracyTest.edgePoints(grid, chunk, 0.5, 4 * h);
+        boolean[] nearEdge = null; // every point, the cutoff edges included
         double observed = FastEngineAccuracyTest.maxRelativeError(f, d, nearEdge);
         System.out.printf("pedestal removed: %s segments of %s points, vs direct %.2e (estimate %.2e)%n",
                 plan[0].get("fast.segments"), plan[0].get("fast.segment_points"), observed, estimate[0]);
@@ -209,7 +209,7 @@ class FastEngineSegmentTest {
                 "segmented vs one ring: " + maxAbsDifference(segmented, oneRing) / scale);
         double[] direct = FastEngineAccuracyTest.direct(grid, chunk, wings);
         double h = Double.parseDouble(segPlan[0].get("fast.internal_step_cm1"));
-        boolean[] nearEdge = FastEngineAccuracyTest.edgePoints(grid, chunk, 1.0, 4 * h);
+        boolean[] nearEdge = null; // every point, the cutoff edges included
         double observed = FastEngineAccuracyTest.maxRelativeError(segmented, direct, nearEdge);
         assertTrue(observed <= TOLERANCE, "observed " + observed);
         assertTrue(observed <= estimate[0], "observed " + observed + " > estimate " + estimate[0]);
@@ -258,7 +258,7 @@ class FastEngineSegmentTest {
         assertTrue(maxAbsDifference(segmented, oneRing) <= ROUND_OFF * scale,
                 "segmented vs one ring: " + maxAbsDifference(segmented, oneRing) / scale);
         double[] direct = FastEngineAccuracyTest.direct(grid, chunk, wings);
-        boolean[] nearEdge = FastEngineAccuracyTest.edgePoints(grid, chunk, 25.0, 3 * 0.004 + 1e-9);
+        boolean[] nearEdge = null; // every point, the cutoff edges included
         double observed = FastEngineAccuracyTest.maxRelativeError(segmented, direct, nearEdge);
         System.out.printf("analytic, shared corrections: %d segments, %s correction transforms, vs one ring %.2e of "
                         + "max sigma, vs direct %.2e (estimate %.2e)%n", segments,
