@@ -114,6 +114,25 @@ class SigmaCommandTest {
     }
 
     @Test
+    void theFastEngineSaysItsEstimateAndCriterionAndRefusesATolerance() {
+        Path csv = tmp.resolve("co-fast.csv");
+        Run r = run("sigma", store.toString(), "--temperature", "296", "--pressure", "1atm", "--background", "air=1",
+                "--between", "2100", "2150", "--step", "0.002", "--engine", "fast", "--out", csv.toString());
+        assertEquals(0, r.code(), r.err());
+        // the summary carries the estimate with its tolerance and criterion
+        assertTrue(r.out().matches("(?s).*estimated error: [0-9.e+-]+ \\(tolerance 0\\.001; relative error where sigma "
+                + ">= 1e-6 max sigma\\).*"), r.out());
+        // a tolerance the transform cannot keep: one line before any work, exit 2
+        Run refused = run("sigma", store.toString(), "--temperature", "296", "--pressure", "1atm", "--background",
+                "air=1", "--between", "2100", "2150", "--step", "0.002", "--engine", "fast", "--tolerance", "1e-9",
+                "--out", tmp.resolve("refused.csv").toString());
+        assertEquals(2, refused.code(), refused.err());
+        assertEquals(1, refused.errLines().length, refused.err());
+        assertTrue(refused.err().contains("tolerance"), refused.err());
+        assertTrue(Files.notExists(tmp.resolve("refused.csv")));
+    }
+
+    @Test
     void helpHasAnExample() {
         Run r = run("sigma", "--help");
         assertEquals(0, r.code());

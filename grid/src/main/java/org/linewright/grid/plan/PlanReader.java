@@ -265,6 +265,14 @@ public final class PlanReader {
         if (!(tolerance > 0 && tolerance < 1)) {
             throw error("profile.tolerance", "is " + tolerance, "a relative tolerance between 0 and 1");
         }
+        if (engine.equals(org.linewright.grid.engine.fast.FastEngine.ID)
+                && !(tolerance >= org.linewright.grid.engine.fast.FastEngine.MIN_TOLERANCE
+                && tolerance <= org.linewright.grid.engine.fast.FastEngine.MAX_TOLERANCE)) {
+            // refused before any work: the fast engine cannot keep it (its round-off, or beyond its method)
+            throw error("profile.tolerance", "is " + tolerance, "a tolerance the fast engine can keep, in ["
+                    + org.linewright.grid.engine.fast.FastEngine.MIN_TOLERANCE + ", "
+                    + org.linewright.grid.engine.fast.FastEngine.MAX_TOLERANCE + "] (or the exact engine)");
+        }
         LineShapeKind shape;
         String shapeText = string("profile.shape", "voigt");
         try {

@@ -93,6 +93,7 @@ class PlanReaderTest {
         {"precision", "[output]\ntable = \"t.arrow\"\nprecision = \"float16\"", "output.precision: \"float16\""},
         {"extension", "[output]\ntable = \"t.csv\"", "output.table: \"t.csv\""},
         {"engine", "[profile]\nengine = \"quick\"", "profile.engine: \"quick\""},
+        {"fast tolerance", "[profile]\nengine = \"fast\"\ntolerance = 1e-9", "profile.tolerance: is 1.0E-9"},
         {"cutoff", "[profile]\ncutoff_cm1 = -1.0", "profile.cutoff_cm1: is -1.0"},
         {"partition file", "[partition_sums]\ntables = [\"5/1=nothing.txt\"]", "partition_sums.tables: "},
         {"width source", "[widths]\norder = [\"guess\"]", "widths.order: unknown width source"},

@@ -339,18 +339,29 @@ final class FastPlanner {
         return Math.max(0.1 * tolerance, 0.8 * (tolerance - positionTotal) - ROUND_OFF_ALLOWANCE);
     }
 
-    /** Smallest m ≤ {@link #MAX_OVERSAMPLING} whose position error is within the share for every family. */
+    /**
+     * Smallest m ≤ {@link #MAX_OVERSAMPLING} whose position error is within the share for every family (the error
+     * falls with m: bisection), or the cap when even that is not enough (the lines it cannot resolve are then summed
+     * directly).
+     */
     private int chooseOversampling(FamilyStatistics[] stats, double outputStep, double share) {
-        int m = 1;
-        while (true) {
-            double worst = worstPositionError(stats, outputStep / m);
-            if (worst <= share || m >= MAX_OVERSAMPLING) {
-                return m;
-            }
-            // the error falls about as h⁴: jump close to the answer, then step by one
-            int guess = (int) Math.ceil(m * Math.pow(worst / share, 0.25));
-            m = Math.min(MAX_OVERSAMPLING, Math.max(m + 1, guess - 1));
+        if (worstPositionError(stats, outputStep) <= share) {
+            return 1;
         }
+        if (worstPositionError(stats, outputStep / MAX_OVERSAMPLING) > share) {
+            return MAX_OVERSAMPLING;
+        }
+        int lo = 1;
+        int hi = MAX_OVERSAMPLING;
+        while (hi - lo > 1) {
+            int mid = (lo + hi) >>> 1;
+            if (worstPositionError(stats, outputStep / mid) <= share) {
+                hi = mid;
+            } else {
+                lo = mid;
+            }
+        }
+        return hi;
     }
 
     /**
