@@ -110,7 +110,8 @@ public final class SigmaCommand implements Callable<Integer> {
     private String engine;
 
     @Option(names = "--tolerance", paramLabel = "T", defaultValue = "1e-3",
-            description = "Target relative error of approximate engines (default ${DEFAULT-VALUE}; the exact engine ignores it).")
+            description = "Largest relative error of the fast engine wherever sigma >= 1e-6 max sigma, in [1e-5, 0.1] "
+                    + "(default ${DEFAULT-VALUE}; the exact engine ignores it). The summary prints the engine's estimate.")
     private double tolerance;
 
     @Option(names = "--shape", paramLabel = "SHAPE", defaultValue = "voigt",

@@ -92,6 +92,13 @@ class FastEngineRegimeMatrixTest {
     void withinToleranceAndEstimateAtEveryPoint(String store, String gridSpec, double pressureBar, double temperatureK,
                                                String background, String cutoff, String pedestal, String chi,
                                                double tolerance) {
+        check(store.equals("CO") ? co : co2, store, gridSpec, pressureBar, temperatureK, background, cutoff, pedestal,
+                chi, tolerance);
+    }
+
+    /** One regime: fast against exact at every point (shared with the benchmark profile's larger matrix). */
+    static void check(LineStore lines, String store, String gridSpec, double pressureBar, double temperatureK,
+                      String background, String cutoff, String pedestal, String chi, double tolerance) {
         WavenumberGrid grid = grid(gridSpec);
         WingTreatment wings = WingTreatment.defaults().withCutoff(cutoff(cutoff))
                 .withPedestalRemoval(pedestal.equals("remove"))
@@ -100,7 +107,7 @@ class FastEngineRegimeMatrixTest {
                 Composition.parse(background.replace(';', ',')), grid, wings, LineShapeKind.VOIGT, 0.0,
                 LineSelection.ALL, WidthOptions.DEFAULTS);
         MoleculeRegistry registry = PartitionSums.of(MoleculeRegistry.builtIn()).attachedRegistry();
-        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(store.equals("CO") ? co : co2), registry, 2);
+        CrossSectionCalculator calc = new CrossSectionCalculator(List.of(lines), registry, 2);
         CrossSectionResult exact;
         CrossSectionResult fast;
         try (CrossSectionEngine e = EngineFactory.create("exact", 2, wings, tolerance)) {
@@ -140,7 +147,7 @@ class FastEngineRegimeMatrixTest {
         assertTrue(worstAbsolute <= tolerance, "absolute difference " + worstAbsolute + " of max sigma");
     }
 
-    private static WavenumberGrid grid(String spec) {
+    static WavenumberGrid grid(String spec) {
         String[] f = spec.split(":");
         double from = Double.parseDouble(f[1]);
         double to = Double.parseDouble(f[2]);
@@ -148,7 +155,7 @@ class FastEngineRegimeMatrixTest {
         return f[0].equals("u") ? WavenumberGrid.uniform(from, to, x) : WavenumberGrid.resolvingPower(from, to, x);
     }
 
-    private static WingCutoff cutoff(String spec) {
+    static WingCutoff cutoff(String spec) {
         String[] f = spec.split(":");
         return switch (f[0]) {
             case "fixed" -> WingCutoff.fixed(Double.parseDouble(f[1]));

@@ -293,6 +293,13 @@ final class FastPlanner {
             double a = lines.dopplerCm1[i];
             double g = lines.lorentzCm1[i];
             double s = lines.strength[i];
+            // V(0) ≤ min(1/(πγL), √(ln2/π)/αD) (the peaks of the pure shapes, common practice): the profile is
+            // evaluated only for lines whose bound could raise either figure
+            double bound = s * Math.min(g > 0 ? 1 / (Math.PI * g) : Double.POSITIVE_INFINITY,
+                    a > 0 ? PEAK_GAUSSIAN / a : Double.POSITIVE_INFINITY);
+            if (bound <= upper && bound <= lower) {
+                continue;
+            }
             double peak = s * org.linewright.broadening.voigt.VoigtProfile.value(0, a, g);
             upper = Math.max(upper, peak);
             if (peak <= lower) {
@@ -527,6 +534,8 @@ final class FastPlanner {
 
     /** Set by {@link #planFamilies} when the family it returns is cheaper summed directly (not beyond the budget). */
     private boolean cheaperDirect;
+    /** √(ln 2/π): the peak of a unit-area Gaussian times its HWHM. */
+    private static final double PEAK_GAUSSIAN = Math.sqrt(Math.log(2) / Math.PI);
     /** Time of one profile value of direct summation, one thread (docs/performance.md: about 300 M/s). */
     static final double DIRECT_NANOS_PER_VALUE = 3.3;
 
