@@ -1,0 +1,109 @@
+package org.linewright.ingest.partition;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.ConcurrentHashMap;
+import org.linewright.ingest.registry.IsotopeFormula;
+import org.linewright.ingest.registry.Isotopologue;
+
+/**
+ * The built-in temperature dependence of Q(T): Q(T) = Q(296 K)_tabulated · Q_model(T) / Q_model(296 K), with
+ * Q_model from the isotopologue's own constants —
+ * <ul>
+ *   <li>diatomic molecules: direct summation over the bound rovibrational levels ({@link DiatomicLevelSum});</li>
+ *   <li>polyatomic molecules: semiclassical rotor × oscillator sums over the fundamentals
+ *       ({@link PolyatomicModel});</li>
+ * </ul>
+ * and what the value can be trusted to. Validity, stated per value ({@link Estimate#warnings()}):
+ * <ul>
+ *   <li>diatomic: within 0.5 % from {@value #LOW_LIMIT_K} K to {@value #DIATOMIC_LIMIT_K} K (checked for CO against
+ *       an independent level summation and thermochemical tables; other diatomics share the method, their
+ *       constants checked through Q(296 K)); a warning beyond;</li>
+ *   <li>polyatomic with own constants: within 1 % to {@value #POLYATOMIC_OWN_LIMIT_K} K ({@value #WATER_LIMIT_K} K
+ *       for H2O), a warning above (missing anharmonicity: up to a few % low at 2000 K);</li>
+ *   <li>polyatomic minor isotopologue with its parent's constants: a warning above
+ *       {@value #POLYATOMIC_PARENT_LIMIT_K} K;</li>
+ *   <li>polyatomic below {@value #POLYATOMIC_LOW_LIMIT_K} K (the semiclassical rotor): a warning.</li>
+ * </ul>
+ * Thread-safe; diatomic levels are computed once per isotopologue.
+ */
+final class BuiltInPartitionSums {
+    /** Version of the built-in model, recorded with every value it gives. */
+    static final String VERSION = "2";
+    static final double REFERENCE_TEMPERATURE_K = 296.0;
+    static final double LOW_LIMIT_K = 50.0;
+    static final double DIATOMIC_LIMIT_K = 3000.0;
+    static final double POLYATOMIC_OWN_LIMIT_K = 1000.0;
+    static final double POLYATOMIC_PARENT_LIMIT_K = 500.0;
+    static final double POLYATOMIC_LOW_LIMIT_K = 100.0;
+    /** H2O: 1.2 % low at 1000 K against thermochemical tables (see the tests), so its limit is lower. */
+    static final double WATER_LIMIT_K = 700.0;
+    private static final int WATER = 1;
+
+    /**
+     * A modelled Q(T)/Q(296 K) and what it assumed.
+     *
+     * @param ratio Q_model(T)/Q_model(296 K)
+     * @param method the model and its constants, e.g. {@code built-in v2: level sum (Dunham, mass-scaled)}
+     * @param warnings where the value may be outside the stated accuracy (empty when within it)
+     */
+    record Estimate(double ratio, String method, List<String> warnings) { }
+
+    private final ConcurrentHashMap<String, DiatomicLevelSum> diatomics = new ConcurrentHashMap<>();
+
+    /** The estimate for an isotopologue, or null when no constants are known for its molecule. */
+    Estimate estimate(Isotopologue iso, double temperatureK) {
+        String[] nuclides = nuclides(iso.isotopeFormula());
+        DiatomicConstants dc = DiatomicConstants.forMolecule(iso.moleculeId());
+        List<String> warnings = new ArrayList<>();
+        if (dc != null && nuclides != null && nuclides.length == 2) {
+            DiatomicLevelSum levels = diatomics.computeIfAbsent(iso.key(), k -> DiatomicLevelSum.of(dc, nuclides[0], nuclides[1]));
+            double ratio = levels.partitionSum(temperatureK) / levels.partitionSum(REFERENCE_TEMPERATURE_K);
+            if (temperatureK < LOW_LIMIT_K || temperatureK > DIATOMIC_LIMIT_K) {
+                warnings.add(warning(iso, temperatureK, "outside " + (int) LOW_LIMIT_K + "–" + (int) DIATOMIC_LIMIT_K
+                        + " K, where the level sum is checked to 0.5 %"));
+            }
+            return new Estimate(ratio, "built-in v" + VERSION + ": direct sum over " + levels.levelCount()
+                    + " rovibrational levels (Dunham constants, mass-scaled) × Q(296 K) of the registry", warnings);
+        }
+        PolyatomicModel.Entry pc = PolyatomicModel.constants(iso.moleculeId(), iso.number(), nuclides);
+        if (pc == null) {
+            return null;
+        }
+        double ratio = PolyatomicModel.partitionSum(pc, temperatureK) / PolyatomicModel.partitionSum(pc, REFERENCE_TEMPERATURE_K);
+        double limit = pc.own() ? (iso.moleculeId() == WATER ? WATER_LIMIT_K : POLYATOMIC_OWN_LIMIT_K)
+                : POLYATOMIC_PARENT_LIMIT_K;
+        if (temperatureK > limit) {
+            warnings.add(warning(iso, temperatureK, "above " + (int) limit + " K the " + (pc.own() ? "" : "parent's ")
+                    + "rotor–oscillator model may be off by more than 1 % (no anharmonicity"
+                    + (pc.own() ? "" : "; fundamentals of the main isotopologue") + "): give a table"));
+        }
+        if (temperatureK < POLYATOMIC_LOW_LIMIT_K) {
+            warnings.add(warning(iso, temperatureK, "below " + (int) POLYATOMIC_LOW_LIMIT_K
+                    + " K the semiclassical rotor may be off by more than 1 %: give a table"));
+        }
+        return new Estimate(ratio, "built-in v" + VERSION + ": semiclassical rotor × oscillator sums ("
+                + pc.note() + ") × Q(296 K) of the registry", warnings);
+    }
+
+    private static String warning(Isotopologue iso, double temperatureK, String what) {
+        return String.format(Locale.ROOT, "Q(%.6g K) of %s (%s) is modelled: %s", temperatureK, iso.isotopeFormula(),
+                iso.key(), what);
+    }
+
+    /** The nuclides of a formula, one per atom in formula order; null when it cannot be parsed. */
+    static String[] nuclides(String isotopeFormula) {
+        try {
+            List<String> out = new ArrayList<>();
+            for (IsotopeFormula.Part p : IsotopeFormula.parse(isotopeFormula)) {
+                for (int i = 0; i < p.count(); i++) {
+                    out.add(p.nuclide());
+                }
+            }
+            return out.toArray(new String[0]);
+        } catch (IllegalArgumentException e) {
+            return null;
+        }
+    }
+}
