@@ -12,6 +12,7 @@ import org.linewright.cli.plot.PlotStyle;
 import org.linewright.cli.plot.StickSpectrumPlot;
 import org.linewright.cli.units.QuantityParser;
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.partition.StoredPartitionFunctions;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
 import picocli.CommandLine.Command;
@@ -110,6 +111,8 @@ public final class LinesCommand implements Callable<Integer> {
         LineListingRequest request = new LineListingRequest(low, high, moleculeId, isotopologue, strongest,
                 temperatureK, backgroundOptions.compositionOrNull(), backgroundOptions.widthOptions());
         LineStore lineStore = LineStore.open(store);
+        // The store's own partition functions (ExoMol-style .pf) apply at every temperature; user tables win.
+        registry = (MoleculeRegistry) StoredPartitionFunctions.withStoredTables(registry, List.of(lineStore));
         LineListing.Summary summary = LineListing.write(lineStore, request, registry,
                 ListingFormat.byName(format), out, spec.commandLine().getOut());
         if (plot != null) {

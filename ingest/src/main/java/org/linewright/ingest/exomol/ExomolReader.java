@@ -195,6 +195,12 @@ public final class ExomolReader implements LineReader, DuplicateCounter {
         return partitionTable;
     }
 
+    /** The set's {@code .pf} for its isotopologue, so that the store records it; empty without one. */
+    @Override
+    public Map<IsotopologueLookup.Id, PartitionTable> partitionFunctions() {
+        return partitionTable == null ? Map.of() : Map.of(id, partitionTable);
+    }
+
     /** Q(296 K) used for the intensities (from the {@code .pf} file, else from the registry). */
     public double partitionSumAt296K() {
         return partitionSum296K;

@@ -97,6 +97,11 @@ public final class MoleculeRegistry implements IsotopologueLookup {
         return new MoleculeRegistry(molecules, isotopologues, source);
     }
 
+    /** The attached partition sums, or null when none is attached. */
+    public PartitionSumSource partitionSums() {
+        return partitionSums;
+    }
+
     private MoleculeRegistry merged(InputStream in, String fileName) throws IOException {
         TreeMap<Integer, Molecule> mols = new TreeMap<>(molecules);
         TreeMap<Long, Isotopologue> isos = new TreeMap<>(isotopologues);
