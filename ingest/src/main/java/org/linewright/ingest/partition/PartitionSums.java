@@ -239,6 +239,26 @@ public final class PartitionSums implements PartitionSumSource {
         return value(m, i, temperatureK).q();
     }
 
+    /** {@link Value#source()} of {@link #value}; empty when there is no value. */
+    @Override
+    public String source(Isotopologue isotopologue, double temperatureK) {
+        try {
+            return value(isotopologue.moleculeId(), isotopologue.number(), temperatureK).source();
+        } catch (InputException e) {
+            return "";
+        }
+    }
+
+    /** {@link Value#warnings()} of {@link #value}; the reason as the one warning when there is no value. */
+    @Override
+    public List<String> warnings(Isotopologue isotopologue, double temperatureK) {
+        try {
+            return value(isotopologue.moleculeId(), isotopologue.number(), temperatureK).warnings();
+        } catch (InputException e) {
+            return List.of(e.getMessage());
+        }
+    }
+
     /** True when the isotopologue has a user table. */
     public boolean hasTable(int moleculeId, int isotopologue) {
         Table t = tables.get(key(moleculeId, isotopologue));

@@ -342,6 +342,24 @@ public final class MoleculeRegistry implements IsotopologueLookup {
     }
 
     @Override
+    public String partitionSumSource(int moleculeId, int isotopologue, double temperatureK) {
+        Isotopologue i = isotopologue(moleculeId, isotopologue);
+        if (i == null) {
+            return "";
+        }
+        if (partitionSums != null) {
+            return partitionSums.source(i, temperatureK);
+        }
+        return temperatureK == REFERENCE_TEMPERATURE_K ? "registry Q(296 K)" : "";
+    }
+
+    @Override
+    public List<String> partitionSumWarnings(int moleculeId, int isotopologue, double temperatureK) {
+        Isotopologue i = isotopologue(moleculeId, isotopologue);
+        return i == null || partitionSums == null ? List.of() : partitionSums.warnings(i, temperatureK);
+    }
+
+    @Override
     public String toString() {
         return String.format(Locale.ROOT, "MoleculeRegistry[%d molecules, %d isotopologues]", molecules.size(),
                 isotopologues.size());
