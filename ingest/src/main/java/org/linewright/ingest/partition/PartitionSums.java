@@ -1,6 +1,7 @@
 package org.linewright.ingest.partition;
 
 import java.io.IOException;
+import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -9,6 +10,7 @@ import org.linewright.ingest.InputException;
 import org.linewright.ingest.registry.Isotopologue;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.registry.PartitionSumSource;
+import org.linewright.ingest.source.IsotopologueLookup;
 
 /**
  * Total internal partition sums Q(T) per isotopologue, each value with where it came from
@@ -137,6 +139,21 @@ public final class PartitionSums implements PartitionSumSource {
         PartitionSums out = this;
         for (TableSpec s : specs) {
             out = out.withTable(s.moleculeId(), s.isotopologue(), PartitionTable.read(s.file()));
+        }
+        return out;
+    }
+
+    /**
+     * Adds the catalog partition functions of a {@link CatalogPartitionFile} for every species tag the registry
+     * knows ({@code byCatalogTag}); tags of species the registry does not know are not used.
+     */
+    public PartitionSums withCatalogFile(Path file) throws IOException {
+        PartitionSums out = this;
+        for (Map.Entry<Integer, PartitionTable> e : CatalogPartitionFile.read(file).entrySet()) {
+            IsotopologueLookup.Id id = registry.byCatalogTag(e.getKey());
+            if (id != null) {
+                out = out.withCatalogTable(id.moleculeId(), id.isotopologue(), e.getValue());
+            }
         }
         return out;
     }
