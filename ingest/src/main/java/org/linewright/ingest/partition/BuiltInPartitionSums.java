@@ -22,8 +22,8 @@ import org.linewright.ingest.registry.Isotopologue;
  *       constants checked through Q(296 K)); a warning beyond;</li>
  *   <li>polyatomic with own constants: within 1 % to {@value #POLYATOMIC_OWN_LIMIT_K} K ({@value #WATER_LIMIT_K} K
  *       for H2O), a warning above (missing anharmonicity: up to a few % low at 2000 K);</li>
- *   <li>polyatomic minor isotopologue with its parent's constants: a warning above
- *       {@value #POLYATOMIC_PARENT_LIMIT_K} K;</li>
+ *   <li>polyatomic minor isotopologue with its parent's constants, or with approximate own ones: a warning
+ *       above {@value #POLYATOMIC_PARENT_LIMIT_K} K;</li>
  *   <li>polyatomic below {@value #POLYATOMIC_LOW_LIMIT_K} K (the semiclassical rotor): a warning.</li>
  * </ul>
  * Thread-safe; diatomic levels are computed once per isotopologue.
@@ -72,12 +72,11 @@ final class BuiltInPartitionSums {
             return null;
         }
         double ratio = PolyatomicModel.partitionSum(pc, temperatureK) / PolyatomicModel.partitionSum(pc, REFERENCE_TEMPERATURE_K);
-        double limit = pc.own() ? (iso.moleculeId() == WATER ? WATER_LIMIT_K : POLYATOMIC_OWN_LIMIT_K)
-                : POLYATOMIC_PARENT_LIMIT_K;
+        double limit = pc.own() && !pc.approximate()
+                ? (iso.moleculeId() == WATER ? WATER_LIMIT_K : POLYATOMIC_OWN_LIMIT_K) : POLYATOMIC_PARENT_LIMIT_K;
         if (temperatureK > limit) {
-            warnings.add(warning(iso, temperatureK, "above " + (int) limit + " K the " + (pc.own() ? "" : "parent's ")
-                    + "rotor–oscillator model may be off by more than 1 % (no anharmonicity"
-                    + (pc.own() ? "" : "; fundamentals of the main isotopologue") + "): give a table"));
+            warnings.add(warning(iso, temperatureK, "above " + (int) limit + " K the rotor–oscillator model may be off"
+                    + " by more than 1 % (no anharmonicity; " + pc.note() + "): give a table"));
         }
         if (temperatureK < POLYATOMIC_LOW_LIMIT_K) {
             warnings.add(warning(iso, temperatureK, "below " + (int) POLYATOMIC_LOW_LIMIT_K
