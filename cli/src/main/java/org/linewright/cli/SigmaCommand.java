@@ -28,6 +28,7 @@ import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.registry.Isotopologue;
 import org.linewright.ingest.registry.Molecule;
+import org.linewright.ingest.partition.PartitionSumNotes;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
 import picocli.CommandLine.ArgGroup;
@@ -184,6 +185,11 @@ public final class SigmaCommand implements Callable<Integer> {
         if (!quiet) {
             summary(spec.commandLine().getOut(), result, grid);
         }
+        // A modelled Q(T) outside its stated accuracy changes every S(T) of its isotopologue: always say so.
+        for (String warning : PartitionSumNotes.of(registry, opened, temperature.kelvin()).warnings()) {
+            spec.commandLine().getErr().println("linewright: warning: " + warning);
+        }
+        spec.commandLine().getErr().flush();
         return ExitCodes.OK;
     }
 

@@ -11,6 +11,7 @@ import java.util.Locale;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.partition.PartitionSumNotes;
 import org.linewright.ingest.partition.PartitionSums;
 import org.linewright.ingest.partition.PartitionTable;
 import org.linewright.ingest.partition.StoredPartitionFunctions;
@@ -96,6 +97,14 @@ class DataSetPartitionFunctionTest {
             // Without the stored .pf the registry's Q(296 K) and the built-in Q(T) would be used: 3 % off here.
             assertTrue(Math.abs(withRegistry[i] / expected - 1) > 0.02, "line " + i + ": " + withRegistry[i] / expected);
         }
+        // What a command reports: the set's .pf named as the source, nothing to warn about inside its range;
+        // beyond it (3000 K) the extension by the built-in model is stated.
+        PartitionSumNotes notes = PartitionSumNotes.of(registry, List.of(store), t);
+        assertEquals(1, notes.sources().size());
+        assertTrue(notes.sources().get(0).contains("12C-16O__SynthPf.pf"), notes.sources().toString());
+        assertTrue(notes.warnings().isEmpty(), notes.warnings().toString());
+        List<String> hot = PartitionSumNotes.of(registry, List.of(store), 3000).warnings();
+        assertTrue(hot.size() == 1 && hot.get(0).contains("extended from 2000.0 K"), hot.toString());
         PartitionTable stored = StoredPartitionFunctions.tables(store).get(0).table();
         assertEquals(temperatures.length, stored.size());
     }
