@@ -251,9 +251,12 @@ class BuiltInPartitionSumsTest {
             }
         }
         assertTrue(missing.isEmpty(), "no built-in Q(T): " + missing);
-        // Polyatomic values at 2000 K are outside the stated 1 % and say so; diatomic ones to 3000 K are not.
+        // Polyatomic values beyond their checked range say so (12C16O2 is checked to 2000 K, 13C16O2 to 1000 K);
+        // diatomic ones are within 0.5 % to 3000 K.
         assertFalse(sums.value(2, 2, 2000).withinStatedAccuracy());
         assertTrue(sums.value(2, 2, 1000).withinStatedAccuracy());
+        assertTrue(sums.value(2, 1, 2000).withinStatedAccuracy());
+        assertFalse(sums.value(2, 1, 2500).withinStatedAccuracy());
         assertFalse(sums.value(1, 1, 1000).withinStatedAccuracy());
         assertTrue(sums.value(5, 2, 3000).withinStatedAccuracy());
         assertFalse(sums.value(5, 2, 4000).withinStatedAccuracy());
