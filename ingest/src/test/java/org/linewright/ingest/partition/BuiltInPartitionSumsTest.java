@@ -153,6 +153,48 @@ class BuiltInPartitionSumsTest {
     }
 
     @Test
+    void polyatomicModelsReproduceTheTabulatedQ296WithTheirSymmetryNumbersAndNuclearSpins() {
+        // Tabulated Q(296 K): the registry (TIPS-2021; samples-confirmed or from memory). Model: g_ns/σ ·
+        // Q_rot·Q_vib with g_ns = Π(2I+1) (the convention of the tabulated values) and σ the rotational symmetry
+        // number of the isotopologue's point group (common practice; NO2 also has a doublet electronic ground
+        // state, which the model leaves out, so σ/2 = 1 there). Checks the own rotational constants, the spin
+        // convention and the symmetry of every isotopologue whose own constants are not marked approximate.
+        Map<String, Integer> sigma = new HashMap<>();
+        for (String k : new String[] {"1/1", "1/2", "1/3", "1/7", "2/1", "2/2", "2/7", "2/9", "2/10", "2/12", "3/1",
+                "9/1", "20/1", "26/1", "31/1"}) {
+            sigma.put(k, 2);
+        }
+        for (String k : new String[] {"1/4", "1/5", "1/6", "2/3", "2/4", "2/5", "2/6", "2/8", "2/11", "4/1", "4/2",
+                "4/3", "4/5", "10/1", "12/1", "19/1", "23/1", "23/2", "23/3", "26/3"}) {
+            sigma.put(k, 1);
+        }
+        for (String k : new String[] {"6/3", "11/1", "11/2", "24/1", "28/1"}) {
+            sigma.put(k, 3);
+        }
+        sigma.put("6/1", 12);
+        sigma.put("6/2", 12);
+        sigma.put("27/1", 6);
+        int checked = 0;
+        for (Isotopologue iso : registry.isotopologues()) {
+            String[] n = BuiltInPartitionSums.nuclides(iso.isotopeFormula());
+            PolyatomicModel.Entry e = DiatomicConstants.forMolecule(iso.moleculeId()) == null
+                    ? PolyatomicModel.constants(iso.moleculeId(), iso.number(), n) : null;
+            if (e == null || !e.own() || e.approximate()) {
+                continue;
+            }
+            int gns = 1;
+            for (String nuclide : n) {
+                gns *= NuclearSpins.degeneracy(nuclide);
+            }
+            double model = gns * PolyatomicModel.partitionSum(e, 296.0) / sigma.get(iso.key());
+            // 2.5 %: C2H6's harmonic torsion (2 %) is the worst; the others are within 1.4 %.
+            assertEquals(1.0, model / iso.q296(), 0.025, iso.key() + " " + iso.isotopeFormula());
+            checked++;
+        }
+        assertEquals(sigma.size(), checked);
+    }
+
+    @Test
     void carbonDioxideMassScalingReproducesObservedFundamentals() {
         // 13C16O2 band centres ν2 = 648.48 and ν3 = 2283.49 cm⁻¹ (HITRAN/Herzberg, from memory).
         PolyatomicModel.Entry e = PolyatomicModel.constants(2, 2, BuiltInPartitionSums.nuclides("13C-16O2"));
