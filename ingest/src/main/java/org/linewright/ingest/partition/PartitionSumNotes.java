@@ -1,8 +1,11 @@
 package org.linewright.ingest.partition;
 
 import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.TreeSet;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.store.LineStore;
@@ -16,11 +19,14 @@ import org.linewright.ingest.store.SourceInfo;
  *
  * @param sources one line per isotopologue: where its Q(T) comes from
  * @param warnings the warnings of those values (each names the isotopologue and temperature)
+ * @param metadata file metadata recording the same: {@code partition_sum.MOL/ISO} = the source of Q(T), and
+ *                 {@code partition_sum_warning.N} = each warning (N from 1)
  */
-public record PartitionSumNotes(List<String> sources, List<String> warnings) {
+public record PartitionSumNotes(List<String> sources, List<String> warnings, Map<String, String> metadata) {
     public PartitionSumNotes {
         sources = List.copyOf(sources);
         warnings = List.copyOf(warnings);
+        metadata = Collections.unmodifiableMap(new LinkedHashMap<>(metadata));
     }
 
     /** The notes for the isotopologues of {@code stores} at {@code temperatureK}. */
@@ -36,15 +42,20 @@ public record PartitionSumNotes(List<String> sources, List<String> warnings) {
         }
         List<String> sources = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
+        Map<String, String> metadata = new LinkedHashMap<>();
         for (long key : ids) {
             int mol = (int) (key >>> 32);
             int iso = (int) key;
             String source = withData.partitionSumSource(mol, iso, temperatureK);
             if (!source.isEmpty()) {
                 sources.add(String.format(Locale.ROOT, "Q(%.6g K) of %d/%d: %s", temperatureK, mol, iso, source));
+                metadata.put("partition_sum." + mol + "/" + iso, source);
             }
             warnings.addAll(withData.partitionSumWarnings(mol, iso, temperatureK));
         }
-        return new PartitionSumNotes(sources, warnings);
+        for (int i = 0; i < warnings.size(); i++) {
+            metadata.put("partition_sum_warning." + (i + 1), warnings.get(i));
+        }
+        return new PartitionSumNotes(sources, warnings, metadata);
     }
 }
