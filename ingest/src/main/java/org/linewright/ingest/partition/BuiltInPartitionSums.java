@@ -62,7 +62,13 @@ final class BuiltInPartitionSums {
         DiatomicConstants dc = DiatomicConstants.forMolecule(iso.moleculeId());
         List<String> warnings = new ArrayList<>();
         if (dc != null && nuclides != null && nuclides.length == 2) {
-            DiatomicLevelSum levels = diatomics.computeIfAbsent(iso.key(), k -> DiatomicLevelSum.of(dc, nuclides[0], nuclides[1]));
+            DiatomicLevelSum levels;
+            try {
+                levels = diatomics.computeIfAbsent(iso.key(), k -> DiatomicLevelSum.of(dc, nuclides[0], nuclides[1]));
+            } catch (IllegalArgumentException e) {
+                // A user-added isotopologue with a nuclide whose mass or spin is not tabulated: no model.
+                return null;
+            }
             double ratio = levels.partitionSum(temperatureK) / levels.partitionSum(REFERENCE_TEMPERATURE_K);
             if (temperatureK < LOW_LIMIT_K || temperatureK > DIATOMIC_LIMIT_K) {
                 warnings.add(warning(iso, temperatureK, "outside " + (int) LOW_LIMIT_K + "–" + (int) DIATOMIC_LIMIT_K

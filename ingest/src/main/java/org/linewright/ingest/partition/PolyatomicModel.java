@@ -107,7 +107,11 @@ final class PolyatomicModel {
             return e;
         }
         if (moleculeId == 2 && nuclides != null && nuclides.length == 3) {
-            return carbonDioxideScaled(main, nuclides);
+            Entry scaled = carbonDioxideScaled(main, nuclides);
+            // A nuclide without a tabulated mass (user-added isotopologue) gives NaN: use the parent's then.
+            if (Double.isFinite(scaled.rotationalCm1()[0]) && Double.isFinite(scaled.vibrationalCm1()[2])) {
+                return scaled;
+            }
         }
         return new Entry(main.linear(), main.rotationalCm1(), main.vibrationalCm1(), main.vibrationalDegeneracy(),
                 false, false, "fundamentals of the main isotopologue");

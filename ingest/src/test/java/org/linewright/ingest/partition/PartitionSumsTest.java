@@ -163,6 +163,22 @@ class PartitionSumsTest {
     }
 
     @Test
+    void anIsotopologueWithoutTabulatedNuclideDataHasNoModelButAClearError() throws IOException {
+        // A user row for 14C16O (invented abundance and Q): 14C has no tabulated spin, so no level sum.
+        Path f = tmp.resolve("extra.tsv");
+        Files.writeString(f, String.join("\t", "molecule_id",
+                "molecule", "molecule_name", "isotopologue", "code", "isotope_formula", "aliases", "abundance", "q296",
+                "mass_g_per_mol", "catalog_tags", "provenance") + "\n"
+                + String.join("\t", "5", "CO", "carbon monoxide", "9", "46", "14C-16O", "-", "1e-12", "100.0", "30.0",
+                "-", "synthetic test row") + "\n");
+        PartitionSums q = PartitionSums.of(registry.withUserFile(f));
+        assertEquals(100.0, q.value(5, 9, 296.0).q());
+        InputException e = assertThrows(InputException.class, () -> q.value(5, 9, 1000.0));
+        assertTrue(e.getMessage().contains("5/9") && e.getMessage().contains("=FILE"), e.getMessage());
+        assertTrue(Double.isNaN(q.attachedRegistry().partitionSum(5, 9, 1000.0)));
+    }
+
+    @Test
     void userTableReplacesBuiltInValuesAtEveryTemperature() throws IOException {
         Path f = tmp.resolve("co.txt");
         Files.writeString(f, "200 70\n296 100\n400 140\n500 180\n");
