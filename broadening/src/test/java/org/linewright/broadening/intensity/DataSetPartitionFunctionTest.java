@@ -105,6 +105,11 @@ class DataSetPartitionFunctionTest {
         assertTrue(notes.warnings().isEmpty(), notes.warnings().toString());
         List<String> hot = PartitionSumNotes.of(registry, List.of(store), 3000).warnings();
         assertTrue(hot.size() == 1 && hot.get(0).contains("extended from 2000.0 K"), hot.toString());
+        // A user table wins over the set's .pf (documented precedence).
+        PartitionSums user = PartitionSums.of(registry).withTable(5, 1,
+                PartitionTable.of("user.txt", new double[] {200, 2000}, new double[] {70, 800}));
+        IsotopologueLookup withUser = StoredPartitionFunctions.withStoredTables(user.attachedRegistry(), List.of(store));
+        assertEquals(70 + (1000 - 200) / 1800.0 * 730, withUser.partitionSum(5, 1, t), 1e-9);
         PartitionTable stored = StoredPartitionFunctions.tables(store).get(0).table();
         assertEquals(temperatures.length, stored.size());
     }
