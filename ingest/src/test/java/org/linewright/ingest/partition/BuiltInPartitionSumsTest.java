@@ -25,9 +25,14 @@ class BuiltInPartitionSumsTest {
 
     /** Reference Q(T) of tools/partition/co_level_sum.py (numpy level summation, committed once). */
     private static Map<String, Map<Double, Double>> levelSumReference() throws IOException {
+        return table("co-level-sum-reference.tsv");
+    }
+
+    /** A committed reference table: a header of temperatures, then one row per species. */
+    private static Map<String, Map<Double, Double>> table(String resource) throws IOException {
         Map<String, Map<Double, Double>> out = new HashMap<>();
         try (BufferedReader r = new BufferedReader(new InputStreamReader(
-                BuiltInPartitionSumsTest.class.getResourceAsStream("co-level-sum-reference.tsv"), StandardCharsets.UTF_8))) {
+                BuiltInPartitionSumsTest.class.getResourceAsStream(resource), StandardCharsets.UTF_8))) {
             String line;
             String[] header = null;
             while ((line = r.readLine()) != null) {
@@ -192,6 +197,38 @@ class BuiltInPartitionSumsTest {
             checked++;
         }
         assertEquals(sigma.size(), checked);
+    }
+
+    @Test
+    void semiclassicalRotorMatchesExactAsymmetricRotorSumsDownTo50K() throws IOException {
+        // Reference: rigid asymmetric-rotor level sums with ortho/para weights (numpy diagonalisation,
+        // tools/partition/asymmetric_rotor_sum.py, values in the resource file). The model's ratio to 296 K
+        // is compared after taking out its oscillator factor (1 − e^(−c2ν/T))^(−d), common practice.
+        Map<String, Map<Double, Double>> ref = table("asymmetric-rotor-reference.tsv");
+        String[][] cases = {{"H2O", "1", "1"}, {"H2S", "31", "1"}, {"D2O", "1", "7"}};
+        for (String[] c : cases) {
+            int mol = Integer.parseInt(c[1]);
+            int iso = Integer.parseInt(c[2]);
+            PolyatomicModel.Entry e = PolyatomicModel.constants(mol, iso, null);
+            Map<Double, Double> q = ref.get(c[0]);
+            for (double t : new double[] {50, 75, 100, 150, 200}) {
+                double model = PolyatomicModel.partitionSum(e, t) / PolyatomicModel.partitionSum(e, 296.0)
+                        * oscillators(e, 296.0) / oscillators(e, t);
+                double exact = q.get(t) / q.get(296.0);
+                assertEquals(exact, model, exact * 5e-3, c[0] + " at " + t + " K");
+            }
+        }
+        assertTrue(sums.value(1, 1, 50).withinStatedAccuracy());
+        assertFalse(sums.value(6, 1, 50).withinStatedAccuracy());
+        assertFalse(sums.value(1, 1, 40).withinStatedAccuracy());
+    }
+
+    private static double oscillators(PolyatomicModel.Entry e, double t) {
+        double q = 1;
+        for (int i = 0; i < e.vibrationalCm1().length; i++) {
+            q *= Math.pow(1 - Math.exp(-1.438776877 * e.vibrationalCm1()[i] / t), -e.degeneracy()[i]);
+        }
+        return q;
     }
 
     @Test

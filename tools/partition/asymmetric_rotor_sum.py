@@ -1,0 +1,72 @@
+#!/usr/bin/env python3
+"""Reference rotational Q(T) of rigid asymmetric tops by direct summation over their levels, with the
+nuclear-spin weights of each level's symmetry (run once; values committed in
+ingest/src/test/resources/org/linewright/ingest/partition/asymmetric-rotor-reference.tsv).
+
+Written independently of the Java code. Levels: eigenvalues of H = A Ja^2 + B Jb^2 + C Jc^2 in the symmetric-top
+basis |J, K> (I^r representation, z = a), block-diagonalised by K parity and by the combinations
+|K> +/- |-K> (Wang 1929, Phys. Rev. 34, 243; King, Hainer and Cross 1943, J. Chem. Phys. 11, 27). Each level's
+(Ka, Kc) parities: Ka ~ K, and (-1)^Kc = s (-1)^(J+K) from the C2 rotation about c acting on |J, K> as
+(-1)^(J+K) |J, -K>. Nuclear-spin weights (common practice): H2O, H2S (C2 axis b, two protons): 3 for Ka+Kc odd,
+1 for even; D2O: 6 for even, 3 for odd. Rotational constants (cm-1, ground state, from memory): H2O 27.8806,
+14.5216, 9.2777; H2S 10.3601, 9.0181, 4.7307; D2O 15.42, 7.27, 4.85. Energies from the lowest level.
+
+Command:  python3 tools/partition/asymmetric_rotor_sum.py > ingest/src/test/resources/org/linewright/ingest/partition/asymmetric-rotor-reference.tsv
+"""
+import math
+import sys
+import numpy as np
+
+C2 = 1.438776877  # cm K, CODATA 2018
+MOLECULES = [
+    ("H2O", (27.8806, 14.5216, 9.2777), lambda ka, kc: 3 if (ka + kc) % 2 else 1),
+    ("H2S", (10.3601, 9.0181, 4.7307), lambda ka, kc: 3 if (ka + kc) % 2 else 1),
+    ("D2O", (15.42, 7.27, 4.85), lambda ka, kc: 3 if (ka + kc) % 2 else 6),
+]
+TEMPERATURES = [50, 75, 100, 150, 200, 296]
+J_MAX = 70
+
+
+def levels(a, b, c):
+    out = []
+    for j in range(J_MAX + 1):
+        x = j * (j + 1)
+        for kpar in (0, 1):
+            for s in (1, -1):
+                ks = [k for k in range(0, j + 1) if k % 2 == kpar and not (k == 0 and s == -1)]
+                if not ks:
+                    continue
+                n = len(ks)
+                h = np.zeros((n, n))
+                for i, k in enumerate(ks):
+                    h[i, i] = (b + c) / 2 * (x - k * k) + a * k * k
+                for i in range(n - 1):
+                    k = ks[i]
+                    v = (b - c) / 4 * math.sqrt((x - k * (k + 1)) * (x - (k + 1) * (k + 2)))
+                    if k == 0:
+                        v *= math.sqrt(2)
+                    h[i, i + 1] = h[i + 1, i] = v
+                if kpar == 1:
+                    # <J,1|H|J,-1> = (B-C)/4 J(J+1) couples K = 1 with its own mirror
+                    h[0, 0] += s * (b - c) / 4 * x
+                for e in np.linalg.eigvalsh(h):
+                    kc = (j + kpar) % 2 if s == 1 else (j + kpar + 1) % 2
+                    out.append((e, j, kpar, kc))
+    return out
+
+
+def main():
+    print("# rigid asymmetric rotor Q(T) with nuclear-spin weights: tools/partition/asymmetric_rotor_sum.py")
+    print("# python " + sys.version.split()[0] + ", numpy " + np.__version__ + ", J <= " + str(J_MAX))
+    print("molecule\t" + "\t".join(str(t) for t in TEMPERATURES))
+    for name, (a, b, c), weight in MOLECULES:
+        lv = levels(a, b, c)
+        e0 = min(l[0] for l in lv)
+        row = []
+        for t in TEMPERATURES:
+            row.append(sum(weight(l[2], l[3]) * (2 * l[1] + 1) * math.exp(-C2 * (l[0] - e0) / t) for l in lv))
+        print(name + "\t" + "\t".join("%.6f" % q for q in row))
+
+
+if __name__ == "__main__":
+    main()
