@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
-"""Reference rotational Q(T) of rigid asymmetric tops by direct summation over their levels, with the
-nuclear-spin weights of each level's symmetry (run once; values committed in
+"""Reference rotational Q(T) of rigid asymmetric tops (and of the spherical top CH4) by direct summation over
+their levels, with the nuclear-spin weights of each level's symmetry (run once; values committed in
 ingest/src/test/resources/org/linewright/ingest/partition/asymmetric-rotor-reference.tsv).
 
 Written independently of the Java code. Levels: eigenvalues of H = A Ja^2 + B Jb^2 + C Jc^2 in the symmetric-top
@@ -8,7 +8,11 @@ basis |J, K> (I^r representation, z = a), block-diagonalised by K parity and by 
 |K> +/- |-K> (Wang 1929, Phys. Rev. 34, 243; King, Hainer and Cross 1943, J. Chem. Phys. 11, 27). Each level's
 (Ka, Kc) parities: Ka ~ K, and (-1)^Kc = s (-1)^(J+K) from the C2 rotation about c acting on |J, K> as
 (-1)^(J+K) |J, -K>. Nuclear-spin weights (common practice): H2O, H2S (C2 axis b, two protons): 3 for Ka+Kc odd,
-1 for even; D2O: 6 for even, 3 for odd. Rotational constants (cm-1, ground state, from memory): H2O 27.8806,
+1 for even; D2O: 6 for even, 3 for odd. CH4 (rigid spherical top, E = B J(J+1), B = 5.2410 cm-1 from memory):
+levels of J classified by the rotation group T (characters of D^J: 2J+1, sin((2J+1)pi/3)/sin(pi/3) on the 8 C3,
+(-1)^J on the 3 C2); the 16 proton-spin states are 5 A + E + 3 F, so a rotational A level has weight 5, each
+state of an E pair 1 (2 per pair), each state of an F triplet 1 (3 per triplet) (common practice; e.g. Herzberg
+II, 1945, ch. I); (2J+1) for M. Rotational constants (cm-1, ground state, from memory): H2O 27.8806,
 14.5216, 9.2777; H2S 10.3601, 9.0181, 4.7307; D2O 15.42, 7.27, 4.85. Energies from the lowest level.
 
 Command:  python3 tools/partition/asymmetric_rotor_sum.py > ingest/src/test/resources/org/linewright/ingest/partition/asymmetric-rotor-reference.tsv
@@ -55,6 +59,20 @@ def levels(a, b, c):
     return out
 
 
+def methane(t, b=5.2410):
+    q = 0.0
+    for j in range(0, 200):
+        chi_e = 2 * j + 1
+        chi_c3 = math.sin((2 * j + 1) * math.pi / 3) / math.sin(math.pi / 3)
+        chi_c2 = (-1) ** j
+        n_a = (chi_e + 8 * chi_c3 + 3 * chi_c2) / 12
+        n_e = (2 * chi_e - 8 * chi_c3 + 6 * chi_c2) / 12 / 2
+        n_f = (3 * chi_e - 3 * chi_c2) / 12
+        weight = 5 * round(n_a) + 2 * round(n_e) + 3 * round(n_f)
+        q += (2 * j + 1) * weight * math.exp(-C2 * b * j * (j + 1) / t)
+    return q
+
+
 def main():
     print("# rigid asymmetric rotor Q(T) with nuclear-spin weights: tools/partition/asymmetric_rotor_sum.py")
     print("# python " + sys.version.split()[0] + ", numpy " + np.__version__ + ", J <= " + str(J_MAX))
@@ -66,6 +84,7 @@ def main():
         for t in TEMPERATURES:
             row.append(sum(weight(l[2], l[3]) * (2 * l[1] + 1) * math.exp(-C2 * (l[0] - e0) / t) for l in lv))
         print(name + "\t" + "\t".join("%.6f" % q for q in row))
+    print("CH4\t" + "\t".join("%.6f" % methane(t) for t in TEMPERATURES))
 
 
 if __name__ == "__main__":

@@ -25,10 +25,10 @@ import org.linewright.ingest.registry.Isotopologue;
  *       thermochemical tables), a warning above (missing anharmonicity: up to a few % low at 2000 K);</li>
  *   <li>polyatomic minor isotopologue with its parent's constants, or with approximate own ones: a warning
  *       above {@value #POLYATOMIC_PARENT_LIMIT_K} K;</li>
- *   <li>polyatomic symmetric and spherical tops with nuclear-spin species (CH4, NH3, CH3Cl, C2H6, PH3) below
- *       {@value #POLYATOMIC_LOW_LIMIT_K} K: a warning; asymmetric tops and linear molecules are used down to
- *       {@value #LOW_LIMIT_K} K (the semiclassical rotor with its first correction is within 0.4 % of an exact
- *       rigid-rotor level sum with ortho/para weights there, see the tests).</li>
+ *   <li>polyatomic symmetric tops with nuclear-spin species (CH3D, NH3, CH3Cl, C2H6, PH3) below
+ *       {@value #POLYATOMIC_LOW_LIMIT_K} K: a warning; asymmetric tops, CH4 and linear molecules are used down to
+ *       {@value #LOW_LIMIT_K} K (the semiclassical rotor with its first correction is within 0.4 % of exact
+ *       rigid-rotor level sums with nuclear-spin weights there, see the tests).</li>
  * </ul>
  * Thread-safe; diatomic levels are computed once per isotopologue.
  */
@@ -99,21 +99,23 @@ final class BuiltInPartitionSums {
             warnings.add(warning(iso, temperatureK, "above " + (int) limit + " K the rotor–oscillator model may be off"
                     + " by more than 1 % (no anharmonicity; " + pc.note() + "): give a table"));
         }
-        if (temperatureK < LOW_LIMIT_K || (temperatureK < POLYATOMIC_LOW_LIMIT_K && hasSpinSpecies(iso.moleculeId()))) {
-            warnings.add(warning(iso, temperatureK, "below " + (int) (hasSpinSpecies(iso.moleculeId())
+        if (temperatureK < LOW_LIMIT_K || (temperatureK < POLYATOMIC_LOW_LIMIT_K && hasSpinSpecies(iso))) {
+            warnings.add(warning(iso, temperatureK, "below " + (int) (hasSpinSpecies(iso)
                     ? POLYATOMIC_LOW_LIMIT_K : LOW_LIMIT_K) + " K the semiclassical rotor may be off by more than 1 % (nuclear-spin species of a"
-                    + " symmetric or spherical top): give a table"));
+                    + " symmetric top): give a table"));
         }
         return new Estimate(ratio, "built-in v" + VERSION + ": semiclassical rotor × oscillator sums ("
                 + pc.note() + ") × Q(296 K) of the registry", warnings);
     }
 
     /**
-     * Symmetric and spherical tops with three or more identical protons (CH4, NH3, CH3Cl, C2H6, PH3): their
-     * nuclear-spin species give the low rotational levels weights far from the high-temperature average.
+     * Symmetric tops with three identical protons (CH3D, ¹³CH3D, NH3, CH3Cl, C2H6, PH3): their nuclear-spin species
+     * give the low rotational levels weights far from the high-temperature average, and the semiclassical rotor
+     * is not checked there. (¹²CH4 and ¹³CH4 are: within 0.24 % of the exact spherical-top sum at 50 K.)
      */
-    private static boolean hasSpinSpecies(int moleculeId) {
-        return moleculeId == 6 || moleculeId == 11 || moleculeId == 24 || moleculeId == 27 || moleculeId == 28;
+    private static boolean hasSpinSpecies(Isotopologue iso) {
+        int m = iso.moleculeId();
+        return (m == 6 && iso.number() >= 3) || m == 11 || m == 24 || m == 27 || m == 28;
     }
 
     private static String warning(Isotopologue iso, double temperatureK, String what) {
