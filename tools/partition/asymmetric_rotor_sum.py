@@ -12,7 +12,11 @@ basis |J, K> (I^r representation, z = a), block-diagonalised by K parity and by 
 levels of J classified by the rotation group T (characters of D^J: 2J+1, sin((2J+1)pi/3)/sin(pi/3) on the 8 C3,
 (-1)^J on the 3 C2); the 16 proton-spin states are 5 A + E + 3 F, so a rotational A level has weight 5, each
 state of an E pair 1 (2 per pair), each state of an F triplet 1 (3 per triplet) (common practice; e.g. Herzberg
-II, 1945, ch. I); (2J+1) for M. Rotational constants (cm-1, ground state, from memory): H2O 27.8806,
+II, 1945, ch. I); (2J+1) for M. C3v symmetric tops with three protons (PH3 oblate, CH3D and CH3Cl prolate):
+E = B J(J+1) + (A or C - B) K^2, each |J, K> state weighted 4 for K = 0 mod 3 and 2 otherwise (the 8 proton-spin
+states are 4 A + 2 E under C3), times (2I+1) of the other nuclei (2 for 31P, 3 for 2H, 4 for 35Cl) (common
+practice); rotational constants PH3 B = 4.4524, C = 3.9190; CH3D A = 5.250, B = 3.880; CH3Cl A = 5.2053,
+B = 0.443402 (from memory). Rotational constants (cm-1, ground state, from memory): H2O 27.8806,
 14.5216, 9.2777; H2S 10.3601, 9.0181, 4.7307; D2O 15.42, 7.27, 4.85. Energies from the lowest level.
 
 Command:  python3 tools/partition/asymmetric_rotor_sum.py > ingest/src/test/resources/org/linewright/ingest/partition/asymmetric-rotor-reference.tsv
@@ -73,6 +77,21 @@ def methane(t, b=5.2410):
     return q
 
 
+def symmetric_top(t, b, k_constant, other_spins):
+    q = 0.0
+    for j in range(0, 400):
+        base = b * j * (j + 1)
+        if C2 * base / t > 80:
+            break
+        for k in range(-j, j + 1):
+            w = 4 if k % 3 == 0 else 2
+            q += (2 * j + 1) * w * other_spins * math.exp(-C2 * (base + (k_constant - b) * k * k) / t)
+    return q
+
+
+SYMMETRIC_TOPS = [("PH3", 4.4524, 3.9190, 2), ("CH3D", 3.880, 5.250, 3), ("CH3Cl", 0.443402, 5.2053, 4)]
+
+
 def main():
     print("# rigid asymmetric rotor Q(T) with nuclear-spin weights: tools/partition/asymmetric_rotor_sum.py")
     print("# python " + sys.version.split()[0] + ", numpy " + np.__version__ + ", J <= " + str(J_MAX))
@@ -85,6 +104,8 @@ def main():
             row.append(sum(weight(l[2], l[3]) * (2 * l[1] + 1) * math.exp(-C2 * (l[0] - e0) / t) for l in lv))
         print(name + "\t" + "\t".join("%.6f" % q for q in row))
     print("CH4\t" + "\t".join("%.6f" % methane(t) for t in TEMPERATURES))
+    for name, b, k_constant, spins in SYMMETRIC_TOPS:
+        print(name + "\t" + "\t".join("%.6f" % symmetric_top(t, b, k_constant, spins) for t in TEMPERATURES))
 
 
 if __name__ == "__main__":

@@ -25,8 +25,7 @@ import org.linewright.ingest.registry.Isotopologue;
  *       thermochemical tables), a warning above (missing anharmonicity: up to a few % low at 2000 K);</li>
  *   <li>polyatomic minor isotopologue with its parent's constants, or with approximate own ones: a warning
  *       above {@value #POLYATOMIC_PARENT_LIMIT_K} K;</li>
- *   <li>polyatomic symmetric tops with nuclear-spin species (CH3D, NH3, CH3Cl, C2H6, PH3) below
- *       {@value #POLYATOMIC_LOW_LIMIT_K} K: a warning; asymmetric tops, CH4 and linear molecules are used down to
+ *   <li>NH3 and C2H6 below {@value #POLYATOMIC_LOW_LIMIT_K} K: a warning; the other polyatomics are used down to
  *       {@value #LOW_LIMIT_K} K (the semiclassical rotor with its first correction is within 0.4 % of exact
  *       rigid-rotor level sums with nuclear-spin weights there, see the tests).</li>
  * </ul>
@@ -101,21 +100,20 @@ final class BuiltInPartitionSums {
         }
         if (temperatureK < LOW_LIMIT_K || (temperatureK < POLYATOMIC_LOW_LIMIT_K && hasSpinSpecies(iso))) {
             warnings.add(warning(iso, temperatureK, "below " + (int) (hasSpinSpecies(iso)
-                    ? POLYATOMIC_LOW_LIMIT_K : LOW_LIMIT_K) + " K the semiclassical rotor may be off by more than 1 % (nuclear-spin species of a"
-                    + " symmetric top): give a table"));
+                    ? POLYATOMIC_LOW_LIMIT_K : LOW_LIMIT_K) + " K the semiclassical rotor is not checked (inversion or torsion levels): give a table"));
         }
         return new Estimate(ratio, "built-in v" + VERSION + ": semiclassical rotor × oscillator sums ("
                 + pc.note() + ") × Q(296 K) of the registry", warnings);
     }
 
     /**
-     * Symmetric tops with three identical protons (CH3D, ¹³CH3D, NH3, CH3Cl, C2H6, PH3): their nuclear-spin species
-     * give the low rotational levels weights far from the high-temperature average, and the semiclassical rotor
-     * is not checked there. (¹²CH4 and ¹³CH4 are: within 0.24 % of the exact spherical-top sum at 50 K.)
+     * NH3 (inversion doubling with its spin statistics) and C2H6 (torsion): the semiclassical rotor is not checked
+     * against a level sum below {@value #POLYATOMIC_LOW_LIMIT_K} K. (CH4, PH3, CH3D and CH3Cl are, with their
+     * nuclear-spin species: within 0.24 % at 50 K.)
      */
     private static boolean hasSpinSpecies(Isotopologue iso) {
         int m = iso.moleculeId();
-        return (m == 6 && iso.number() >= 3) || m == 11 || m == 24 || m == 27 || m == 28;
+        return m == 11 || m == 27;
     }
 
     private static String warning(Isotopologue iso, double temperatureK, String what) {
