@@ -12,6 +12,8 @@ import org.linewright.cli.plot.PlotStyle;
 import org.linewright.cli.plot.StickSpectrumPlot;
 import org.linewright.cli.units.QuantityParser;
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.partition.PartitionSumNotes;
+import org.linewright.ingest.partition.StoredPartitionFunctions;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
 import picocli.CommandLine.Command;
@@ -110,6 +112,8 @@ public final class LinesCommand implements Callable<Integer> {
         LineListingRequest request = new LineListingRequest(low, high, moleculeId, isotopologue, strongest,
                 temperatureK, backgroundOptions.compositionOrNull(), backgroundOptions.widthOptions());
         LineStore lineStore = LineStore.open(store);
+        // The store's own partition functions (ExoMol-style .pf) apply at every temperature; user tables win.
+        registry = (MoleculeRegistry) StoredPartitionFunctions.withStoredTables(registry, List.of(lineStore));
         LineListing.Summary summary = LineListing.write(lineStore, request, registry,
                 ListingFormat.byName(format), out, spec.commandLine().getOut());
         if (plot != null) {
@@ -128,6 +132,14 @@ public final class LinesCommand implements Callable<Integer> {
             if (summary.widthSourcesOrNull() != null) {
                 summary.widthSourcesOrNull().report().forEach(err::println);
                 summary.widthSourcesOrNull().warnings().forEach(w -> err.println("warning: " + w));
+            }
+            err.flush();
+        }
+        if (!Double.isNaN(temperatureK)) {
+            // A modelled Q(T) outside its stated accuracy changes every S(T) of its isotopologue: always say so.
+            PrintWriter err = spec.commandLine().getErr();
+            for (String warning : PartitionSumNotes.of(registry, List.of(lineStore), temperatureK).warnings()) {
+                err.println("linewright: warning: " + warning);
             }
             err.flush();
         }

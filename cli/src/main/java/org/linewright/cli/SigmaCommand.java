@@ -3,8 +3,10 @@ package org.linewright.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.sources.WidthOptions;
@@ -28,6 +30,7 @@ import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.registry.Isotopologue;
 import org.linewright.ingest.registry.Molecule;
+import org.linewright.ingest.partition.PartitionSumNotes;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
 import picocli.CommandLine.ArgGroup;
@@ -175,7 +178,11 @@ public final class SigmaCommand implements Callable<Integer> {
             result = new CrossSectionCalculator(opened, registry, threadCount).compute(request, eng,
                     (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
         }
-        CrossSectionFiles.write(out, fileFormat, grid, result.sigmaCm2PerMolecule(), result.metadata());
+        // The file records per isotopologue where its Q(T) came from, and any warning on it.
+        PartitionSumNotes partitionSums = PartitionSumNotes.of(registry, opened, temperature.kelvin());
+        Map<String, String> metadata = new LinkedHashMap<>(result.metadata());
+        metadata.putAll(partitionSums.metadata());
+        CrossSectionFiles.write(out, fileFormat, grid, result.sigmaCm2PerMolecule(), metadata);
         if (plot != null) {
             CrossSectionPlot.write(plot, PlotStyle.of(String.format(Locale.ROOT, "T = %s K, p = %s bar, %s",
                             fmt(temperature.kelvin()), fmt(pressure.bar()), composition)),
@@ -185,6 +192,11 @@ public final class SigmaCommand implements Callable<Integer> {
         if (!quiet) {
             summary(spec.commandLine().getOut(), result, grid);
         }
+        // A modelled Q(T) outside its stated accuracy changes every S(T) of its isotopologue: always say so.
+        for (String warning : partitionSums.warnings()) {
+            spec.commandLine().getErr().println("linewright: warning: " + warning);
+        }
+        spec.commandLine().getErr().flush();
         return ExitCodes.OK;
     }
 

@@ -24,6 +24,13 @@ public final class SpeciesDataOptions {
                     + "When given, both Q(296 K) and Q(T) come from it. Repeatable.")
     private List<String> partitionSumSpecs = new ArrayList<>();
 
+    @Option(names = "--catalog-partition", paramLabel = "FILE",
+            description = "Partition functions of an 80-column catalog: per line a species tag and log10 Q at "
+                    + "300, 225, 150, 75, 37.5, 18.75, 9.375 K (see docs/formats-state-lists-and-catalogs.md). Used "
+                    + "for the catalog's isotopologues (user --partition-sum tables and a data set's own .pf win); "
+                    + "give it to ingest and to the commands that compute intensities.")
+    private Path catalogPartition;
+
     /** The registry with the user's metadata and partition-sum tables attached. */
     public MoleculeRegistry registry() throws IOException {
         return partitionSums().attachedRegistry();
@@ -39,6 +46,7 @@ public final class SpeciesDataOptions {
         for (String s : partitionSumSpecs) {
             specs.add(TableSpec.parse(s));
         }
-        return PartitionSums.of(base).withTables(specs);
+        PartitionSums sums = PartitionSums.of(base).withTables(specs);
+        return catalogPartition == null ? sums : sums.withCatalogFile(catalogPartition);
     }
 }

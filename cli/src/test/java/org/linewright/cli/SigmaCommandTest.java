@@ -133,6 +133,25 @@ class SigmaCommandTest {
     }
 
     @Test
+    void fileRecordsWhereEachPartitionSumCameFromAndWarnsOutsideTheModelsRange() throws IOException {
+        Path h5 = tmp.resolve("co-hot.h5");
+        Run r = run("sigma", store.toString(), "--temperature", "4000K", "--pressure", "1atm", "--background",
+                "air=1", "--between", "2100", "2110", "--step", "0.05", "--out", h5.toString(), "-q");
+        assertEquals(0, r.code(), r.err());
+        // 4000 K is beyond the 3000 K to which the diatomic level sums are checked: said for every isotopologue
+        // of the sample (CO 1–6), also with -q, naming isotopologue and temperature.
+        for (String iso : new String[] {"12C-16O (5/1)", "13C-16O (5/2)", "13C-17O (5/6)"}) {
+            assertTrue(r.err().contains("warning: Q(4000.00 K) of " + iso), r.err());
+        }
+        try (HdfFile hdf = new HdfFile(h5)) {
+            String source = (String) hdf.getAttribute("partition_sum.5/1").getData();
+            assertTrue(source.startsWith("built-in v2: direct sum over"), source);
+            String warning = (String) hdf.getAttribute("partition_sum_warning.1").getData();
+            assertTrue(warning.contains("4000") && warning.contains("5/1"), warning);
+        }
+    }
+
+    @Test
     void helpHasAnExample() {
         Run r = run("sigma", "--help");
         assertEquals(0, r.code());

@@ -45,6 +45,7 @@ import org.linewright.ingest.InputException;
 import org.linewright.ingest.ToolVersion;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
+import org.linewright.ingest.partition.StoredPartitionFunctions;
 import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.store.LineCursor;
 import org.linewright.ingest.store.LineQuery;
@@ -159,7 +160,9 @@ public final class CrossSectionCalculator {
         }
         this.threads = threads;
         this.chunkLines = chunkLines;
-        this.lookup = threads == 1 ? lookup : new SerializedLookup(lookup);
+        // The stores' own partition functions (ExoMol-style .pf) apply at every temperature; user tables win.
+        IsotopologueLookup withData = StoredPartitionFunctions.withStoredTables(lookup, this.stores);
+        this.lookup = threads == 1 ? withData : new SerializedLookup(withData);
         if (threads == 1) {
             this.workers = null;
         } else {

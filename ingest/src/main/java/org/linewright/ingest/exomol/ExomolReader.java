@@ -37,8 +37,10 @@ import org.linewright.ingest.text.DecimalParser;
  *   <li>{@code einsteinAS1}, {@code upperDegeneracy}/{@code lowerDegeneracy} (total degeneracies g′, g″),
  *       {@code upperEnergyCm1}/{@code lowerEnergyCm1} (E′, E″), {@code upperJ}/{@code lowerJ} from the states;</li>
  *   <li>{@code intensityCmPerMolecule}: S(296 K) from A by {@link EinsteinCoefficients#intensityFromEinsteinA},
- *       weighted by the natural abundance of the registry, with Q(296 K) from the {@code .pf} file (linear
- *       interpolation) or, without one, from the registry;</li>
+ *       weighted by the natural abundance of the registry, with Q(296 K) from the {@code .pf} file
+ *       ({@link PartitionTable} interpolation) or, without one, from the registry; the {@code .pf} table is
+ *       also offered to the line store ({@link #partitionFunctions}) so that Q(T) comes from it at every
+ *       temperature;</li>
  *   <li>{@code wavenumberUncertaintyCm1}: √(σ′² + σ″²) of the state energy uncertainties when the {@code .def}
  *       file announces them (independent errors assumed), else NaN;</li>
  *   <li>widths from the {@code .broad} files (see {@link BroadeningTable}) by the lower state's J″: gas
@@ -193,6 +195,12 @@ public final class ExomolReader implements LineReader, DuplicateCounter {
     /** The set's partition function, or null when it has no {@code .pf} file. */
     public PartitionTable partitionFunction() {
         return partitionTable;
+    }
+
+    /** The set's {@code .pf} for its isotopologue, so that the store records it; empty without one. */
+    @Override
+    public Map<IsotopologueLookup.Id, PartitionTable> partitionFunctions() {
+        return partitionTable == null ? Map.of() : Map.of(id, partitionTable);
     }
 
     /** Q(296 K) used for the intensities (from the {@code .pf} file, else from the registry). */

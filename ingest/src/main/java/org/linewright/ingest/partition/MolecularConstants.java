@@ -6,7 +6,8 @@ import java.util.Map;
 
 /**
  * Molecular constants of the most abundant isotopologue of each molecule, for the rigid-rotor /
- * harmonic-oscillator partition function ({@link RigidRotorHarmonicOscillator}).
+ * harmonic-oscillator partition function ({@link RigidRotorHarmonicOscillator}) and as the main isotopologue's
+ * constants of the built-in polyatomic model ({@code PolyatomicModel}).
  *
  * <p>Rotational constants (ground vibrational state, cm⁻¹), vibrational fundamentals (cm⁻¹) with their
  * degeneracies, symmetry numbers and low-lying electronic levels follow G. Herzberg, <i>Molecular Spectra and

@@ -29,11 +29,33 @@ public final class PartitionTable {
     private final String name;
     private final double[] temperatureK;
     private final double[] q;
+    /** Interpolate ln Q linearly in ln T (sparse catalog tables) instead of the cubic in T. */
+    private final boolean logLog;
 
     private PartitionTable(String name, double[] temperatureK, double[] q) {
+        this(name, temperatureK, q, false);
+    }
+
+    private PartitionTable(String name, double[] temperatureK, double[] q, boolean logLog) {
         this.name = name;
         this.temperatureK = temperatureK;
         this.q = q;
+        this.logLog = logLog;
+    }
+
+    /**
+     * A sparse table interpolated linearly in ln Q against ln T, ln Q(T) = ln Q_j + (ln Q_{j+1} − ln Q_j)·
+     * (ln T − ln T_j)/(ln T_{j+1} − ln T_j) — exact for a power law Q ∝ T^n, the form of a rotational partition
+     * function (common practice for the few temperatures a catalog tabulates). Same checks as {@link #of}.
+     */
+    public static PartitionTable logLog(String name, double[] temperatureK, double[] q) {
+        PartitionTable t = of(name, temperatureK, q);
+        return new PartitionTable(t.name, t.temperatureK, t.q, true);
+    }
+
+    /** True for a table interpolated in ln Q against ln T ({@link #logLog}). */
+    public boolean interpolatesLogLog() {
+        return logLog;
     }
 
     /** A table from arrays (copied); temperatures strictly increasing, at least two points, Q positive. */
@@ -193,6 +215,10 @@ public final class PartitionTable {
         }
         // Interval [t[j], t[j+1]] containing the temperature.
         int j = -i - 2;
+        if (logLog) {
+            double w = Math.log(temperatureK / t[j]) / Math.log(t[j + 1] / t[j]);
+            return q[j] * Math.exp(w * Math.log(q[j + 1] / q[j]));
+        }
         if (j == 0 || j == n - 2) {
             // First or last interval: one neighbour is missing, so interpolate linearly.
             double w = (temperatureK - t[j]) / (t[j + 1] - t[j]);

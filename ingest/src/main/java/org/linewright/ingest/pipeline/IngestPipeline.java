@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.partition.StoredPartitionFunctions;
 import org.linewright.ingest.source.LineSources;
 import org.linewright.ingest.source.OpenedSource;
 import org.linewright.ingest.source.ReadOptions;
@@ -86,6 +87,9 @@ public final class IngestPipeline {
             parameters.put("lenient", Boolean.toString(options.lenient()));
             parameters.put("format_requested", options.formatOrNull() == null ? "detect" : options.formatOrNull().id());
             parameters.put("compression", opened.compression());
+            // The data's own partition function travels with the lines, to be used at every temperature.
+            opened.reader().partitionFunctions().forEach((id, table) ->
+                    parameters.putAll(StoredPartitionFunctions.parameters(id.moleculeId(), id.isotopologue(), table)));
             SourceMetadata metadata = SourceMetadata.of(opened.fileName(), "", opened.format().id(), parameters);
             try (LineStoreWriter writer = LineStoreWriter.create(storeDir, name, metadata,
                     opened.reader().columnsProvided())) {

@@ -97,6 +97,11 @@ public final class MoleculeRegistry implements IsotopologueLookup {
         return new MoleculeRegistry(molecules, isotopologues, source);
     }
 
+    /** The attached partition sums, or null when none is attached. */
+    public PartitionSumSource partitionSums() {
+        return partitionSums;
+    }
+
     private MoleculeRegistry merged(InputStream in, String fileName) throws IOException {
         TreeMap<Integer, Molecule> mols = new TreeMap<>(molecules);
         TreeMap<Long, Isotopologue> isos = new TreeMap<>(isotopologues);
@@ -334,6 +339,24 @@ public final class MoleculeRegistry implements IsotopologueLookup {
             return partitionSums.partitionSum(i, temperatureK);
         }
         return temperatureK == REFERENCE_TEMPERATURE_K ? i.q296() : Double.NaN;
+    }
+
+    @Override
+    public String partitionSumSource(int moleculeId, int isotopologue, double temperatureK) {
+        Isotopologue i = isotopologue(moleculeId, isotopologue);
+        if (i == null) {
+            return "";
+        }
+        if (partitionSums != null) {
+            return partitionSums.source(i, temperatureK);
+        }
+        return temperatureK == REFERENCE_TEMPERATURE_K ? "registry Q(296 K)" : "";
+    }
+
+    @Override
+    public List<String> partitionSumWarnings(int moleculeId, int isotopologue, double temperatureK) {
+        Isotopologue i = isotopologue(moleculeId, isotopologue);
+        return i == null || partitionSums == null ? List.of() : partitionSums.warnings(i, temperatureK);
     }
 
     @Override

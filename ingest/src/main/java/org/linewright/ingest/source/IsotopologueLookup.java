@@ -1,5 +1,7 @@
 package org.linewright.ingest.source;
 
+import java.util.List;
+
 /**
  * What readers need to know of isotopologues: how other formats name them, their natural abundance and
  * partition sum. Implemented by the molecule registry; readers depend only on this interface.
@@ -39,4 +41,20 @@ public interface IsotopologueLookup {
      * value); readers need it to convert intensities given at another reference temperature. NaN when unknown.
      */
     double partitionSum(int moleculeId, int isotopologue, double temperatureK);
+
+    /**
+     * Where Q(T) of the isotopologue comes from, in words (user table, the data set's partition function, a
+     * catalog's, or the built-in model with its version and method), for provenance records; empty when unknown.
+     */
+    default String partitionSumSource(int moleculeId, int isotopologue, double temperatureK) {
+        return "";
+    }
+
+    /**
+     * Warnings on Q(T) of the isotopologue, each naming the isotopologue and temperature, where the value may be
+     * outside its source's stated accuracy (e.g. a modelled Q beyond its checked range); empty when there are none.
+     */
+    default List<String> partitionSumWarnings(int moleculeId, int isotopologue, double temperatureK) {
+        return List.of();
+    }
 }

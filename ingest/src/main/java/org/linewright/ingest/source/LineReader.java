@@ -3,9 +3,11 @@ package org.linewright.ingest.source;
 import java.io.Closeable;
 import java.io.IOException;
 import java.util.EnumSet;
+import java.util.Map;
 import java.util.Set;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
+import org.linewright.ingest.partition.PartitionTable;
 
 /**
  * Streams the lines of one source (one line-list file, or one state/transition set) in batches.
@@ -47,5 +49,14 @@ public interface LineReader extends Closeable {
     }
 
     /** The format this reader parses. */
+    /**
+     * Partition functions that came with the lines (e.g. an ExoMol-style set's {@code .pf}), by isotopologue;
+     * they are recorded in the line store and used at every temperature (see
+     * {@code org.linewright.ingest.partition.StoredPartitionFunctions}). The default: none.
+     */
+    default Map<IsotopologueLookup.Id, PartitionTable> partitionFunctions() {
+        return Map.of();
+    }
+
     LineFormat format();
 }

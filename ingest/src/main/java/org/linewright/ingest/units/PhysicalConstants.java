@@ -16,6 +16,8 @@ public final class PhysicalConstants {
     public static final double BOLTZMANN_J_PER_K = 1.380649e-23;
     /** Avogadro constant, exact, in 1/mol. */
     public static final double AVOGADRO_PER_MOL = 6.02214076e23;
+    /** One electronvolt as a wavenumber, e/(hc) in cm⁻¹ (CODATA 2018: 8065.543937... cm⁻¹ per eV). */
+    public static final double ELECTRON_VOLT_CM1 = 8065.543937;
     /** Second radiation constant c2 = hc/k in cm·K (CODATA 2018: 1.438776877...×10⁻² m·K). */
     public static final double SECOND_RADIATION_CONSTANT_CM_K = 1.438776877;
     /** Atomic mass constant m_u in kg (CODATA 2018, relative uncertainty 3.0×10⁻¹⁰). */

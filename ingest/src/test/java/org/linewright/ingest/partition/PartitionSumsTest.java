@@ -148,13 +148,34 @@ class PartitionSumsTest {
     @Test
     void builtInValuesCarryTheirOrigin() {
         PartitionSums q = PartitionSums.of(registry);
-        assertEquals(new PartitionSums.Value(107.42, PartitionSums.Origin.REGISTRY_296), q.value(5, 1, 296.0));
+        PartitionSums.Value at296 = q.value(5, 1, 296.0);
+        // Q(296 K) of 12C16O = 107.42 (samples README: HITRAN isotopologue metadata, TIPS-2021, from memory).
+        assertEquals(107.42, at296.q());
+        assertEquals(PartitionSums.Origin.REGISTRY_296, at296.origin());
         PartitionSums.Value hot = q.value(5, 1, 1000.0);
-        assertEquals(PartitionSums.Origin.RRHO_SCALED, hot.origin());
+        assertEquals(PartitionSums.Origin.BUILT_IN, hot.origin());
+        assertTrue(hot.source().contains("built-in v") && hot.source().contains("levels"), hot.source());
+        assertTrue(hot.withinStatedAccuracy(), hot.warnings().toString());
         // Rigid rotor: Q roughly proportional to T for CO, plus a few % of vibration at 1000 K
-        // (e^(−c2·2143/1000) ≈ 0.046): between 1000/296 and 1.1 × 1000/296 times Q(296).
+        // (e^(−c2·2143/1000) ≈ 0.046): between 1000/296 and 1.1 × 1000/296 times Q(296) (common practice).
         assertTrue(hot.q() > 107.42 * 1000 / 296 && hot.q() < 1.1 * 107.42 * 1000 / 296, Double.toString(hot.q()));
         assertThrows(InputException.class, () -> q.value(5, 99, 300.0));
+    }
+
+    @Test
+    void anIsotopologueWithoutTabulatedNuclideDataHasNoModelButAClearError() throws IOException {
+        // A user row for 14C16O (invented abundance and Q): 14C has no tabulated spin, so no level sum.
+        Path f = tmp.resolve("extra.tsv");
+        Files.writeString(f, String.join("\t", "molecule_id",
+                "molecule", "molecule_name", "isotopologue", "code", "isotope_formula", "aliases", "abundance", "q296",
+                "mass_g_per_mol", "catalog_tags", "provenance") + "\n"
+                + String.join("\t", "5", "CO", "carbon monoxide", "9", "46", "14C-16O", "-", "1e-12", "100.0", "30.0",
+                "-", "synthetic test row") + "\n");
+        PartitionSums q = PartitionSums.of(registry.withUserFile(f));
+        assertEquals(100.0, q.value(5, 9, 296.0).q());
+        InputException e = assertThrows(InputException.class, () -> q.value(5, 9, 1000.0));
+        assertTrue(e.getMessage().contains("5/9") && e.getMessage().contains("=FILE"), e.getMessage());
+        assertTrue(Double.isNaN(q.attachedRegistry().partitionSum(5, 9, 1000.0)));
     }
 
     @Test
@@ -162,7 +183,8 @@ class PartitionSumsTest {
         Path f = tmp.resolve("co.txt");
         Files.writeString(f, "200 70\n296 100\n400 140\n500 180\n");
         PartitionSums q = PartitionSums.of(registry).withTables(List.of(TableSpec.parse("5/1=" + f)));
-        assertEquals(new PartitionSums.Value(100.0, PartitionSums.Origin.TABLE), q.value(5, 1, 296.0));
+        assertEquals(100.0, q.value(5, 1, 296.0).q());
+        assertEquals(PartitionSums.Origin.TABLE, q.value(5, 1, 296.0).origin());
         assertEquals(PartitionSums.Origin.TABLE, q.value(5, 1, 350.0).origin());
         assertThrows(InputException.class, () -> q.value(5, 1, 600.0));
         assertEquals(PartitionSums.Origin.REGISTRY_296, q.value(5, 2, 296.0).origin());
