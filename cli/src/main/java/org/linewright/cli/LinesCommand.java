@@ -62,11 +62,8 @@ public final class LinesCommand implements Callable<Integer> {
             description = "Unit of --between values without one: cm-1, um or GHz (default: ${DEFAULT-VALUE}).")
     private String unit;
 
-    @Option(names = "--molecule", paramLabel = "ID|FORMULA", description = "Only this molecule, e.g. 5 or CO.")
-    private String molecule;
-
-    @Option(names = "--isotopologue", paramLabel = "N", description = "Only this isotopologue (local number) of --molecule.")
-    private int isotopologue;
+    @Mixin
+    private LineSelectionOptions selection;
 
     @Option(names = "--strongest", paramLabel = "N",
             description = "Only the N strongest lines (by S(T) with --temperature, else by S(296 K)), in wavenumber order.")
@@ -105,9 +102,9 @@ public final class LinesCommand implements Callable<Integer> {
             low = Math.min(a, b);
             high = Math.max(a, b);
         }
-        int moleculeId = molecule == null ? 0 : registry.molecule(molecule).id();
+        LineSelectionOptions.Species species = selection.resolve(registry);
         double temperatureK = temperature == null ? Double.NaN : QuantityParser.parseTemperature(temperature).kelvin();
-        LineListingRequest request = new LineListingRequest(low, high, moleculeId, isotopologue, strongest,
+        LineListingRequest request = new LineListingRequest(low, high, species.moleculeId(), species.isotopologue(), strongest,
                 temperatureK, backgroundOptions.compositionOrNull(), backgroundOptions.widthOptions());
         LineStore lineStore = LineStore.open(store);
         LineListing.Summary summary = LineListing.write(lineStore, request, registry,

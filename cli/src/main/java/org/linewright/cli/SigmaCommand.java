@@ -26,8 +26,6 @@ import org.linewright.grid.output.CrossSectionFiles;
 import org.linewright.grid.output.CrossSectionFormat;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.InputException;
-import org.linewright.ingest.registry.Isotopologue;
-import org.linewright.ingest.registry.Molecule;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
 import picocli.CommandLine.ArgGroup;
@@ -121,12 +119,8 @@ public final class SigmaCommand implements Callable<Integer> {
             description = "Leave out lines with S(T) below this, cm/molecule (default ${DEFAULT-VALUE}: keep all).")
     private double threshold;
 
-    @Option(names = "--molecule", paramLabel = "ID-or-formula", description = "Only lines of this molecule, e.g. CO2 or 2.")
-    private String molecule;
-
-    @Option(names = "--isotopologue", paramLabel = "N", description = "Only this isotopologue of --molecule (local number).")
-    private Integer isotopologue;
-
+    @Mixin
+    private LineSelectionOptions lineSelection;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: the number of processors).")
     private Integer threads;
@@ -155,6 +149,11 @@ public final class SigmaCommand implements Callable<Integer> {
         LineShapeKind lineShape = parseShape(shape);
         if (!(threshold >= 0) || Double.isInfinite(threshold)) {
             throw new InputException("--threshold: " + threshold + " (expected a non-negative intensity in cm/molecule)");
+        }
+        if (!(tolerance > 0 && tolerance < 1)) {
+            // checked for every engine: a value the exact engine ignores today is still a mistake of the caller
+            throw new InputException("--tolerance: " + tolerance + " (expected a target relative error between 0 and "
+                    + "1, e.g. 1e-3)");
         }
         int threadCount = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         WavenumberGrid grid = grid();
@@ -256,26 +255,11 @@ public final class SigmaCommand implements Callable<Integer> {
     }
 
     private LineSelection selection(MoleculeRegistry registry) {
-        if (molecule == null) {
-            if (isotopologue != null) {
-                throw new InputException("--isotopologue " + isotopologue + ": needs --molecule (expected e.g. "
-                        + "--molecule CO2 --isotopologue 1)");
-            }
+        LineSelectionOptions.Species species = lineSelection.resolve(registry);
+        if (species.moleculeId() == 0) {
             return LineSelection.ALL;
         }
-        Molecule m = registry.molecule(molecule);
-        if (m == null) {
-            throw new InputException("--molecule '" + molecule + "': unknown (expected a molecule number or formula "
-                    + "of the registry, e.g. 2 or CO2)");
-        }
-        if (isotopologue == null) {
-            return LineSelection.molecules(m.id());
-        }
-        Isotopologue iso = registry.isotopologue(m.id(), isotopologue);
-        if (iso == null) {
-            throw new InputException("--isotopologue " + isotopologue + ": molecule " + m.formula()
-                    + " has no such isotopologue in the registry");
-        }
-        return LineSelection.isotopologue(m.id(), isotopologue);
+        return species.isotopologue() == 0 ? LineSelection.molecules(species.moleculeId())
+                : LineSelection.isotopologue(species.moleculeId(), species.isotopologue());
     }
 }
