@@ -58,6 +58,6 @@ public final class VerifyStep implements DemoStep {
                 details.add(c.id() + ": " + report.count(c) + " finding(s)");
             }
         }
-        return new StepOutcome(details, List.of(Path.of(REPORT_FILE), Path.of(PLOT_FILE)));
+        return new StepOutcome(details, List.of(reportFile, plot));
     }
 }
