@@ -79,7 +79,7 @@ public final class VerificationReportWriter {
                     s.registryAllowance());
         }
         line(b, "  (digits: significant digits of S/A the records carry; spread: 1.4826 x median |S/S(A) - 1|; limit: "
-                + "where a line starts to stand out)");
+                + "where a line starts to stand out, unless its own printed-digit bound is larger)");
         line(b, "");
         line(b, "Reference lines (positions in cm-1)");
         line(b, "  %-22s %-6s %-17s %14s %14s %11s %10s  %s", "line", "iso", "status", "reference", "listed", "offset",
