@@ -1,14 +1,13 @@
 package org.linewright.cli.plot;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.List;
 import org.knowm.xchart.BitmapEncoder;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.style.Styler;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /** What the plot writers share: headless set-up, a common look, and atomic PNG writing. */
 final class PngCharts {
@@ -94,16 +93,7 @@ final class PngCharts {
     }
 
     private static void writePng(byte[] png, Path pngFile) throws IOException {
-        Path parent = pngFile.toAbsolutePath().getParent();
-        Files.createDirectories(parent);
-        // A plain file (not createTempFile, which makes it owner-only): plots get the usual permissions.
-        Path tmp = parent.resolve("." + pngFile.getFileName() + ".partial");
-        try {
-            Files.write(tmp, png);
-            Files.move(tmp, pngFile, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        AtomicFile.writeBytes(pngFile, png);
     }
 
     static void requireSameLength(double[] a, double[] b, String what) {
