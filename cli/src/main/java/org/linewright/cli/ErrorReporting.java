@@ -79,7 +79,12 @@ final class ErrorReporting implements IExecutionExceptionHandler, IParameterExce
         CommandLine commandLine = ex.getCommandLine();
         PrintWriter err = commandLine.getErr();
         String command = commandLine.getCommandSpec().qualifiedName();
-        err.println(PREFIX + printable(oneLine(ex.getMessage())) + " (see '" + command + " --help')");
+        String message = oneLine(ex.getMessage());
+        // picocli starts some messages with its own "Error: ", which would follow our prefix
+        if (message.startsWith("Error: ")) {
+            message = message.substring("Error: ".length());
+        }
+        err.println(PREFIX + printable(message) + " (see '" + command + " --help')");
         if (globalOptions.debug()) {
             ex.printStackTrace(err);
         }

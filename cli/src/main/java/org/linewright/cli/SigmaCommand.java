@@ -80,9 +80,8 @@ public final class SigmaCommand implements Callable<Integer> {
     @Mixin
     private BackgroundOptions backgroundOptions;
 
-    @Option(names = "--between", arity = "2", required = true, paramLabel = "LOW HIGH",
-            description = "Spectral range of the grid (in --unit; bare numbers are cm-1 by default).")
-    private List<String> between;
+    @ArgGroup(exclusive = false, multiplicity = "1")
+    private SpectralWindowOptions window;
 
     @ArgGroup(exclusive = true, multiplicity = "1")
     private Spacing spacing;
@@ -96,9 +95,6 @@ public final class SigmaCommand implements Callable<Integer> {
         Double resolvingPower;
     }
 
-    @Option(names = "--unit", paramLabel = "UNIT", defaultValue = "cm-1",
-            description = "Unit of bare numbers in --between (and --step with GHz): cm-1, um or GHz (default ${DEFAULT-VALUE}).")
-    private String unit;
 
     @Mixin
     private WingOptions wingOptions;
@@ -208,42 +204,23 @@ public final class SigmaCommand implements Callable<Integer> {
     }
 
     private WavenumberGrid grid() {
-        String u = unit.trim();
-        String lu = u.toLowerCase(Locale.ROOT);
-        if (!lu.equals("cm-1") && !lu.equals("um") && !lu.equals("ghz")) {
-            throw new InputException("--unit: '" + unit + "' (expected cm-1, um or GHz)");
-        }
-        double a = QuantityParser.parseWavenumber(withUnit(between.get(0), u)).cm1();
-        double b = QuantityParser.parseWavenumber(withUnit(between.get(1), u)).cm1();
-        double low = Math.min(a, b);
-        double high = Math.max(a, b);
+        double[] range = window.rangeCm1();
+        double low = range[0];
+        double high = range[1];
         if (!(low < high)) {
-            throw new InputException("--between " + between.get(0) + " " + between.get(1)
+            throw new InputException("--between " + window.asWritten()
                     + ": empty range (expected two different spectral positions)");
         }
         if (spacing.resolvingPower != null) {
             return WavenumberGrid.resolvingPower(low, high, spacing.resolvingPower);
         }
-        String stepUnit = lu.equals("ghz") ? u : "cm-1";
-        double step = QuantityParser.parseWavenumberInterval(withUnit(spacing.step, stepUnit)).cm1();
+        String stepUnit = window.gigahertz() ? window.unit() : "cm-1";
+        double step = QuantityParser.parseWavenumberInterval(SpectralWindowOptions.withUnit(spacing.step, stepUnit)).cm1();
         if (step > high - low) {
             throw new InputException("--step " + spacing.step + ": larger than the range " + low + "-" + high
                     + " cm-1 (expected a step smaller than the range)");
         }
         return WavenumberGrid.uniform(low, high, step);
-    }
-
-    /** Appends {@code unit} to a bare number (text without letters). */
-    private static String withUnit(String value, String unit) {
-        String v = value.trim();
-        for (int i = 0; i < v.length(); i++) {
-            char c = v.charAt(i);
-            // a letter other than an exponent 'e' means the value names its own unit
-            if (Character.isLetter(c) && !((c == 'e' || c == 'E') && i > 0 && i + 1 < v.length())) {
-                return v;
-            }
-        }
-        return v + " " + unit;
     }
 
     private static LineShapeKind parseShape(String name) {

@@ -152,6 +152,7 @@ class BadInputEveryCommandTest {
                 v.add(new String[] {"abc", "2101"});
                 v.add(new String[] {"2100", text});
                 v.add(new String[] {"2100", "5 furlong"});
+                v.add(new String[] {"2100", "2101", "--between", "2200", "2201"});
             }
             case "--unit" -> v.add(new String[] {"furlong"});
             case "--molecule" -> {
