@@ -180,7 +180,7 @@ final class IntensityRelationCheck implements LineCheck {
                 findings.add(Check.REGISTRY_VALUES, Severity.NOTE, sp.molecule, sp.isotopologue, Double.NaN, 0,
                         "q296/abundance", sp.consensus, Double.NaN, fmt("%s: not in the registry; its lines imply "
                                 + "Q(296 K)/abundance = %s (median of %d lines), checked against each other only",
-                                sp.key(), sig(sp.consensus), sp.checked));
+                                sp.key(), six(sp.consensus), sp.checked));
                 continue;
             }
             double d = sp.consensus / sp.registryQOverAbundance - 1.0;
@@ -211,8 +211,8 @@ final class IntensityRelationCheck implements LineCheck {
                                         + "gives %s (Q(296 K) = %s, abundance = %s; registry provenance: %s); relative "
                                         + "deviation %s (%s); the intensities are %s times what A and the registry "
                                         + "give%s; line given: the isotopologue's strongest",
-                                sp.key(), sp.name, sig(sp.consensus), sp.checked, sourceNames,
-                                sig(sp.registryQOverAbundance), sp.registryQ, sp.registryAbundance, sp.provenance,
+                                sp.key(), sp.name, six(sp.consensus), sp.checked, sourceNames,
+                                six(sp.registryQOverAbundance), sp.registryQ, sp.registryAbundance, sp.provenance,
                                 sig(d), limit, sig(factor), powerOfTenHint(factor)));
             }
         }
@@ -298,6 +298,11 @@ final class IntensityRelationCheck implements LineCheck {
 
     private static String fmt(String format, Object... args) {
         return String.format(Locale.ROOT, format, args);
+    }
+
+    /** Six significant digits, for Q(296 K)/abundance values (resolved to 10⁻⁵ relative). */
+    private static String six(double v) {
+        return String.format(Locale.ROOT, "%.6g", v);
     }
 
     /** Three significant digits, for limits and spreads in messages. */
