@@ -62,7 +62,7 @@ public final class BuildCommand implements Callable<Integer> {
     private Integer threads;
 
     @Option(names = "--plot", paramLabel = "FILE.png",
-            description = "Also plot σ at the table's temperatures and pressures.")
+            description = "Also plot σ at every pressure and temperature of the table, one curve each.")
     private Path plot;
 
     @Option(names = "--plot-wavelength", description = "Draw the plot against wavelength (µm) instead of wavenumber.")

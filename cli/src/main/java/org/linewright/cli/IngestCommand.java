@@ -13,10 +13,12 @@ import org.linewright.ingest.pipeline.IngestOptions;
 import org.linewright.ingest.pipeline.IngestPipeline;
 import org.linewright.ingest.pipeline.IngestReport;
 import org.linewright.ingest.source.LineFormat;
+import org.linewright.ingest.text.OffendingText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
@@ -69,6 +71,11 @@ public final class IngestCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         boolean quiet = root.globalOptions().quiet();
         PrintWriter out = spec.commandLine().getOut();
+        if (rejects != null && !lenient) {
+            // a strict run stops at the first bad record and never writes rejects: say so rather than ignore it
+            throw new ParameterException(spec.commandLine(),
+                    "--rejects " + OffendingText.escape(rejects.toString()) + ": only used with --lenient");
+        }
         LineFormat lineFormat = format == null ? null : Formats.lineFormat(format);
         Map<String, String> parameters = new LinkedHashMap<>();
         parameters.put("command", "ingest");

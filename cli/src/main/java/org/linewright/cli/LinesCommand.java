@@ -16,6 +16,7 @@ import org.linewright.ingest.partition.PartitionSumNotes;
 import org.linewright.ingest.partition.StoredPartitionFunctions;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
+import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -56,19 +57,11 @@ public final class LinesCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "DIR", description = "The line store.")
     private Path store;
 
-    @Option(names = "--between", arity = "2", paramLabel = "LOW HIGH",
-            description = "Spectral window (inclusive), in --unit unless the values carry a unit.")
-    private String[] between;
+    @ArgGroup(exclusive = false, multiplicity = "0..1")
+    private SpectralWindowOptions window;
 
-    @Option(names = "--unit", paramLabel = "UNIT", defaultValue = "cm-1",
-            description = "Unit of --between values without one: cm-1, um or GHz (default: ${DEFAULT-VALUE}).")
-    private String unit;
-
-    @Option(names = "--molecule", paramLabel = "ID|FORMULA", description = "Only this molecule, e.g. 5 or CO.")
-    private String molecule;
-
-    @Option(names = "--isotopologue", paramLabel = "N", description = "Only this isotopologue (local number) of --molecule.")
-    private int isotopologue;
+    @Mixin
+    private LineSelectionOptions selection;
 
     @Option(names = "--strongest", paramLabel = "N",
             description = "Only the N strongest lines (by S(T) with --temperature, else by S(296 K)), in wavenumber order.")
@@ -100,16 +93,14 @@ public final class LinesCommand implements Callable<Integer> {
         MoleculeRegistry registry = speciesData.registry();
         double low = Double.NEGATIVE_INFINITY;
         double high = Double.POSITIVE_INFINITY;
-        if (between != null) {
-            double a = position(between[0]);
-            double b = position(between[1]);
-            // A wavelength window reverses in wavenumber.
-            low = Math.min(a, b);
-            high = Math.max(a, b);
+        if (window != null) {
+            double[] range = window.rangeCm1();
+            low = range[0];
+            high = range[1];
         }
-        int moleculeId = molecule == null ? 0 : registry.molecule(molecule).id();
+        LineSelectionOptions.Species species = selection.resolve(registry);
         double temperatureK = temperature == null ? Double.NaN : QuantityParser.parseTemperature(temperature).kelvin();
-        LineListingRequest request = new LineListingRequest(low, high, moleculeId, isotopologue, strongest,
+        LineListingRequest request = new LineListingRequest(low, high, species.moleculeId(), species.isotopologue(), strongest,
                 temperatureK, backgroundOptions.compositionOrNull(), backgroundOptions.widthOptions());
         LineStore lineStore = LineStore.open(store);
         // The store's own partition functions (ExoMol-style .pf) apply at every temperature; user tables win.
@@ -153,23 +144,5 @@ public final class LinesCommand implements Callable<Integer> {
             max = Math.max(max, v);
         }
         return max > 0 ? max * 1e-9 : Double.MIN_NORMAL;
-    }
-
-    private double position(String text) {
-        String t = text.strip();
-        boolean hasUnit = t.chars().anyMatch(Character::isLetter) && !t.matches("[-+0-9.]+[eE][-+]?[0-9]+");
-        if (!hasUnit && Double.parseDouble(checkNumber(t)) == 0.0) {
-            return 0.0;
-        }
-        return QuantityParser.parseWavenumber(hasUnit ? t : t + " " + unit).cm1();
-    }
-
-    private static String checkNumber(String t) {
-        try {
-            Double.parseDouble(t);
-            return t;
-        } catch (NumberFormatException e) {
-            throw new InputException("--between: \"" + t + "\" is not a number");
-        }
     }
 }

@@ -31,7 +31,14 @@ public final class Main {
      * @return the exit code ({@link ExitCodes})
      */
     public static int execute(PrintWriter out, PrintWriter err, String... args) {
-        return commandLine(out, err).execute(args);
+        CommandLine commandLine = commandLine(out, err);
+        try {
+            return commandLine.execute(args);
+        } catch (Error e) {
+            // picocli hands exceptions to ErrorReporting but lets errors (out of memory, stack overflow) through
+            LinewrightCommand root = commandLine.getCommand();
+            return new ErrorReporting(root.globalOptions()).report(e, err);
+        }
     }
 
     /**

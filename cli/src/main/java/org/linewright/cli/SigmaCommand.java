@@ -28,8 +28,6 @@ import org.linewright.grid.output.CrossSectionFiles;
 import org.linewright.grid.output.CrossSectionFormat;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.InputException;
-import org.linewright.ingest.registry.Isotopologue;
-import org.linewright.ingest.registry.Molecule;
 import org.linewright.ingest.partition.PartitionSumNotes;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineStore;
@@ -85,9 +83,8 @@ public final class SigmaCommand implements Callable<Integer> {
     @Mixin
     private BackgroundOptions backgroundOptions;
 
-    @Option(names = "--between", arity = "2", required = true, paramLabel = "LOW HIGH",
-            description = "Spectral range of the grid (in --unit; bare numbers are cm-1 by default).")
-    private List<String> between;
+    @ArgGroup(exclusive = false, multiplicity = "1")
+    private SpectralWindowOptions window;
 
     @ArgGroup(exclusive = true, multiplicity = "1")
     private Spacing spacing;
@@ -101,9 +98,6 @@ public final class SigmaCommand implements Callable<Integer> {
         Double resolvingPower;
     }
 
-    @Option(names = "--unit", paramLabel = "UNIT", defaultValue = "cm-1",
-            description = "Unit of bare numbers in --between (and --step with GHz): cm-1, um or GHz (default ${DEFAULT-VALUE}).")
-    private String unit;
 
     @Mixin
     private WingOptions wingOptions;
@@ -125,12 +119,8 @@ public final class SigmaCommand implements Callable<Integer> {
             description = "Leave out lines with S(T) below this, cm/molecule (default ${DEFAULT-VALUE}: keep all).")
     private double threshold;
 
-    @Option(names = "--molecule", paramLabel = "ID-or-formula", description = "Only lines of this molecule, e.g. CO2 or 2.")
-    private String molecule;
-
-    @Option(names = "--isotopologue", paramLabel = "N", description = "Only this isotopologue of --molecule (local number).")
-    private Integer isotopologue;
-
+    @Mixin
+    private LineSelectionOptions lineSelection;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: the number of processors).")
     private Integer threads;
@@ -159,6 +149,11 @@ public final class SigmaCommand implements Callable<Integer> {
         LineShapeKind lineShape = parseShape(shape);
         if (!(threshold >= 0) || Double.isInfinite(threshold)) {
             throw new InputException("--threshold: " + threshold + " (expected a non-negative intensity in cm/molecule)");
+        }
+        if (!(tolerance > 0 && tolerance < 1)) {
+            // checked for every engine: a value the exact engine ignores today is still a mistake of the caller
+            throw new InputException("--tolerance: " + tolerance + " (expected a target relative error between 0 and "
+                    + "1, e.g. 1e-3)");
         }
         int threadCount = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         WavenumberGrid grid = grid();
@@ -234,42 +229,23 @@ public final class SigmaCommand implements Callable<Integer> {
     }
 
     private WavenumberGrid grid() {
-        String u = unit.trim();
-        String lu = u.toLowerCase(Locale.ROOT);
-        if (!lu.equals("cm-1") && !lu.equals("um") && !lu.equals("ghz")) {
-            throw new InputException("--unit: '" + unit + "' (expected cm-1, um or GHz)");
-        }
-        double a = QuantityParser.parseWavenumber(withUnit(between.get(0), u)).cm1();
-        double b = QuantityParser.parseWavenumber(withUnit(between.get(1), u)).cm1();
-        double low = Math.min(a, b);
-        double high = Math.max(a, b);
+        double[] range = window.rangeCm1();
+        double low = range[0];
+        double high = range[1];
         if (!(low < high)) {
-            throw new InputException("--between " + between.get(0) + " " + between.get(1)
+            throw new InputException("--between " + window.asWritten()
                     + ": empty range (expected two different spectral positions)");
         }
         if (spacing.resolvingPower != null) {
             return WavenumberGrid.resolvingPower(low, high, spacing.resolvingPower);
         }
-        String stepUnit = lu.equals("ghz") ? u : "cm-1";
-        double step = QuantityParser.parseWavenumberInterval(withUnit(spacing.step, stepUnit)).cm1();
+        String stepUnit = window.gigahertz() ? window.unit() : "cm-1";
+        double step = QuantityParser.parseWavenumberInterval(SpectralWindowOptions.withUnit(spacing.step, stepUnit)).cm1();
         if (step > high - low) {
             throw new InputException("--step " + spacing.step + ": larger than the range " + low + "-" + high
                     + " cm-1 (expected a step smaller than the range)");
         }
         return WavenumberGrid.uniform(low, high, step);
-    }
-
-    /** Appends {@code unit} to a bare number (text without letters). */
-    private static String withUnit(String value, String unit) {
-        String v = value.trim();
-        for (int i = 0; i < v.length(); i++) {
-            char c = v.charAt(i);
-            // a letter other than an exponent 'e' means the value names its own unit
-            if (Character.isLetter(c) && !((c == 'e' || c == 'E') && i > 0 && i + 1 < v.length())) {
-                return v;
-            }
-        }
-        return v + " " + unit;
     }
 
     private static LineShapeKind parseShape(String name) {
@@ -281,26 +257,11 @@ public final class SigmaCommand implements Callable<Integer> {
     }
 
     private LineSelection selection(MoleculeRegistry registry) {
-        if (molecule == null) {
-            if (isotopologue != null) {
-                throw new InputException("--isotopologue " + isotopologue + ": needs --molecule (expected e.g. "
-                        + "--molecule CO2 --isotopologue 1)");
-            }
+        LineSelectionOptions.Species species = lineSelection.resolve(registry);
+        if (species.moleculeId() == 0) {
             return LineSelection.ALL;
         }
-        Molecule m = registry.molecule(molecule);
-        if (m == null) {
-            throw new InputException("--molecule '" + molecule + "': unknown (expected a molecule number or formula "
-                    + "of the registry, e.g. 2 or CO2)");
-        }
-        if (isotopologue == null) {
-            return LineSelection.molecules(m.id());
-        }
-        Isotopologue iso = registry.isotopologue(m.id(), isotopologue);
-        if (iso == null) {
-            throw new InputException("--isotopologue " + isotopologue + ": molecule " + m.formula()
-                    + " has no such isotopologue in the registry");
-        }
-        return LineSelection.isotopologue(m.id(), isotopologue);
+        return species.isotopologue() == 0 ? LineSelection.molecules(species.moleculeId())
+                : LineSelection.isotopologue(species.moleculeId(), species.isotopologue());
     }
 }

@@ -19,6 +19,8 @@ import java.util.Locale;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.linewright.ingest.testsupport.ReferenceSamples;
 
 /**
@@ -74,6 +76,38 @@ class VerifyCompareCommandsTest {
         // PH3 J=1-0 at 266.9445 GHz = 8.9043 cm-1 (common practice)
         assertTrue(r.out().lines().anyMatch(l -> l.contains("PH3 J=1-0") && l.contains("found") && l.contains("8.9043")),
                 r.out());
+    }
+
+    /**
+     * Every real sample passes with exit code 0 (samples README: every record obeys the S–A relation within 7e-4
+     * with the registry's values), in default and in strict mode, and the report states its consistency figure.
+     */
+    @ParameterizedTest
+    @ValueSource(strings = {"sample_CO.par", "sample_CO2.par", "sample_N2O.par", "sample_PH3.par"})
+    void everyRealSamplePassesWithExitCode0(String name) {
+        Run r = run("verify", sample(name).toString());
+        assertEquals(ExitCodes.OK, r.code(), r.err() + r.out());
+        assertTrue(r.out().contains("result: PASSED (0 errors, 0 warnings, 0 notes)"), r.out());
+        assertTrue(r.out().contains("internal consistency of S and A: robust spread of S/S(A) - 1 "), r.out());
+        Run strict = run("verify", sample(name).toString(), "--strict");
+        assertEquals(ExitCodes.OK, strict.code(), strict.err() + strict.out());
+    }
+
+    /**
+     * A registry disagreement of 0.6 % (every PH3 intensity × 1.006, re-rounded as E10.3) is a warning (exit 0) by
+     * default and an error (exit 1) with {@code --strict} (fixed tolerance 5e-3).
+     */
+    @Test
+    void registryWarningPassesUnlessStrict() throws IOException {
+        List<String> records = new ArrayList<>(Files.readAllLines(sample("sample_PH3.par"), StandardCharsets.US_ASCII));
+        records.replaceAll(r -> r.substring(0, 15) + String.format(Locale.ROOT, "%10.3E",
+                1.006 * Double.parseDouble(r.substring(15, 25).trim())) + r.substring(25));
+        Path file = Files.write(temp.resolve("ph3.par"), records, StandardCharsets.US_ASCII);
+        Run r = run("verify", file.toString());
+        assertEquals(ExitCodes.OK, r.code(), r.out());
+        assertTrue(r.out().contains("(0 errors, 1 warning, 0 notes)"), r.out());
+        assertTrue(r.out().lines().anyMatch(l -> l.contains("warning") && l.contains("registry-values")), r.out());
+        assertEquals(ExitCodes.CHECK_FOUND_PROBLEMS, run("verify", file.toString(), "--strict").code());
     }
 
     /** One doubled intensity: exit code 1, the JSON report names that record; the plot is a PNG. */

@@ -6,6 +6,7 @@ import java.util.Map;
 import java.util.StringJoiner;
 
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.text.OffendingText;
 
 /**
  * Mole fractions of the background gases around the absorber, e.g. {@code H2=0.85,He=0.15}.
@@ -60,18 +61,18 @@ public final class Composition {
         for (String item : text.split(",", -1)) {
             int eq = item.indexOf('=');
             if (eq < 0) {
-                throw new InputException("background composition \"" + text + "\": item \"" + item.trim()
+                throw new InputException("background composition " + OffendingText.quote(text) + ": item \"" + item.trim()
                         + "\" (expected GAS=X)");
             }
             String name = item.substring(0, eq).trim();
             String value = item.substring(eq + 1).trim();
             BackgroundGas gas = BackgroundGas.byName(name);
             if (gas == null) {
-                throw new InputException("background composition \"" + text + "\": unknown gas \"" + name
+                throw new InputException("background composition " + OffendingText.quote(text) + ": unknown gas \"" + name
                         + "\" (expected one of " + knownNames() + ")");
             }
             if (seen[gas.ordinal()]) {
-                throw new InputException("background composition \"" + text + "\": gas \"" + name
+                throw new InputException("background composition " + OffendingText.quote(text) + ": gas \"" + name
                         + "\" given twice (expected each gas once)");
             }
             seen[gas.ordinal()] = true;
@@ -79,8 +80,8 @@ public final class Composition {
             try {
                 fraction = Double.parseDouble(value);
             } catch (NumberFormatException e) {
-                throw new InputException("background composition \"" + text + "\": fraction of " + gas.label()
-                        + " \"" + value + "\" is not a number (expected a mole fraction between 0 and 1)", e);
+                throw new InputException("background composition " + OffendingText.quote(text) + ": fraction of " + gas.label()
+                        + " " + OffendingText.quote(value) + " is not a number (expected a mole fraction between 0 and 1)", e);
             }
             x[gas.ordinal()] = fraction;
         }
@@ -91,14 +92,14 @@ public final class Composition {
         double sum = 0;
         for (int g = 0; g < x.length; g++) {
             if (!Double.isFinite(x[g]) || x[g] < 0 || x[g] > 1) {
-                throw new InputException("background composition \"" + text + "\": fraction of "
+                throw new InputException("background composition " + OffendingText.quote(text) + ": fraction of "
                         + BackgroundGas.ofOrdinal(g).label() + " is " + x[g]
                         + " (expected a mole fraction between 0 and 1)");
             }
             sum += x[g];
         }
         if (Math.abs(sum - 1.0) > SUM_TOLERANCE) {
-            throw new InputException("background composition \"" + text + "\": fractions sum to " + sum
+            throw new InputException("background composition " + OffendingText.quote(text) + ": fractions sum to " + sum
                     + " (expected 1 within " + SUM_TOLERANCE + ")");
         }
         return new Composition(x);

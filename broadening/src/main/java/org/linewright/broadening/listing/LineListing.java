@@ -2,10 +2,8 @@ package org.linewright.broadening.listing;
 
 import java.io.IOException;
 import java.io.Writer;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -28,6 +26,7 @@ import org.linewright.ingest.store.LineCursor;
 import org.linewright.ingest.store.LineExportWriter;
 import org.linewright.ingest.store.LineQuery;
 import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * Lists the lines of a store — a wavenumber window, a molecule or isotopologue, the N strongest — with what the
@@ -78,21 +77,13 @@ public final class LineListing {
             return list(store, query, selected, computed, format, stdout, null);
         }
         Path target = outOrNull.toAbsolutePath();
-        Path partial = target.resolveSibling("." + target.getFileName() + ".partial");
         Files.createDirectories(target.getParent());
         if (format == ListingFormat.ARROW) {
             return list(store, query, selected, computed, format, null, target);
         }
-        try {
-            Summary s;
-            try (Writer out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8)) {
-                s = list(store, query, selected, computed, format, out, null);
-            }
-            Files.move(partial, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            return s;
-        } finally {
-            Files.deleteIfExists(partial);
-        }
+        Summary[] s = new Summary[1];
+        AtomicFile.writeText(target, out -> s[0] = list(store, query, selected, computed, format, out, null));
+        return s[0];
     }
 
     /**

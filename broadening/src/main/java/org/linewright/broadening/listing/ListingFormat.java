@@ -1,6 +1,7 @@
 package org.linewright.broadening.listing;
 
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.text.OffendingText;
 
 /** Output formats of {@link LineListing}. */
 public enum ListingFormat {
@@ -17,6 +18,6 @@ public enum ListingFormat {
                 return f;
             }
         }
-        throw new InputException("format '" + name + "' (expected table, csv or arrow)");
+        throw new InputException("format " + OffendingText.quote(name) + " (expected table, csv or arrow)");
     }
 }

@@ -5,6 +5,7 @@ import java.util.Map;
 
 import org.linewright.broadening.background.BackgroundGas;
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.text.OffendingText;
 
 /**
  * Parses user-given broadening constants written {@code GAS=γ[:n[:δ]],...}, e.g. {@code h2=0.06:0.6,he=0.05};
@@ -26,22 +27,22 @@ public final class UserConstants {
         for (String item : text.split(",", -1)) {
             int eq = item.indexOf('=');
             if (eq < 0) {
-                throw new InputException("broadening constants \"" + text + "\": item \"" + item.trim()
+                throw new InputException("broadening constants " + OffendingText.quote(text) + ": item \"" + item.trim()
                         + "\" (expected GAS=width[:exponent[:shift]])");
             }
             String name = item.substring(0, eq).trim();
             BackgroundGas gas = BackgroundGas.byName(name);
             if (gas == null) {
-                throw new InputException("broadening constants \"" + text + "\": unknown gas \"" + name
+                throw new InputException("broadening constants " + OffendingText.quote(text) + ": unknown gas \"" + name
                         + "\" (expected air, h2, he, co2, n2, o2, h2o or self)");
             }
             if (out.containsKey(gas)) {
-                throw new InputException("broadening constants \"" + text + "\": gas \"" + name
+                throw new InputException("broadening constants " + OffendingText.quote(text) + ": gas \"" + name
                         + "\" given twice (expected each gas once)");
             }
             String[] parts = item.substring(eq + 1).split(":", -1);
             if (parts.length > 3) {
-                throw new InputException("broadening constants \"" + text + "\": \"" + item.trim()
+                throw new InputException("broadening constants " + OffendingText.quote(text) + ": \"" + item.trim()
                         + "\" has more than three values (expected width[:exponent[:shift]])");
             }
             GasParameters d = GasParameters.defaultFor(gas);
@@ -49,7 +50,7 @@ public final class UserConstants {
             double exponent = parts.length > 1 ? number(text, gas, "exponent", parts[1]) : d.exponent();
             double shift = parts.length > 2 ? number(text, gas, "shift", parts[2]) : d.shiftCm1PerAtm();
             if (!(width > 0)) {
-                throw new InputException("broadening constants \"" + text + "\": width of " + gas.label() + " is "
+                throw new InputException("broadening constants " + OffendingText.quote(text) + ": width of " + gas.label() + " is "
                         + width + " (expected a positive width in cm-1/atm)");
             }
             out.put(gas, new GasParameters(width, exponent, shift));
@@ -66,7 +67,7 @@ public final class UserConstants {
         } catch (NumberFormatException e) {
             // reported below
         }
-        throw new InputException("broadening constants \"" + text + "\": " + what + " of " + gas.label() + " \""
+        throw new InputException("broadening constants " + OffendingText.quote(text) + ": " + what + " of " + gas.label() + " \""
                 + value.trim() + "\" is not a finite number");
     }
 }

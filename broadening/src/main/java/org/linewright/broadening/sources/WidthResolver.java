@@ -16,6 +16,7 @@ import org.linewright.ingest.InputException;
 import org.linewright.ingest.exomol.BroadeningTable;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.text.OffendingText;
 
 /**
  * Finds, for every line and every gas of a background {@link Composition}, the Lorentz width γ(296 K), its
@@ -346,7 +347,7 @@ public final class WidthResolver {
             for (String label : commaSeparated.split(",", -1)) {
                 WidthSource s = WidthSource.byLabel(label);
                 if (s == null) {
-                    throw new InputException("width source order \"" + commaSeparated + "\": unknown source \""
+                    throw new InputException("width source order " + OffendingText.quote(commaSeparated) + ": unknown source \""
                             + label.trim() + "\" (expected line, rule, table, user, air-proxy or default)");
                 }
                 list.add(s);

@@ -1,6 +1,7 @@
 package org.linewright.broadening.voigt;
 
 import java.util.Locale;
+import org.linewright.ingest.text.OffendingText;
 
 /** The selectable line shapes: Voigt (Doppler and pressure broadening), Doppler only, Lorentz only. */
 public enum LineShapeKind implements LineShape {
@@ -81,7 +82,7 @@ public enum LineShapeKind implements LineShape {
                 return LORENTZ;
             default:
                 throw new IllegalArgumentException(
-                        "unknown line shape '" + name + "': expected voigt, doppler or lorentz");
+                        "unknown line shape " + OffendingText.quote(name) + ": expected voigt, doppler or lorentz");
         }
     }
 

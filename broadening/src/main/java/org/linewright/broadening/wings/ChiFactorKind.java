@@ -1,6 +1,7 @@
 package org.linewright.broadening.wings;
 
 import java.util.Locale;
+import org.linewright.ingest.text.OffendingText;
 
 /** Choice of far-wing correction factor applied to a line's profile. */
 public enum ChiFactorKind {
@@ -23,7 +24,7 @@ public enum ChiFactorKind {
                 return PERRIN_HARTMANN_CO2;
             default:
                 throw new IllegalArgumentException(
-                        "unknown wing factor '" + name + "': expected none or perrin-hartmann-co2");
+                        "unknown wing factor " + OffendingText.quote(name) + ": expected none or perrin-hartmann-co2");
         }
     }
 

@@ -1,10 +1,8 @@
 package org.linewright.cli.demo;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.Duration;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
@@ -12,6 +10,7 @@ import java.util.List;
 import java.util.Locale;
 import org.linewright.ingest.ToolVersion;
 import org.tomlj.TomlParseResult;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * The demo's account of itself — what was computed, with which parameters, how long each step took, where
@@ -198,8 +197,6 @@ public record DemoReport(Instant started, Path outDir, List<StepRecord> steps, D
     }
 
     private static void writeAtomically(Path file, String content) throws IOException {
-        Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
-        Files.writeString(tmp, content, StandardCharsets.UTF_8);
-        Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        AtomicFile.writeText(file, out -> out.write(content));
     }
 }

@@ -12,6 +12,7 @@ import org.tomlj.Toml;
 import org.tomlj.TomlArray;
 import org.tomlj.TomlParseError;
 import org.tomlj.TomlParseResult;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * Reads the demo plan ({@code plan.toml}) and copies it with the line lists it names into the output folder,
@@ -77,8 +78,6 @@ public final class StageDataStep implements DemoStep {
 
     /** Copies under a temporary name, then renames, so a half-copied file never looks complete. */
     private static void copy(Path from, Path to) throws IOException {
-        Path tmp = to.resolveSibling(to.getFileName() + ".tmp");
-        Files.copy(from, tmp, StandardCopyOption.REPLACE_EXISTING);
-        Files.move(tmp, to, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        AtomicFile.write(to, tmp -> Files.copy(from, tmp, StandardCopyOption.REPLACE_EXISTING));
     }
 }

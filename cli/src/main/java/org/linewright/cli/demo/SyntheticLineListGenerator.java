@@ -7,7 +7,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.Paths;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -16,6 +15,7 @@ import org.apache.commons.compress.compressors.bzip2.BZip2CompressorOutputStream
 import org.linewright.ingest.hitran.HitranRecordWriter;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.units.PhysicalConstants;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * Generates the <b>synthetic</b> line lists of the linewright demo — invented data for the fictional warm
@@ -328,12 +328,12 @@ public final class SyntheticLineListGenerator {
 
     /** Writes the records bzip2-compressed, under a temporary name renamed when complete. */
     public static void writeBzip2(Path file, List<SyntheticLine> lines) throws IOException {
-        Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
-        try (OutputStream raw = Files.newOutputStream(tmp);
-             BZip2CompressorOutputStream bz = new BZip2CompressorOutputStream(raw)) {
-            new HitranRecordWriter().write(toBatch(lines), bz);
-        }
-        Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        AtomicFile.write(file, tmp -> {
+            try (OutputStream raw = Files.newOutputStream(tmp);
+                 BZip2CompressorOutputStream bz = new BZip2CompressorOutputStream(raw)) {
+                new HitranRecordWriter().write(toBatch(lines), bz);
+            }
+        });
     }
 
     private static void addCarbonMonoxideBand(List<SyntheticLine> lines, int iso, int vUpper, int vLower) {

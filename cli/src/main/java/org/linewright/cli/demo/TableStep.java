@@ -42,6 +42,9 @@ public final class TableStep implements DemoStep {
         details.add(String.format(Locale.ROOT, "blocks: %d computed, %d reused; %d lines in the stores; %.2f s",
                 report.computed(), report.reused(), report.linesInStores(), report.seconds()));
         details.add("table " + context.outDir().relativize(report.table()) + " sha256 " + report.written().fileSha256());
+        for (String warning : report.warnings()) {
+            details.add("warning: " + warning);
+        }
         return new StepOutcome(details, List.of(report.table(), plot));
     }
 }

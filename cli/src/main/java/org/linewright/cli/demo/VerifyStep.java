@@ -45,8 +45,9 @@ public final class VerifyStep implements DemoStep {
         Path plot = context.outDir().resolve(PLOT_FILE);
         VerificationPlot.write(report, plot);
         List<String> details = new ArrayList<>();
-        details.add(String.format(Locale.ROOT, "%d lines: %s", report.lines(),
-                report.passed() ? "all checks passed" : report.totalFindings() + " finding(s)"));
+        details.add(String.format(Locale.ROOT, "%d lines: %s (%s); internal consistency of S and A: robust spread %.1e",
+                report.lines(), report.passed() ? "passed" : "failed", report.severitySummary(),
+                report.consistency().robustSpread()));
         for (IsotopologueSummary s : report.isotopologues()) {
             details.add(String.format(Locale.ROOT, "%s %s: Q(296 K)/abundance from S and A %.6g, registry %.6g, "
                             + "largest line deviation %.1e", s.key(), s.name(), s.consensusQOverAbundance(),
@@ -57,6 +58,6 @@ public final class VerifyStep implements DemoStep {
                 details.add(c.id() + ": " + report.count(c) + " finding(s)");
             }
         }
-        return new StepOutcome(details, List.of(Path.of(REPORT_FILE), Path.of(PLOT_FILE)));
+        return new StepOutcome(details, List.of(reportFile, plot));
     }
 }

@@ -61,6 +61,17 @@ public final class CrossSectionPlot {
             XYSeries xy = chart.addSeries(s.label(), x, y);
             xy.setMarker(SeriesMarkers.NONE);
         }
+        double xMin = Double.POSITIVE_INFINITY;
+        double xMax = Double.NEGATIVE_INFINITY;
+        for (double v : x) {
+            xMin = Math.min(xMin, v);
+            xMax = Math.max(xMax, v);
+        }
+        PngCharts.roundXAxis(chart, xMin, xMax);
+        if (series.size() > 5) {
+            // many curves: the legend goes beside the plot rather than over it
+            chart.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.OutsideE);
+        }
         if (!anyPositive) {
             throw new IllegalArgumentException("cross-section plot: no positive value to draw on a log axis");
         }

@@ -10,8 +10,7 @@ import org.linewright.cli.plot.PlotStyle;
 import org.linewright.grid.table.CrossSectionTable;
 
 /**
- * Plots a built table: σ at every temperature for the middle pressure, and at every other pressure for the middle
- * temperature. Grids of more points than a picture has pixels are reduced to the largest σ of each group of
+ * Plots a built table: σ at every (p, T) of the table, one curve each. Grids of more points than a picture has pixels are reduced to the largest σ of each group of
  * neighbouring points (peaks stay visible).
  */
 public final class TablePlot {
@@ -29,20 +28,20 @@ public final class TablePlot {
     /** As {@link #write(CrossSectionTable, Path, String)}, with the x axis in wavelength (µm) when asked. */
     public static void write(CrossSectionTable table, Path png, String title, boolean wavelengthAxis) throws IOException {
         double[] nu = table.wavenumberCm1();
+        CrossSectionPlot.write(png, new PlotStyle(title, 1200, 650), reduceAxis(nu), series(table), wavelengthAxis);
+    }
+
+    /** The curves drawn: one per (p, T) of the table, pressures outer, temperatures inner. */
+    public static List<CrossSectionPlot.Series> series(CrossSectionTable table) throws IOException {
         double[] p = table.pressureBar();
         double[] t = table.temperatureK();
-        int pm = p.length / 2;
-        int tm = t.length / 2;
         List<CrossSectionPlot.Series> series = new ArrayList<>();
-        for (int j = 0; j < t.length; j++) {
-            series.add(new CrossSectionPlot.Series(label(p[pm], t[j]), reduce(table.sigma(pm, j))));
-        }
         for (int i = 0; i < p.length; i++) {
-            if (i != pm) {
-                series.add(new CrossSectionPlot.Series(label(p[i], t[tm]), reduce(table.sigma(i, tm))));
+            for (int j = 0; j < t.length; j++) {
+                series.add(new CrossSectionPlot.Series(label(p[i], t[j]), reduce(table.sigma(i, j))));
             }
         }
-        CrossSectionPlot.write(png, PlotStyle.of(title), reduceAxis(nu), series, wavelengthAxis);
+        return series;
     }
 
     private static String label(double pressureBar, double temperatureK) {

@@ -3,6 +3,7 @@ package org.linewright.cli.units;
 import java.util.Locale;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.units.PhysicalConstants;
+import org.linewright.ingest.text.OffendingText;
 
 /**
  * Parses physical quantities written by people: a decimal number, optional blanks, an optional unit.
@@ -123,14 +124,14 @@ public final class QuantityParser {
         String t = text.strip();
         int end = numberEnd(t);
         if (end == 0) {
-            throw new InputException('"' + text + "\" is not a " + quantity + " (expected a number with unit "
+            throw new InputException(OffendingText.quote(text) + " is not a " + quantity + " (expected a number with unit "
                     + units + ")");
         }
         double value;
         try {
             value = Double.parseDouble(t.substring(0, end));
         } catch (NumberFormatException e) {
-            throw new InputException('"' + text + "\" is not a " + quantity + " (expected a number with unit "
+            throw new InputException(OffendingText.quote(text) + " is not a " + quantity + " (expected a number with unit "
                     + units + ")", e);
         }
         return new Split(value, t.substring(end).strip().toLowerCase(Locale.ROOT));
@@ -178,12 +179,12 @@ public final class QuantityParser {
 
     private static void requirePositive(double value, String text, String quantity, String units) {
         if (!(value > 0.0) || Double.isInfinite(value)) {
-            throw new InputException('"' + text + "\" is not a positive, finite " + quantity
+            throw new InputException(OffendingText.quote(text) + " is not a positive, finite " + quantity
                     + " (expected a number greater than zero with unit " + units + ")");
         }
     }
 
     private static InputException unknownUnit(String text, String quantity, String units) {
-        return new InputException('"' + text + "\" has an unknown " + quantity + " unit (expected " + units + ")");
+        return new InputException(OffendingText.quote(text) + " has an unknown " + quantity + " unit (expected " + units + ")");
     }
 }

@@ -1,6 +1,7 @@
 package org.linewright.cli.demo;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -50,6 +51,34 @@ class DemoTest {
         assertTrue(Files.isRegularFile(out.resolve("tables/synthetic-subneptune.arrow.sha256")));
         assertTrue(ImageIO.read(out.resolve(TableStep.PLOT).toFile()).getWidth() > 0);
         assertTrue(html.contains("plots/cross-sections.png"), html);
+        // the plot draws every (p, T) of the table: 3 pressures x 3 temperatures (demo/plan.toml)
+        var curves = org.linewright.cli.table.TablePlot.series(table);
+        assertEquals(9, curves.size());
+        for (String expected : List.of("p = 0.00100 bar, T = 500 K", "p = 0.100 bar, T = 800 K", "p = 10.0 bar, T = 1100 K")) {
+            assertTrue(curves.stream().anyMatch(c -> c.label().equals(expected)), expected);
+        }
+        // every warning the table carries in its metadata (warning.1, warning.2, ...) is in both reports
+        List<String> warnings = table.metadata().entrySet().stream().filter(e -> e.getKey().startsWith("warning."))
+                .map(java.util.Map.Entry::getValue).toList();
+        assertFalse(warnings.isEmpty(), "the demo grid (step 0.01 cm-1) under-resolves its narrowest Doppler lines");
+        for (String w : warnings) {
+            assertTrue(text.contains("warning: " + w), w);
+            assertTrue(html.contains(w.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;")), w);
+        }
+    }
+
+    /** Every link and image of report.html names a file that exists, relative to the output folder (RFC 3986). */
+    private static void assertLinksResolve(Path out) throws IOException {
+        String html = Files.readString(out.resolve("report.html"));
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("(?:href|src)=\"([^\"]+)\"").matcher(html);
+        int links = 0;
+        while (m.find()) {
+            String target = m.group(1);
+            assertFalse(Paths.get(target).isAbsolute(), "a relative link: " + target);
+            assertTrue(Files.exists(out.resolve(target)), "link " + target + " resolves inside " + out);
+            links++;
+        }
+        assertTrue(links >= 6, "links found: " + links);
     }
 
     @Test
@@ -60,6 +89,7 @@ class DemoTest {
         DemoReport report = new Demo(SHIPPED, relative, Demo.availableSteps(), true).run(Demo.StepListener.NONE);
         assertEquals(Demo.availableSteps().size(), report.steps().size());
         assertTrue(Files.isRegularFile(relative.resolve("report.html")));
+        assertLinksResolve(relative);
     }
 
     @Test

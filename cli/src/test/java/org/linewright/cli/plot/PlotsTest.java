@@ -1,5 +1,6 @@
 package org.linewright.cli.plot;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -98,5 +99,42 @@ class PlotsTest {
                 new double[] {1, 2}, List.of(new CrossSectionPlot.Series("s", new double[] {1})), false));
         assertThrows(IllegalArgumentException.class, () -> new PlotStyle("tiny", 10, 10));
         assertTrue(Files.notExists(png));
+    }
+
+    /** Axis ends on multiples of a 1-2-5 step (common practice for tick marks) of about a tenth of the range. */
+    @Test
+    void axisEndsAreRound() {
+        assertArrayEquals(new double[] {2000, 2400}, PngCharts.roundRange(2000.025, 2399.975), 1e-9);
+        assertArrayEquals(new double[] {1500, 2400}, PngCharts.roundRange(1563.2, 2398.1), 1e-9);
+        assertArrayEquals(new double[] {2134, 2152}, PngCharts.roundRange(2135.546, 2150.856), 1e-9);
+        assertEquals(0.05, PngCharts.niceStep(0.031), 1e-15);
+        assertEquals(2.0, PngCharts.niceStep(1.2), 1e-15);
+        assertEquals(100.0, PngCharts.niceStep(84), 1e-12);
+        assertEquals(null, PngCharts.roundRange(5, 5));
+    }
+
+    /** Residual labels in a power of ten that is a multiple of 3 (engineering notation, common practice). */
+    @Test
+    void residualScaleMakesShortLabels() {
+        assertEquals(-6, ResidualPlot.displayExponent(List.of(new ResidualPlot.Series("a", new double[] {1, 2},
+                new double[] {6.5e-4, -2e-4}))));
+        assertEquals(-3, ResidualPlot.displayExponent(List.of(new ResidualPlot.Series("a", new double[] {1},
+                new double[] {1e-3}))));
+        assertEquals(0, ResidualPlot.displayExponent(List.of(new ResidualPlot.Series("a", new double[] {1},
+                new double[] {Double.NaN}))));
+    }
+
+    /** Two panels stack into one PNG of the style's size. */
+    @Test
+    void panelsStackIntoOnePng(@org.junit.jupiter.api.io.TempDir Path dir) throws IOException {
+        Path png = dir.resolve("p.png");
+        ResidualPlot.writePanels(png, new PlotStyle("two", 800, 600), List.of(
+                new ResidualPlot.Panel("x", "relative", List.of(new ResidualPlot.Series("a", new double[] {1, 2},
+                        new double[] {1e-4, -1e-4}))),
+                new ResidualPlot.Panel("x", "cm-1", List.of(new ResidualPlot.Series("b", new double[] {1.5},
+                        new double[] {2e-5})))));
+        var image = javax.imageio.ImageIO.read(png.toFile());
+        assertEquals(800, image.getWidth());
+        assertEquals(600, image.getHeight());
     }
 }

@@ -13,7 +13,7 @@ import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Set;
-import org.linewright.grid.table.AtomicFile;
+import org.linewright.ingest.atomic.AtomicFile;
 import org.linewright.grid.table.BlockResult;
 import org.linewright.ingest.InputException;
 

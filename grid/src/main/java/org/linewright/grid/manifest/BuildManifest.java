@@ -9,7 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Properties;
 import java.util.TreeMap;
-import org.linewright.grid.table.AtomicFile;
+import org.linewright.ingest.atomic.AtomicFile;
 import org.linewright.ingest.InputException;
 
 /**

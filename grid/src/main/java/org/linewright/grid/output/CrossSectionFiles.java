@@ -1,12 +1,11 @@
 package org.linewright.grid.output;
 
 import java.io.IOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Map;
 import org.linewright.grid.wavenumber.WavenumberGrid;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * Writes one cross section σ(ν) to a file in any {@link CrossSectionFormat}. Every writer writes a temporary
@@ -45,7 +44,7 @@ public final class CrossSectionFiles {
         if (dir != null) {
             Files.createDirectories(dir);
         }
-        Path partial = target.resolveSibling(".partial-" + target.getFileName());
+        Path partial = AtomicFile.temporaryPathFor(target);
         try {
             switch (format) {
                 case CSV -> CsvCrossSectionWriter.write(partial, grid.pointsCm1(), sigma);
@@ -53,11 +52,7 @@ public final class CrossSectionFiles {
                 case HDF5 -> Hdf5CrossSectionWriter.write(partial, grid.pointsCm1(), sigma, metadata);
                 default -> throw new AssertionError(format);
             }
-            try {
-                Files.move(partial, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(partial, target, StandardCopyOption.REPLACE_EXISTING);
-            }
+            AtomicFile.commit(partial, target);
         } finally {
             Files.deleteIfExists(partial);
         }

@@ -3,6 +3,7 @@ package org.linewright.grid.output;
 import java.nio.file.Path;
 import java.util.Locale;
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.text.OffendingText;
 
 /** File formats for one cross section. */
 public enum CrossSectionFormat {
@@ -40,7 +41,7 @@ public enum CrossSectionFormat {
             case "h5":
                 return HDF5;
             default:
-                throw new InputException("format '" + name + "': unknown (expected csv, arrow or hdf5)");
+                throw new InputException("format " + OffendingText.quote(name) + ": unknown (expected csv, arrow or hdf5)");
         }
     }
 

@@ -1,10 +1,8 @@
 package org.linewright.grid.plan;
 
 import java.io.IOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
@@ -19,6 +17,7 @@ import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.store.LineStore;
 import org.linewright.ingest.store.SourceInfo;
 import org.linewright.ingest.store.SourceMetadata;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * Turns a plan's line sources into line stores. A source that is a line-store folder is opened as it is; a raw
@@ -66,7 +65,7 @@ public final class LineCache {
             Path dir = sha256 == null ? null : entry(cacheDir, sha256);
             if (dir == null || !Files.isRegularFile(dir.resolve("linestore.properties"))) {
                 Files.createDirectories(cacheDir);
-                Path tmp = Files.createTempDirectory(cacheDir, ".partial-");
+                Path tmp = Files.createTempDirectory(cacheDir, AtomicFile.PARTIAL);
                 try {
                     IngestPipeline.run(List.of(source), tmp, IngestOptions.strict(lookup), listener);
                     String read = LineStore.open(tmp).sources().get(0).metadata().sourceSha256();
@@ -81,11 +80,7 @@ public final class LineCache {
                         reused++;
                     } else {
                         deleteTree(dir);
-                        try {
-                            Files.move(tmp, dir, StandardCopyOption.ATOMIC_MOVE);
-                        } catch (AtomicMoveNotSupportedException e) {
-                            Files.move(tmp, dir);
-                        }
+                        AtomicFile.rename(tmp, dir);
                         ingested++;
                     }
                 } finally {

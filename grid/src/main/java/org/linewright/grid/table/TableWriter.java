@@ -31,6 +31,7 @@ import org.apache.arrow.vector.types.pojo.FieldType;
 import org.apache.arrow.vector.types.pojo.Schema;
 import org.linewright.grid.plan.TablePlan;
 import org.linewright.ingest.store.SourceMetadata;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * Writes cross-section tables as Arrow IPC or HDF5 (see {@code docs/table-format.md}). Every write goes to a

@@ -6,8 +6,8 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import org.linewright.ingest.source.RejectSink;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * The rejects file of a lenient ingest: one tab-separated line per rejected record — source file, line number,
@@ -18,20 +18,19 @@ final class RejectsFile implements RejectSink, AutoCloseable {
     static final String HEADER = "# linewright rejected records: file<TAB>line<TAB>reason<TAB>record (verbatim)";
 
     private final Path target;
-    private final Path partial;
+    private Path partial;
     private BufferedWriter out;
     private long count;
 
     RejectsFile(Path target) {
         this.target = target.toAbsolutePath();
-        this.partial = this.target.resolveSibling("." + this.target.getFileName() + ".partial");
     }
 
     @Override
     public void reject(String file, long lineNumber, String record, String reason) {
         try {
             if (out == null) {
-                Files.createDirectories(partial.getParent());
+                partial = AtomicFile.temporaryFor(target);
                 out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8);
                 out.write(HEADER);
                 out.newLine();
@@ -61,7 +60,7 @@ final class RejectsFile implements RejectSink, AutoCloseable {
         }
         out.close();
         out = null;
-        Files.move(partial, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        AtomicFile.commit(partial, target);
         return target;
     }
 

@@ -2,12 +2,14 @@ package org.linewright.ingest.source;
 
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.text.ByteLineScanner;
+import org.linewright.ingest.text.OffendingText;
 
 /**
  * Bad input, located exactly: the file, the 1-based line, the 1-based column range, the field, the
  * offending text and what was expected. {@link #getMessage()} is the one line shown to the user, e.g.
  * {@code lines.par:12:cols 4-15: field wavenumber: "12.3x4" is not a number (expected F12.6)}.
- * Problems that concern a whole file (empty, wrong format, corrupt compression) use line 0 and no columns.
+ * Problems that concern a whole file (empty, wrong format, corrupt compression) use line 0 and no columns. The
+ * offending text is escaped and cut by {@link OffendingText}.
  */
 public final class LineFormatException extends InputException {
     private final String file;
@@ -77,17 +79,12 @@ public final class LineFormatException extends InputException {
             sb.append("field ").append(field).append(": ");
         }
         if (text != null) {
-            sb.append('"').append(sanitize(text)).append('"').append(' ');
+            sb.append(OffendingText.quote(text)).append(' ');
         }
         if (expected != null) {
             sb.append(text != null ? "(expected " + expected + ")" : expected);
         }
         return sb.toString().trim();
-    }
-
-    private static String sanitize(String text) {
-        String oneLine = text.replace("\r", "\\r").replace("\n", "\\n");
-        return oneLine.length() > 80 ? oneLine.substring(0, 77) + "..." : oneLine;
     }
 
     public String file() { return file; }

@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.nio.channels.FileChannel;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.List;
@@ -20,6 +19,7 @@ import org.apache.arrow.vector.types.pojo.Field;
 import org.apache.arrow.vector.types.pojo.FieldType;
 import org.apache.arrow.vector.types.pojo.Schema;
 import org.linewright.ingest.line.LineBatch;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * Writes selected lines to a stand-alone Arrow IPC file: every column of the line store's layout, followed by
@@ -45,7 +45,7 @@ public final class LineExportWriter implements AutoCloseable {
      */
     public LineExportWriter(Path target, Map<String, String> extraColumns, Map<String, String> metadata) throws IOException {
         this.target = target.toAbsolutePath();
-        this.partial = this.target.resolveSibling("." + this.target.getFileName() + ".partial");
+        this.partial = AtomicFile.temporaryPathFor(this.target);
         Schema base = StoreColumns.schema(metadata);
         List<Field> fields = new ArrayList<>(base.getFields());
         firstExtra = fields.size();
@@ -90,7 +90,7 @@ public final class LineExportWriter implements AutoCloseable {
         writer.end();
         channel.force(true);
         release();
-        Files.move(partial, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        AtomicFile.rename(partial, target);
         committed = true;
     }
 

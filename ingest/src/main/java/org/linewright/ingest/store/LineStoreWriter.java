@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.time.Instant;
@@ -20,6 +19,7 @@ import java.util.UUID;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.line.TextColumn;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * Writes the lines of one source into a line store as one Arrow IPC file sorted by wavenumber (stable for
@@ -49,7 +49,7 @@ public final class LineStoreWriter implements AutoCloseable {
     static final int OUTPUT_BATCH_LINES = 65_536;
     /** Lines per record batch of the temporary runs (small, so that the merge reads them in small steps). */
     static final int SPILL_BATCH_LINES = 8_192;
-    private static final String PARTIAL_PREFIX = ".partial-";
+    private static final String PARTIAL_PREFIX = AtomicFile.PARTIAL;
     /** Heap the merge's per-run slices may use together. */
     private static final long MERGE_HEAP_BYTES = 96L << 20;
     /** Heap per line of a {@link LineBatch} (numeric columns plus typical texts), for sizing slices. */
@@ -268,7 +268,7 @@ public final class LineStoreWriter implements AutoCloseable {
                 finished = mergeRuns(completion);
             }
             Path target = storeDir.resolve(fileName(sourceName));
-            Files.move(finished.path(), target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            AtomicFile.rename(finished.path(), target);
             StoreIndex.syncDirectory(storeDir);
             SourceInfo info = StoreIndex.locked(storeDir, () -> {
                 TreeMap<String, StoreIndex.Entry> entries = StoreIndex.read(storeDir);

@@ -7,12 +7,11 @@ import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.util.Properties;
 import java.util.TreeMap;
-import java.util.UUID;
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.atomic.AtomicFile;
 
 /**
  * The store index {@value #FILE_NAME}: a Java properties file (self-explaining, with a comment header) that
@@ -84,7 +83,7 @@ final class StoreIndex {
             line(sb, k + "source_sha256", e.sha256());
             line(sb, k + "reader_format", e.format());
         }
-        Path tmp = storeDir.resolve(".partial-index-" + UUID.randomUUID());
+        Path tmp = AtomicFile.temporaryPathFor(storeDir.resolve(FILE_NAME));
         try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE)) {
             ch.write(java.nio.ByteBuffer.wrap(sb.toString().getBytes(StandardCharsets.UTF_8)));
             ch.force(true);
@@ -92,7 +91,7 @@ final class StoreIndex {
             Files.deleteIfExists(tmp);
             throw e;
         }
-        Files.move(tmp, storeDir.resolve(FILE_NAME), StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        AtomicFile.rename(tmp, storeDir.resolve(FILE_NAME));
         syncDirectory(storeDir);
     }
 

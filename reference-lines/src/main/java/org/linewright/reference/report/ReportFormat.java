@@ -3,6 +3,7 @@ package org.linewright.reference.report;
 import java.util.Locale;
 
 import org.linewright.ingest.InputException;
+import org.linewright.ingest.text.OffendingText;
 
 /** The forms of a report: for people ({@code text}) or for programs ({@code csv}, {@code json}). */
 public enum ReportFormat {
@@ -13,7 +14,7 @@ public enum ReportFormat {
         try {
             return valueOf(id.toUpperCase(Locale.ROOT));
         } catch (IllegalArgumentException e) {
-            throw new InputException("--format: \"" + id + "\" (expected text, csv or json)");
+            throw new InputException("--format: " + OffendingText.quote(id) + " (expected text, csv or json)");
         }
     }
 

@@ -1,10 +1,10 @@
 package org.linewright.reference.verify;
 
-/** The checks of {@link LineListVerifier}; each failing line becomes a {@link Finding} of one check. */
+/** What a {@link Finding} is about; each finding names one of these and a {@link Severity}. */
 public enum Check {
-    /** A line's S and A disagree, with its isotopologue's consensus Q(296 K)/abundance, beyond the tolerance. */
+    /** A line's S and A disagree with its isotopologue's consensus Q(296 K)/abundance ({@link IntensityRelationCheck}). */
     INTENSITY_RELATION("intensity-relation"),
-    /** An isotopologue's lines imply a Q(296 K)/abundance unlike the registry's. */
+    /** An isotopologue's lines imply a Q(296 K)/abundance unlike the registry's, or the registry lacks it. */
     REGISTRY_VALUES("registry-values"),
     /** A required value is NaN. */
     NAN_VALUE("nan"),

@@ -8,6 +8,7 @@ import java.util.Arrays;
  * below and above. The median is the centre of its bin, so it is exact to ±{@value #BIN_WIDTH}/2 relative when it
  * falls inside the range. Otherwise (the lines disagree with the centre by more than 10 %, e.g. another
  * partition-sum convention) the median of an evenly thinned sample of at most {@value #SAMPLE} values stands in.
+ * The same counts give the robust spread (scaled median absolute deviation, {@link #robustSpread()}).
  */
 final class ConsensusHistogram {
     static final double HALF_RANGE = 0.1;
@@ -46,6 +47,59 @@ final class ConsensusHistogram {
 
     long total() {
         return total;
+    }
+
+    /**
+     * The robust spread of ln(value): 1.4826 × the median absolute deviation from the median (Hampel 1974, JASA 69,
+     * 383; the factor makes it equal to σ for normally distributed values), resolved to {@value #BIN_WIDTH}, from
+     * the histogram when the median lies inside it (values outside count as farther than any bin), else from the
+     * thinned sample; NaN when nothing was added. For small relative deviations ln(v/m) ≈ v/m − 1, so this is
+     * the relative spread.
+     */
+    double robustSpread() {
+        if (total == 0) {
+            return Double.NaN;
+        }
+        long rank = (total + 1) / 2;
+        int medianBin = medianBin(rank);
+        if (medianBin < 0) {
+            double[] values = sample.x();
+            Arrays.sort(values);
+            double median = values[(values.length - 1) / 2];
+            double[] dev = new double[values.length];
+            for (int i = 0; i < values.length; i++) {
+                dev[i] = Math.abs(Math.log(values[i] / median));
+            }
+            Arrays.sort(dev);
+            return MAD_TO_SIGMA * dev[(dev.length - 1) / 2];
+        }
+        long seen = counts[medianBin];
+        for (int d = 0; d < BINS; d++) {
+            if (seen >= rank) {
+                return MAD_TO_SIGMA * d * BIN_WIDTH;
+            }
+            seen += (medianBin - d - 1 >= 0 ? counts[medianBin - d - 1] : 0)
+                    + (medianBin + d + 1 < BINS ? counts[medianBin + d + 1] : 0);
+        }
+        return Double.POSITIVE_INFINITY;
+    }
+
+    /** 1/Φ⁻¹(3/4): turns a median absolute deviation into σ for normal data. */
+    static final double MAD_TO_SIGMA = 1.4826;
+
+    /** The histogram bin holding the value of rank {@code rank}, or −1 when it lies outside the histogram. */
+    private int medianBin(long rank) {
+        if (rank <= below || rank > total - above) {
+            return -1;
+        }
+        long seen = below;
+        for (int k = 0; k < BINS; k++) {
+            seen += counts[k];
+            if (seen >= rank) {
+                return k;
+            }
+        }
+        return -1;
     }
 
     /**

@@ -11,7 +11,8 @@ import java.util.Locale;
 /**
  * Modified copies of 160-character records for tests, written into temporary folders (the shared samples stay
  * untouched and are never copied into the repository). Field columns of the format (common practice): molecule
- * 1–2, isotopologue 3, wavenumber 4–15 (F12.6), intensity 16–25 (E10.3), Einstein A 26–35 (E10.3).
+ * 1–2, isotopologue 3, wavenumber 4–15 (F12.6), intensity 16–25 (E10.3), Einstein A 26–35 (E10.3), upper and
+ * lower global quanta 68–82 and 83–97 (15 characters each).
  */
 public final class ParFiles {
     private ParFiles() {
@@ -50,5 +51,20 @@ public final class ParFiles {
             throw new IllegalArgumentException("intensity does not fit E10.3: " + field);
         }
         return record.substring(0, 15) + field + record.substring(25);
+    }
+
+    /** The isotopologue field (column 3) of a record. */
+    public static char isotopologue(String record) {
+        return record.charAt(2);
+    }
+
+    /** The upper global quanta of a record, trimmed. */
+    public static String upperGlobal(String record) {
+        return record.substring(67, 82).trim();
+    }
+
+    /** The lower global quanta of a record, trimmed. */
+    public static String lowerGlobal(String record) {
+        return record.substring(82, 97).trim();
     }
 }
