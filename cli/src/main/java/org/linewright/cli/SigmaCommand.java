@@ -118,8 +118,7 @@ public final class SigmaCommand implements Callable<Integer> {
     private double tolerance;
 
     @Option(names = "--shape", paramLabel = "SHAPE", defaultValue = "voigt",
-            description = "Line shape: voigt, doppler, lorentz or vvw (Van Vleck-Weisskopf for every line); with voigt or lorentz, "
-                    + "low-frequency lines with gamma_L/nu0 > 1e-4 get the Van Vleck-Weisskopf shape (default ${DEFAULT-VALUE}).")
+            description = "Line shape: voigt, doppler or lorentz (default ${DEFAULT-VALUE}).")
     private String shape;
 
     @Option(names = "--threshold", paramLabel = "S", defaultValue = "0",
