@@ -167,6 +167,10 @@ class VoigtProfileTest {
             grid[i] = 100 + 0.01 * (i - 5);
         }
         for (LineShapeKind kind : LineShapeKind.values()) {
+            if (kind == LineShapeKind.VAN_VLECK_WEISSKOPF) {
+                // its array kernel depends on the centre, not the detuning only: VanVleckWeisskopfProfileTest
+                continue;
+            }
             double[] out = new double[11];
             kind.addProfile(grid, 2, 9, 100.0, 0.004, 0.003, 3.0, out);
             assertEquals(0.0, out[0]);
