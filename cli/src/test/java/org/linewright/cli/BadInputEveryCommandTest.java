@@ -133,7 +133,7 @@ class BadInputEveryCommandTest {
                 v.add(new String[] {"bogus"});
                 v.add(new String[] {text});
             }
-            case "--molecule-data" -> {
+            case "--molecule-data", "--catalog-partition" -> {
                 v.add(new String[] {missing.toString()});
                 v.add(new String[] {garbage.toString()});
             }

@@ -94,7 +94,8 @@ class LineListVerifierFaultTest {
             assertEquals(ParFiles.wavenumber(record), f.wavenumberCm1(), 0.0);
             // consensus/registry = 1/1.015 to the registry's 2e-3 (README)
             assertEquals(1 / 1.015, f.value() / f.expected(), 2.5e-3, f.message());
-            assertTrue(f.message().contains("registry provenance: samples"), f.message());
+            // the message names the registry row's sources and how the samples confirm them
+            assertTrue(f.message().contains("registry provenance: ") && f.message().contains("HITRAN2020 sample"), f.message());
             assertTrue(f.message().contains("co2-wrong-q.par"), f.message());
         }
     }
