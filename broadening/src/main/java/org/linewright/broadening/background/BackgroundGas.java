@@ -1,6 +1,7 @@
 package org.linewright.broadening.background;
 
 import java.util.Locale;
+import org.linewright.ingest.line.Broadener;
 
 /**
  * The gases a background {@link Composition} may contain. {@link #SELF} stands for the absorber itself
@@ -31,6 +32,21 @@ public enum BackgroundGas {
             }
         }
         return null;
+    }
+
+    /**
+     * The line-list broadener whose per-line columns (width, exponent, shift) belong to this gas, or null for a
+     * gas no line list carries columns for (air and self have their own columns; N2 and O2 none). The one home
+     * of the gas-to-column mapping.
+     */
+    public Broadener lineBroadener() {
+        return switch (this) {
+            case H2 -> Broadener.H2;
+            case HE -> Broadener.HE;
+            case CO2 -> Broadener.CO2;
+            case H2O -> Broadener.H2O;
+            default -> null;
+        };
     }
 
     /** Lower-case name as written in options and reports, e.g. {@code h2o}. */

@@ -286,13 +286,11 @@ public final class WidthResolver {
     }
 
     private static Broadener broadener(BackgroundGas gas) {
-        switch (gas) {
-            case H2: return Broadener.H2;
-            case HE: return Broadener.HE;
-            case CO2: return Broadener.CO2;
-            case H2O: return Broadener.H2O;
-            default: throw new AssertionError(gas);
+        Broadener b = gas.lineBroadener();
+        if (b == null) {
+            throw new AssertionError(gas);
         }
+        return b;
     }
 
     private InputException missing(LineBatch b, int i, BackgroundGas gas, String what) {

@@ -105,7 +105,7 @@ public final class CrossSectionCalculator {
      * every broadener, the J and K numbers the broadening rules and tables use, the source line for messages.
      * A request reads only those of its background's gases ({@link #columnsFor}).
      */
-    static final Set<LineColumn> PHYSICS_COLUMNS = physicsColumns();
+    static final Set<LineColumn> PHYSICS_COLUMNS = LineQuery.CROSS_SECTION_COLUMNS;
     /** HITRAN molecule number of CO2 (common practice), whose lines the CO2 χ factor applies to. */
     static final int CO2_MOLECULE_ID = 2;
 
@@ -329,17 +329,10 @@ public final class CrossSectionCalculator {
      */
     static Set<LineColumn> columnsFor(Composition composition) {
         EnumSet<LineColumn> set = EnumSet.copyOf(PHYSICS_COLUMNS);
-        if (!(composition.fraction(BackgroundGas.H2) > 0)) {
-            set.removeAll(List.of(LineColumn.H2_WIDTH, LineColumn.H2_WIDTH_EXPONENT, LineColumn.H2_SHIFT));
-        }
-        if (!(composition.fraction(BackgroundGas.HE) > 0)) {
-            set.removeAll(List.of(LineColumn.HE_WIDTH, LineColumn.HE_WIDTH_EXPONENT, LineColumn.HE_SHIFT));
-        }
-        if (!(composition.fraction(BackgroundGas.CO2) > 0)) {
-            set.removeAll(List.of(LineColumn.CO2_WIDTH, LineColumn.CO2_WIDTH_EXPONENT, LineColumn.CO2_SHIFT));
-        }
-        if (!(composition.fraction(BackgroundGas.H2O) > 0)) {
-            set.removeAll(List.of(LineColumn.H2O_WIDTH, LineColumn.H2O_WIDTH_EXPONENT, LineColumn.H2O_SHIFT));
+        for (BackgroundGas gas : BackgroundGas.values()) {
+            if (gas.lineBroadener() != null && !(composition.fraction(gas) > 0)) {
+                set.removeAll(List.of(LineColumn.foreignColumns(gas.lineBroadener())));
+            }
         }
         return set;
     }
@@ -926,17 +919,6 @@ public final class CrossSectionCalculator {
     /**
      * Every numeric column but those no physics reads (lower degeneracy, upper energy, position uncertainty).
      */
-    private static Set<LineColumn> physicsColumns() {
-        EnumSet<LineColumn> set = EnumSet.noneOf(LineColumn.class);
-        for (LineColumn c : LineColumn.values()) {
-            if (c.kind() != LineColumn.Kind.TEXT) {
-                set.add(c);
-            }
-        }
-        set.removeAll(List.of(LineColumn.LOWER_DEGENERACY, LineColumn.UPPER_ENERGY,
-                LineColumn.WAVENUMBER_UNCERTAINTY));
-        return Collections.unmodifiableSet(set);
-    }
 
     /** Keeps rows [from, to) of the batch's projected columns, moved to the front. */
     private static void compact(LineBatch b, Set<LineColumn> columns, int from, int to) {

@@ -80,16 +80,22 @@ public final class HitranDelimitedReader extends RecordPerLineReader implements 
         }
     }
 
-    private static final Parameter[] FOREIGN_WIDTH = {Parameter.GAMMA_H2, Parameter.GAMMA_HE, Parameter.GAMMA_CO2, Parameter.GAMMA_H2O};
-    private static final Parameter[] FOREIGN_EXPONENT = {Parameter.N_H2, Parameter.N_HE, Parameter.N_CO2, Parameter.N_H2O};
-    private static final Parameter[] FOREIGN_SHIFT = {Parameter.DELTA_H2, Parameter.DELTA_HE, Parameter.DELTA_CO2, Parameter.DELTA_H2O};
+    // A foreign broadener's header names follow from its column prefix (gamma_h2, n_h2, delta_h2), so the
+    // broadener list lives in Broadener alone; indexed by Broadener.ordinal().
+    private static final Parameter[] FOREIGN_WIDTH = foreignParameters("gamma_");
+    private static final Parameter[] FOREIGN_EXPONENT = foreignParameters("n_");
+    private static final Parameter[] FOREIGN_SHIFT = foreignParameters("delta_");
 
-    static {
-        // the tables above follow the storage order of Broadener
-        if (Broadener.values().length != FOREIGN_WIDTH.length || Broadener.H2.ordinal() != 0 || Broadener.HE.ordinal() != 1
-                || Broadener.CO2.ordinal() != 2 || Broadener.H2O.ordinal() != 3) {
-            throw new ExceptionInInitializerError("Broadener order changed");
+    private static Parameter[] foreignParameters(String headerPrefix) {
+        Broadener[] broadeners = Broadener.values();
+        Parameter[] parameters = new Parameter[broadeners.length];
+        for (Broadener b : broadeners) {
+            parameters[b.ordinal()] = Parameter.byHeader(headerPrefix + b.columnPrefix());
+            if (parameters[b.ordinal()] == null) {
+                throw new ExceptionInInitializerError("no delimited header " + headerPrefix + b.columnPrefix());
+            }
         }
+        return parameters;
     }
 
     private final byte delimiter;

@@ -21,14 +21,24 @@ import org.linewright.ingest.line.LineColumn;
  */
 public final class LineQuery {
     /**
-     * The columns a cross-section engine needs: identity, position, intensity, lower-state energy, the air,
-     * self and foreign widths with their temperature exponents, and the air shift.
+     * The columns a cross-section engine needs: every numeric column (identity, position, intensity, lower-state
+     * energy, the air, self and foreign widths with their exponents and shifts, …) but the lower-state degeneracy,
+     * the upper-state energy and the position uncertainty. The one definition, used by the calculator and the
+     * listings alike.
      */
-    public static final Set<LineColumn> CROSS_SECTION_COLUMNS = Collections.unmodifiableSet(EnumSet.of(
-            LineColumn.MOLECULE, LineColumn.ISOTOPOLOGUE, LineColumn.WAVENUMBER, LineColumn.INTENSITY,
-            LineColumn.LOWER_ENERGY, LineColumn.AIR_WIDTH, LineColumn.SELF_WIDTH, LineColumn.AIR_WIDTH_EXPONENT,
-            LineColumn.AIR_SHIFT, LineColumn.H2_WIDTH, LineColumn.H2_WIDTH_EXPONENT, LineColumn.HE_WIDTH,
-            LineColumn.HE_WIDTH_EXPONENT, LineColumn.CO2_WIDTH, LineColumn.CO2_WIDTH_EXPONENT));
+    public static final Set<LineColumn> CROSS_SECTION_COLUMNS = crossSectionColumns();
+
+    private static Set<LineColumn> crossSectionColumns() {
+        EnumSet<LineColumn> set = EnumSet.noneOf(LineColumn.class);
+        for (LineColumn c : LineColumn.values()) {
+            if (c.kind() != LineColumn.Kind.TEXT) {
+                set.add(c);
+            }
+        }
+        set.removeAll(EnumSet.of(LineColumn.LOWER_DEGENERACY, LineColumn.UPPER_ENERGY,
+                LineColumn.WAVENUMBER_UNCERTAINTY));
+        return Collections.unmodifiableSet(set);
+    }
 
     private static final LineQuery ALL = new LineQuery(Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY,
             new int[0], new long[0], EnumSet.allOf(LineColumn.class));
