@@ -16,6 +16,11 @@ public record FixedCutoff(double distanceCm1) implements WingCutoff {
     }
 
     @Override
+    public double maxDistanceCm1(double pressureAtm) {
+        return distanceCm1;
+    }
+
+    @Override
     public double distanceCm1(double dopplerHwhmCm1, double lorentzHwhmCm1, double pressureAtm) {
         return distanceCm1;
     }

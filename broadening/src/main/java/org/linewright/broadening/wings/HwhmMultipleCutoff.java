@@ -22,6 +22,11 @@ public record HwhmMultipleCutoff(double multiple, double maxDistanceCm1) impleme
     }
 
     @Override
+    public double maxDistanceCm1(double pressureAtm) {
+        return maxDistanceCm1;
+    }
+
+    @Override
     public double distanceCm1(double dopplerHwhmCm1, double lorentzHwhmCm1, double pressureAtm) {
         return Math.min(maxDistanceCm1, multiple * VoigtWidth.hwhmCm1(dopplerHwhmCm1, lorentzHwhmCm1));
     }

@@ -12,6 +12,11 @@ public final class NoCutoff implements WingCutoff {
     }
 
     @Override
+    public double maxDistanceCm1(double pressureAtm) {
+        return Double.POSITIVE_INFINITY;
+    }
+
+    @Override
     public double distanceCm1(double dopplerHwhmCm1, double lorentzHwhmCm1, double pressureAtm) {
         return Double.POSITIVE_INFINITY;
     }

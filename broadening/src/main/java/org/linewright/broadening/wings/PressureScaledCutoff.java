@@ -26,6 +26,11 @@ public record PressureScaledCutoff(double distancePerAtmCm1, double minDistanceC
     }
 
     @Override
+    public double maxDistanceCm1(double pressureAtm) {
+        return Math.min(maxDistanceCm1, Math.max(minDistanceCm1, distancePerAtmCm1 * pressureAtm));
+    }
+
+    @Override
     public double distanceCm1(double dopplerHwhmCm1, double lorentzHwhmCm1, double pressureAtm) {
         return Math.min(maxDistanceCm1, Math.max(minDistanceCm1, distancePerAtmCm1 * pressureAtm));
     }

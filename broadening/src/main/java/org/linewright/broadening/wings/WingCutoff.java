@@ -22,6 +22,15 @@ public interface WingCutoff {
      */
     double distanceCm1(double dopplerHwhmCm1, double lorentzHwhmCm1, double pressureAtm);
 
+    /**
+     * The largest distance this policy gives any line at one pressure: what a caller needs to know how far a line
+     * can reach without asking for each line's widths.
+     *
+     * @param pressureAtm total pressure in atm
+     * @return the bound in cm⁻¹; {@link Double#POSITIVE_INFINITY} when the policy has none
+     */
+    double maxDistanceCm1(double pressureAtm);
+
     /** @return metadata describing this policy (keys {@code wing.cutoff.rule} and rule parameters) */
     Map<String, String> describe();
 

@@ -51,4 +51,34 @@ class WingCutoffTest {
         assertThrows(IllegalArgumentException.class, () -> WingCutoff.hwhmMultiple(-1, 25));
         assertThrows(IllegalArgumentException.class, () -> WingCutoff.pressureScaled(1, 10, 5));
     }
+
+    /**
+     * The bound a policy reports is reached and never exceeded: over widths from pure Doppler to pure Lorentz
+     * (10⁻⁴ to 10² cm⁻¹) and pressures 10⁻³ to 10³ atm, every line's distance is at most the bound, and for the
+     * fixed and pressure rules every line gets exactly the bound (the rules as defined in WingCutoff).
+     */
+    @Test
+    void maxDistanceBoundsEveryLineDistance() {
+        WingCutoff[] policies = {WingCutoff.fixed(25), WingCutoff.hwhmMultiple(50, 25), WingCutoff.pressureScaled(2, 1, 25),
+            WingCutoff.none()};
+        double[] widths = {1e-4, 1e-3, 1e-2, 0.1, 1, 10, 100};
+        double[] pressures = {1e-3, 0.1, 1, 10, 1e3};
+        for (WingCutoff c : policies) {
+            for (double p : pressures) {
+                double bound = c.maxDistanceCm1(p);
+                double largest = 0;
+                for (double aD : widths) {
+                    for (double gL : widths) {
+                        double d = c.distanceCm1(aD, gL, p);
+                        largest = Math.max(largest, d);
+                        org.junit.jupiter.api.Assertions.assertTrue(d <= bound, c + " at " + p + " atm: " + d + " > " + bound);
+                        if (!c.dependsOnWidths()) {
+                            assertEquals(bound, d, 0.0, c + " at " + p + " atm");
+                        }
+                    }
+                }
+                assertEquals(bound, largest, 0.0, c + " at " + p + " atm: the bound is reached by some line");
+            }
+        }
+    }
 }

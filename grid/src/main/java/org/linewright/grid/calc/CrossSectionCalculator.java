@@ -33,9 +33,6 @@ import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.width.DopplerWidth;
 import org.linewright.broadening.width.PressureBroadening;
 import org.linewright.broadening.wings.ChiFactorKind;
-import org.linewright.broadening.wings.FixedCutoff;
-import org.linewright.broadening.wings.HwhmMultipleCutoff;
-import org.linewright.broadening.wings.PressureScaledCutoff;
 import org.linewright.broadening.wings.WingCutoff;
 import org.linewright.broadening.wings.WingKernel;
 import org.linewright.grid.engine.CrossSectionEngine;
@@ -310,17 +307,7 @@ public final class CrossSectionCalculator {
      * policy is unbounded or unknown).
      */
     static double maxCutoffCm1(WingCutoff cutoff, double pressureAtm) {
-        if (cutoff instanceof FixedCutoff f) {
-            return f.distanceCm1();
-        }
-        if (cutoff instanceof HwhmMultipleCutoff h) {
-            return h.maxDistanceCm1();
-        }
-        if (cutoff instanceof PressureScaledCutoff ps) {
-            // independent of the widths: d = min(max, max(min, k·p))
-            return ps.distanceCm1(0.0, 0.0, pressureAtm);
-        }
-        return Double.POSITIVE_INFINITY;
+        return cutoff.maxDistanceCm1(pressureAtm);
     }
 
     /**
