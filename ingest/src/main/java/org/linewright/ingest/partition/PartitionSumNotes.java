@@ -1,5 +1,6 @@
 package org.linewright.ingest.partition;
 
+import org.linewright.ingest.registry.SpeciesKey;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
@@ -36,7 +37,7 @@ public record PartitionSumNotes(List<String> sources, List<String> warnings, Map
         for (LineStore store : stores) {
             for (SourceInfo s : store.sources()) {
                 for (IsotopologueLookup.Id id : s.isotopologues()) {
-                    ids.add(((long) id.moleculeId() << 32) | id.isotopologue());
+                    ids.add(SpeciesKey.of(id.moleculeId(), id.isotopologue()));
                 }
             }
         }
@@ -44,8 +45,8 @@ public record PartitionSumNotes(List<String> sources, List<String> warnings, Map
         List<String> warnings = new ArrayList<>();
         Map<String, String> metadata = new LinkedHashMap<>();
         for (long key : ids) {
-            int mol = (int) (key >>> 32);
-            int iso = (int) key;
+            int mol = SpeciesKey.molecule(key);
+            int iso = SpeciesKey.isotopologue(key);
             String source = withData.partitionSumSource(mol, iso, temperatureK);
             if (!source.isEmpty()) {
                 sources.add(String.format(Locale.ROOT, "Q(%.6g K) of %d/%d: %s", temperatureK, mol, iso, source));

@@ -1,5 +1,6 @@
 package org.linewright.ingest.partition;
 
+import org.linewright.ingest.registry.SpeciesKey;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.HashMap;
@@ -289,6 +290,6 @@ public final class PartitionSums implements PartitionSumSource {
     }
 
     private static long key(int moleculeId, int isotopologue) {
-        return ((long) moleculeId << 32) | (isotopologue & 0xffffffffL);
+        return SpeciesKey.of(moleculeId, isotopologue);
     }
 }

@@ -1,5 +1,6 @@
 package org.linewright.ingest.partition;
 
+import org.linewright.ingest.registry.SpeciesKey;
 import java.util.HashMap;
 import java.util.Map;
 import org.linewright.ingest.registry.AtomicMasses;
@@ -174,7 +175,7 @@ final class PolyatomicModel {
     }
 
     private static long key(int mol, int iso) {
-        return ((long) mol << 32) | iso;
+        return SpeciesKey.of(mol, iso);
     }
 
     private static double[] r(double... x) {

@@ -1,5 +1,6 @@
 package org.linewright.ingest.store;
 
+import org.linewright.ingest.registry.SpeciesKey;
 import java.io.IOException;
 import java.nio.channels.FileChannel;
 import java.nio.file.Files;
@@ -130,7 +131,7 @@ final class ArrowLineFileWriter implements AutoCloseable {
                 if (lastMol >= 0 && lastIso >= 0 && lastIso < ISO_SLOTS && lastMol < Integer.MAX_VALUE / ISO_SLOTS) {
                     isotopologueBits.set(lastMol * ISO_SLOTS + lastIso);
                 } else {
-                    otherIsotopologues.add(((long) lastMol << 32) | (lastIso & 0xffffffffL));
+                    otherIsotopologues.add(SpeciesKey.of(lastMol, lastIso));
                 }
             }
         }
@@ -200,7 +201,7 @@ final class ArrowLineFileWriter implements AutoCloseable {
             sb.append(sb.length() > 0 ? " " : "").append(k / ISO_SLOTS).append('/').append(k % ISO_SLOTS);
         }
         for (long key : otherIsotopologues) {
-            sb.append(sb.length() > 0 ? " " : "").append((int) (key >> 32)).append('/').append((int) key);
+            sb.append(sb.length() > 0 ? " " : "").append(SpeciesKey.label(key));
         }
         return sb.toString();
     }

@@ -1,5 +1,6 @@
 package org.linewright.ingest.store;
 
+import org.linewright.ingest.registry.SpeciesKey;
 import java.util.Arrays;
 import java.util.Collection;
 import java.util.Collections;
@@ -131,7 +132,7 @@ public final class LineQuery {
     }
 
     private static long key(int moleculeId, int isotopologue) {
-        return ((long) moleculeId << 32) | (isotopologue & 0xffffffffL);
+        return SpeciesKey.of(moleculeId, isotopologue);
     }
 
     @Override

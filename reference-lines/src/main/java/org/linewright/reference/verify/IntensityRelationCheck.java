@@ -1,5 +1,6 @@
 package org.linewright.reference.verify;
 
+import org.linewright.ingest.registry.SpeciesKey;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
@@ -283,7 +284,7 @@ final class IntensityRelationCheck implements LineCheck {
     }
 
     private Species species(int molecule, int isotopologue) {
-        long key = ((long) molecule << 32) | (isotopologue & 0xffffffffL);
+        long key = SpeciesKey.of(molecule, isotopologue);
         if (last != null && last.key == key) {
             return last;
         }
