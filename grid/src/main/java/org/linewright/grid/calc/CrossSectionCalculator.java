@@ -23,6 +23,7 @@ import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.linewright.broadening.background.BackgroundGas;
+import org.linewright.broadening.intensity.CompensatedSum;
 import org.linewright.broadening.background.Composition;
 import org.linewright.broadening.intensity.LineIntensity;
 import org.linewright.broadening.isotopologue.IsotopologueCache;
@@ -623,10 +624,10 @@ public final class CrossSectionCalculator {
         long linesUsed;
         long linesBelowThreshold;
         long linesWithoutWidth;
-        final Sum totalIntensity = new Sum();
-        final Sum droppedIntensity = new Sum();
-        final Sum usedIntensity = new Sum();
-        final Sum lostIntensity = new Sum();
+        final CompensatedSum totalIntensity = new CompensatedSum();
+        final CompensatedSum droppedIntensity = new CompensatedSum();
+        final CompensatedSum usedIntensity = new CompensatedSum();
+        final CompensatedSum lostIntensity = new CompensatedSum();
         /** Smallest HWHM / local grid spacing of the lines centred on the grid, and that line's widths and spacing. */
         double worstResolution = Double.POSITIVE_INFINITY;
         double worstHwhmCm1 = Double.NaN;
@@ -961,22 +962,6 @@ public final class CrossSectionCalculator {
         @Override
         public synchronized double partitionSum(int moleculeId, int isotopologue, double temperatureK) {
             return delegate.partitionSum(moleculeId, isotopologue, temperatureK);
-        }
-    }
-
-    /** Neumaier-compensated running sum (line intensities span many decades). */
-    private static final class Sum {
-        private double sum;
-        private double compensation;
-
-        void add(double x) {
-            double t = sum + x;
-            compensation += Math.abs(sum) >= Math.abs(x) ? (sum - t) + x : (x - t) + sum;
-            sum = t;
-        }
-
-        double value() {
-            return sum + compensation;
         }
     }
 }
