@@ -5,65 +5,85 @@ import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.TextColumn;
 
 /**
- * Counts duplicate lines for a {@link DuplicateCounter}: a row is a duplicate when its molecule, isotopologue,
- * wavenumber (the same double) and its four quanta texts (upper/lower global and local, byte for byte) equal
- * those of the row offered before it. The row before may lie in an earlier batch: its texts are kept in one
- * reusable buffer (no allocation once the buffer has grown to the longest texts).
+ * The one definition of a duplicate line, used by the readers (a {@link DuplicateCounter}'s count) and by
+ * {@code verify} alike: a row is a duplicate when an earlier row of the same run of consecutive rows with equal
+ * wavenumber (the same double) has the same molecule, isotopologue and four quanta texts (upper/lower global and
+ * local, byte for byte). In a list sorted by wavenumber that finds every repeated line; in an unsorted one, every
+ * repeat that follows its original within the run of its wavenumber. Rows of earlier batches count: the keys of
+ * the current wavenumber are kept in one reusable buffer (no allocation once it has grown to the largest run).
  */
 public final class DuplicateTracker {
-    private byte[] previousQuanta = new byte[64];
-    /** Length of each previous text; -1 before the first row. */
-    private final int[] previousLength = {-1, -1, -1, -1};
-    /** Where the next text goes in {@link #previousQuanta}. */
-    private int cursor;
-    private int previousMolecule = -1;
-    private int previousIsotopologue = -1;
-    private long previousWavenumberBits;
+    private double wavenumberCm1 = Double.NaN;
+    /** (molecule, isotopologue, four length-prefixed quanta texts) of each row of the current wavenumber. */
+    private byte[] keys = new byte[1024];
+    /** keys of row k of the run: [offsets[k], offsets[k+1]). */
+    private int[] offsets = new int[17];
+    private int count;
     private long duplicates;
 
     /**
-     * Compares row {@code row} of {@code batch} with the row offered before, then keeps it as the new previous row.
+     * Compares row {@code row} of {@code batch} with the earlier rows of its wavenumber, then keeps it among them.
      *
      * @return true when the row is a duplicate (it is then counted)
      */
     public boolean offer(LineBatch batch, int row) {
-        long bits = Double.doubleToRawLongBits(batch.wavenumberCm1[row]);
-        boolean same = batch.moleculeId[row] == previousMolecule && batch.isotopologue[row] == previousIsotopologue
-                && bits == previousWavenumberBits;
-        int total = batch.upperGlobalQuanta.length(row) + batch.lowerGlobalQuanta.length(row)
-                + batch.upperLocalQuanta.length(row) + batch.lowerLocalQuanta.length(row);
-        if (previousQuanta.length < total) {
-            previousQuanta = Arrays.copyOf(previousQuanta, Math.max(total, 2 * previousQuanta.length));
+        double nu = batch.wavenumberCm1[row];
+        // compared as bits so that equal doubles (and only they) share a run; NaN never equals NaN
+        if (Double.doubleToRawLongBits(nu) != Double.doubleToRawLongBits(wavenumberCm1)) {
+            wavenumberCm1 = nu;
+            count = 0;
         }
-        cursor = 0;
-        // every text is kept, so no short-circuit here
-        same &= keep(batch.upperGlobalQuanta, row, 0);
-        same &= keep(batch.lowerGlobalQuanta, row, 1);
-        same &= keep(batch.upperLocalQuanta, row, 2);
-        same &= keep(batch.lowerLocalQuanta, row, 3);
-        previousMolecule = batch.moleculeId[row];
-        previousIsotopologue = batch.isotopologue[row];
-        previousWavenumberBits = bits;
-        if (same) {
-            duplicates++;
+        int start = offsets[count];
+        int end = append(batch, row, start);
+        for (int k = 0; k < count; k++) {
+            if (Arrays.equals(keys, offsets[k], offsets[k + 1], keys, start, end)) {
+                duplicates++;
+                return true;
+            }
         }
-        return same;
-    }
-
-    /** Compares text {@code k} of the row with the previous row's at {@link #cursor}, then keeps it there. */
-    private boolean keep(TextColumn c, int row, int k) {
-        int len = c.length(row);
-        int from = c.start(row);
-        boolean equal = len == previousLength[k]
-                && Arrays.equals(c.bytes(), from, from + len, previousQuanta, cursor, cursor + len);
-        System.arraycopy(c.bytes(), from, previousQuanta, cursor, len);
-        previousLength[k] = len;
-        cursor += len;
-        return equal;
+        if (count + 2 > offsets.length) {
+            offsets = Arrays.copyOf(offsets, offsets.length * 2);
+        }
+        offsets[++count] = end;
+        return false;
     }
 
     /** Duplicates counted so far. */
     public long duplicates() {
         return duplicates;
+    }
+
+    private int append(LineBatch b, int r, int at) {
+        at = putInt(at, b.moleculeId[r]);
+        at = putInt(at, b.isotopologue[r]);
+        at = putText(at, b.upperGlobalQuanta, r);
+        at = putText(at, b.lowerGlobalQuanta, r);
+        at = putText(at, b.upperLocalQuanta, r);
+        return putText(at, b.lowerLocalQuanta, r);
+    }
+
+    private int putInt(int at, int v) {
+        ensure(at + 4);
+        keys[at] = (byte) (v >>> 24);
+        keys[at + 1] = (byte) (v >>> 16);
+        keys[at + 2] = (byte) (v >>> 8);
+        keys[at + 3] = (byte) v;
+        return at + 4;
+    }
+
+    private int putText(int at, TextColumn column, int row) {
+        int length = column.rows() > row ? column.length(row) : 0;
+        at = putInt(at, length);
+        ensure(at + length);
+        if (length > 0) {
+            System.arraycopy(column.bytes(), column.start(row), keys, at, length);
+        }
+        return at + length;
+    }
+
+    private void ensure(int size) {
+        if (size > keys.length) {
+            keys = Arrays.copyOf(keys, Math.max(size, keys.length * 2));
+        }
     }
 }

@@ -7,7 +7,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 import org.linewright.ingest.line.LineBatch;
 
-/** The rule of {@link DuplicateCounter}: equal molecule, isotopologue, wavenumber and four quanta texts, consecutive. */
+/**
+ * The rule of {@link DuplicateCounter} (and of verify): equal molecule, isotopologue and four quanta texts as an
+ * earlier row of the same run of equal wavenumbers.
+ */
 class DuplicateTrackerTest {
 
     private static void add(LineBatch b, int molecule, double nu, String... quanta) {
@@ -36,15 +39,16 @@ class DuplicateTrackerTest {
         add(b, 6, Math.nextUp(3.845033), "v=0", "v=0", "J=1", "J=0");
         assertFalse(t.offer(b, 0));
         assertTrue(t.offer(b, 1));
-        for (int r = 2; r < 6; r++) {
-            assertFalse(t.offer(b, r), "row " + r);
-        }
+        assertFalse(t.offer(b, 2));
+        assertTrue(t.offer(b, 3), "a repeat of row 0 with a different line between, at the same wavenumber");
+        assertFalse(t.offer(b, 4));
+        assertFalse(t.offer(b, 5));
         b.clear();
         add(b, 6, Math.nextUp(3.845033), "v=0", "v=0", "J=1", "J=0");
         add(b, 6, Math.nextUp(3.845033), "v=0", "v=0", "J=1", "J=0");
         assertTrue(t.offer(b, 0), "the previous row lies in the batch before");
         assertTrue(t.offer(b, 1));
-        assertEquals(3, t.duplicates());
+        assertEquals(4, t.duplicates());
     }
 
     @Test
