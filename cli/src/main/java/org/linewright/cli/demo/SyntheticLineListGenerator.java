@@ -12,6 +12,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import org.apache.commons.compress.compressors.bzip2.BZip2CompressorOutputStream;
+import org.linewright.ingest.line.EinsteinCoefficients;
 import org.linewright.ingest.hitran.HitranRecordWriter;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.units.PhysicalConstants;
@@ -435,12 +436,11 @@ public final class SyntheticLineListGenerator {
         return factor / (2 * j + 1);
     }
 
-    /** Line intensity at 296 K from the Einstein A (Šimečková et al. 2006, eq. 20), cm/molecule. */
+    /** Line intensity at 296 K from the Einstein A: ingest's relation (Šimečková et al. 2006, eq. 20), cm/molecule. */
     private static double intensity(double abundance, double einsteinA, double gUpper, double nu, double lowerE,
                                     double q) {
-        double c2OverT = PhysicalConstants.SECOND_RADIATION_CONSTANT_CM_K / REFERENCE_TEMPERATURE_K;
-        return abundance * einsteinA * gUpper / (8.0 * Math.PI * PhysicalConstants.SPEED_OF_LIGHT_CM_PER_S * nu * nu)
-                * Math.exp(-c2OverT * lowerE) * -Math.expm1(-c2OverT * nu) / q;
+        return EinsteinCoefficients.intensityFromEinsteinA(einsteinA, nu, gUpper, lowerE, REFERENCE_TEMPERATURE_K, q,
+                abundance);
     }
 
     /** The double nearest to {@code value} rounded to {@code decimals} decimals (an exact quotient of two doubles). */
