@@ -7,7 +7,8 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.linewright.broadening.listing.LineListing;
 import org.linewright.broadening.listing.LineListingRequest;
-import org.linewright.broadening.listing.ListingFormat;
+import org.linewright.grid.output.LineListingWriter;
+import org.linewright.grid.output.ListingFormat;
 import org.linewright.cli.plot.PlotStyle;
 import org.linewright.cli.plot.StickSpectrumPlot;
 import org.linewright.cli.units.QuantityParser;
@@ -105,7 +106,7 @@ public final class LinesCommand implements Callable<Integer> {
         LineStore lineStore = LineStore.open(store);
         // The store's own partition functions (ExoMol-style .pf) apply at every temperature; user tables win.
         registry = (MoleculeRegistry) StoredPartitionFunctions.withStoredTables(registry, List.of(lineStore));
-        LineListing.Summary summary = LineListing.write(lineStore, request, registry,
+        LineListing.Summary summary = LineListingWriter.write(lineStore, request, registry,
                 ListingFormat.byName(format), out, spec.commandLine().getOut());
         if (plot != null) {
             double[][] sticks = LineListing.sticks(lineStore, request, registry, PLOT_MAX_LINES);

@@ -1,9 +1,9 @@
-package org.linewright.broadening.listing;
+package org.linewright.grid.output;
 
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.text.OffendingText;
 
-/** Output formats of {@link LineListing}. */
+/** Output formats of a line listing ({@link LineListingWriter}). */
 public enum ListingFormat {
     /** Aligned columns for people: the main parameters, not every column. */
     TABLE,

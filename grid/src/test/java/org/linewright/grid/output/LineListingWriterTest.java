@@ -1,4 +1,4 @@
-package org.linewright.broadening.listing;
+package org.linewright.grid.output;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -14,7 +14,9 @@ import java.util.Map;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.linewright.broadening.testsupport.HitranSamples;
+import org.linewright.broadening.listing.LineListing;
+import org.linewright.broadening.listing.LineListingRequest;
+import org.linewright.ingest.testsupport.ReferenceSamples;
 import org.linewright.ingest.pipeline.IngestListener;
 import org.linewright.ingest.pipeline.IngestOptions;
 import org.linewright.ingest.pipeline.IngestPipeline;
@@ -27,7 +29,7 @@ import org.linewright.ingest.store.LineStore;
  * layout of the 160-character format (HITRAN 2004 layout: Rothman et al. 2005, JQSRT 96, 139, table 1; common
  * practice) and {@link Double#parseDouble}, independently of the project's reader.
  */
-class LineListingTest {
+class LineListingWriterTest {
     private static final MoleculeRegistry REGISTRY = MoleculeRegistry.builtIn();
     private static final String[] SAMPLES = {"sample_CO.par", "sample_CO2.par", "sample_N2O.par", "sample_PH3.par"};
 
@@ -40,7 +42,7 @@ class LineListingTest {
     static void ingestSamples() throws Exception {
         List<Path> files = new ArrayList<>();
         for (String s : SAMPLES) {
-            Path p = HitranSamples.folder().resolve(s);
+            Path p = ReferenceSamples.dir("hitran2020-samples").resolve(s);
             files.add(p);
             List<String> lines = Files.readAllLines(p, StandardCharsets.ISO_8859_1);
             int molecule = Integer.parseInt(lines.get(0).substring(0, 2).strip());
@@ -55,7 +57,7 @@ class LineListingTest {
     @Test
     void csvRoundTripReproducesEveryFieldOfEveryRecord() throws Exception {
         StringWriter out = new StringWriter();
-        LineListing.write(store, LineListingRequest.all(), REGISTRY, ListingFormat.CSV, null, out);
+        LineListingWriter.write(store, LineListingRequest.all(), REGISTRY, ListingFormat.CSV, null, out);
         List<String> rows = List.of(out.toString().split("\n"));
         List<String> header = List.of(rows.get(0).split(","));
         assertEquals(List.of("molecule", "isotopologue", "wavenumber_cm1", "intensity_cm_per_molecule", "einstein_a_s1",
@@ -95,7 +97,7 @@ class LineListingTest {
         double cm1 = 266.9445e9 / 2.99792458e10;
         StringWriter out = new StringWriter();
         LineListingRequest r = new LineListingRequest(cm1 - 0.01, cm1 + 0.01, 28, 0, 0, Double.NaN, null, null);
-        LineListing.Summary s = LineListing.write(store, r, REGISTRY, ListingFormat.CSV, null, out);
+        LineListing.Summary s = LineListingWriter.write(store, r, REGISTRY, ListingFormat.CSV, null, out);
         assertTrue(s.linesListed() >= 1, "no PH3 line near " + cm1);
         boolean found = false;
         for (String row : out.toString().split("\n")) {
@@ -112,12 +114,12 @@ class LineListingTest {
     void strongestListsTheLargestIntensitiesInWavenumberOrder() throws Exception {
         // Independent ranking: the 10 largest S(296 K) of the CO sample file, straight from its text.
         List<Double> all = new ArrayList<>();
-        for (String record : Files.readAllLines(HitranSamples.folder().resolve("sample_CO.par"), StandardCharsets.ISO_8859_1)) {
+        for (String record : Files.readAllLines(ReferenceSamples.dir("hitran2020-samples").resolve("sample_CO.par"), StandardCharsets.ISO_8859_1)) {
             all.add(Double.parseDouble(record.substring(15, 25).strip()));
         }
         all.sort((a, b) -> Double.compare(b, a));
         StringWriter out = new StringWriter();
-        LineListing.write(store, new LineListingRequest(Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, 5, 0, 10,
+        LineListingWriter.write(store, new LineListingRequest(Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, 5, 0, 10,
                 Double.NaN, null, null), REGISTRY, ListingFormat.CSV, null, out);
         String[] rows = out.toString().split("\n");
         assertEquals(11, rows.length);
