@@ -30,6 +30,7 @@ import org.linewright.broadening.sources.ResolvedWidths;
 import org.linewright.broadening.sources.WidthResolver;
 import org.linewright.broadening.sources.WidthSourceTally;
 import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.voigt.VanVleckWeisskopfProfile;
 import org.linewright.broadening.width.DopplerWidth;
 import org.linewright.broadening.width.PressureBroadening;
 import org.linewright.broadening.wings.ChiFactorKind;
@@ -40,6 +41,7 @@ import org.linewright.broadening.wings.WingCutoff;
 import org.linewright.broadening.wings.WingKernel;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.LineChunk;
+import org.linewright.grid.engine.exact.ExactEngine;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.ToolVersion;
@@ -50,6 +52,7 @@ import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.store.LineCursor;
 import org.linewright.ingest.store.LineQuery;
 import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.units.PhysicalConstants;
 
 /**
  * The one place that turns stored lines into engine input for one (p, T). For a {@link CrossSectionRequest} it
@@ -68,7 +71,13 @@ import org.linewright.ingest.store.LineStore;
  *       (as a foreign gas, or the absorber itself) is in the background.</li>
  * </ul>
  * The line shape is conveyed to the engines through the widths: a Doppler-only request zeroes γL, a Lorentz-only
- * request zeroes αD, and the Voigt kernels reduce exactly to the pure shapes in those limits.
+ * request zeroes αD, and the Voigt kernels reduce exactly to the pure shapes in those limits. The Van
+ * Vleck–Weisskopf shape travels as a per-line flag ({@link LineChunk#vanVleckWeisskopf}): set on every line with
+ * ν₀ &gt; 0 for the {@code vvw} shape, and, with the Voigt or Lorentz shape, on the lines
+ * {@link VanVleckWeisskopfProfile#chosenFor} picks (γL/ν₀ &gt; 10⁻⁴ and c₂ν₀/T ≤ 0.2). The exact engine evaluates
+ * it; for any other engine those lines are summed directly by an {@link ExactEngine} into the same σ. The area a
+ * symmetric shape puts at ν ≤ 0 ({@link WingKernel#negativeFrequencyFraction}) is counted in the wing loss,
+ * recorded as {@code negative_wavenumber_loss_fraction} and warned about above 10⁻⁶.
  * Kept lines fill a reused {@link LineChunk} passed to {@link CrossSectionEngine#accumulate}. Lines reach σ only
  * within their cutoff of the shifted centre (the engines apply the {@link WingKernel}).
  *
@@ -226,9 +235,11 @@ public final class CrossSectionCalculator {
                 }
             }
             merge(run, open.toArray(new Feed[0]), engine, sigma, progress);
+            run.finishVanVleckWeisskopf(sigma);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         } finally {
+            run.closeVanVleckWeisskopf();
             for (Feed f : open) {
                 f.release();
             }
@@ -288,19 +299,20 @@ public final class CrossSectionCalculator {
             System.arraycopy(s.usedDoppler, from, chunk.dopplerHwhmCm1, c, n);
             System.arraycopy(s.usedLorentz, from, chunk.lorentzHwhmCm1, c, n);
             System.arraycopy(s.usedChi, from, chunk.chiFactor, c, n);
+            System.arraycopy(s.usedVanVleckWeisskopf, from, chunk.vanVleckWeisskopf, c, n);
             chunk.size += n;
             sources[best].pos = end;
             if (n > 0) {
                 lastKey = s.keyCm1[end - 1];
             }
             if (chunk.size == chunk.capacity()) {
-                engine.accumulate(chunk, sigma);
+                run.feed(engine, chunk, sigma);
                 chunk.size = 0;
                 progress.progress(run.linesRead, run.fractionDone(lastKey));
             }
         }
         if (chunk.size > 0) {
-            engine.accumulate(chunk, sigma);
+            run.feed(engine, chunk, sigma);
             chunk.size = 0;
         }
     }
@@ -362,11 +374,16 @@ public final class CrossSectionCalculator {
         final double[] usedDoppler;
         final double[] usedLorentz;
         final boolean[] usedChi;
+        final boolean[] usedVanVleckWeisskopf;
+        /** S(T)·(fraction of the profile at ν ≤ 0, where no grid reaches) of each used Voigt-shaped row. */
+        final double[] negativeIntensity;
         int rowsRead;
         int rows;
         int count;
         long belowThreshold;
         long withoutWidth;
+        long vanVleckWeisskopfLines;
+        long vanVleckWeisskopfOutsideLimit;
         /** This batch's smallest HWHM / spacing (first such line) and that line's widths and spacing. */
         double worstResolution;
         double worstHwhmCm1;
@@ -395,6 +412,8 @@ public final class CrossSectionCalculator {
             usedDoppler = new double[capacity];
             usedLorentz = new double[capacity];
             usedChi = new boolean[capacity];
+            usedVanVleckWeisskopf = new boolean[capacity];
+            negativeIntensity = new double[capacity];
         }
 
         void reset() {
@@ -403,6 +422,8 @@ public final class CrossSectionCalculator {
             count = 0;
             belowThreshold = 0;
             withoutWidth = 0;
+            vanVleckWeisskopfLines = 0;
+            vanVleckWeisskopfOutsideLimit = 0;
             worstResolution = Double.POSITIVE_INFINITY;
             worstHwhmCm1 = Double.NaN;
             worstDopplerCm1 = Double.NaN;
@@ -643,7 +664,13 @@ public final class CrossSectionCalculator {
         long linesUsed;
         long linesBelowThreshold;
         long linesWithoutWidth;
+        long linesVanVleckWeisskopf;
+        long linesVanVleckWeisskopfOutsideLimit;
+        /** Direct summation of the Van Vleck–Weisskopf lines when the engine is not the exact one; made when needed. */
+        ExactEngine vanVleckWeisskopfEngine;
+        LineChunk vanVleckWeisskopfChunk;
         final Sum totalIntensity = new Sum();
+        final Sum negativeIntensity = new Sum();
         final Sum droppedIntensity = new Sum();
         final Sum usedIntensity = new Sum();
         final Sum lostIntensity = new Sum();
@@ -682,6 +709,74 @@ public final class CrossSectionCalculator {
             Physics first = new Physics(lookup, request, chunkLines);
             made.add(first);
             idle.add(first);
+        }
+
+        /** Whether a line of shifted centre ν₀ and Lorentz HWHM γL gets the Van Vleck–Weisskopf shape. */
+        boolean vanVleckWeisskopf(double centreCm1, double lorentzHwhmCm1) {
+            if (!(centreCm1 > 0) || Double.isInfinite(centreCm1)) {
+                return false;
+            }
+            return switch (shape) {
+                case VAN_VLECK_WEISSKOPF -> true;
+                case VOIGT, LORENTZ -> VanVleckWeisskopfProfile.chosenFor(centreCm1, lorentzHwhmCm1, temperatureK);
+                default -> false;
+            };
+        }
+
+        /**
+         * Hands a chunk to the engine. An engine other than the exact one does not evaluate the Van Vleck–Weisskopf
+         * shape: those lines are moved (in order) to a chunk of their own and summed directly by an
+         * {@link ExactEngine} into the same σ; the rest keep their order for the engine.
+         */
+        void feed(CrossSectionEngine engine, LineChunk chunk, double[] sigma) {
+            if (engine instanceof ExactEngine) {
+                engine.accumulate(chunk, sigma);
+                return;
+            }
+            int n = chunk.size;
+            int flagged = 0;
+            for (int i = 0; i < n; i++) {
+                if (chunk.vanVleckWeisskopf[i]) {
+                    flagged++;
+                }
+            }
+            if (flagged == 0) {
+                engine.accumulate(chunk, sigma);
+                return;
+            }
+            if (vanVleckWeisskopfEngine == null) {
+                vanVleckWeisskopfEngine = new ExactEngine(threads, request.wings());
+                vanVleckWeisskopfEngine.begin(request.grid(), pressureAtm, temperatureK);
+                vanVleckWeisskopfChunk = new LineChunk(chunk.capacity());
+            }
+            LineChunk side = vanVleckWeisskopfChunk;
+            side.size = 0;
+            int kept = 0;
+            for (int i = 0; i < n; i++) {
+                if (chunk.vanVleckWeisskopf[i]) {
+                    copyRow(chunk, i, side, side.size++);
+                } else {
+                    copyRow(chunk, i, chunk, kept++);
+                }
+            }
+            chunk.size = kept;
+            if (kept > 0) {
+                engine.accumulate(chunk, sigma);
+            }
+            vanVleckWeisskopfEngine.accumulate(side, sigma);
+            side.size = 0;
+        }
+
+        void finishVanVleckWeisskopf(double[] sigma) {
+            if (vanVleckWeisskopfEngine != null) {
+                vanVleckWeisskopfEngine.finish(sigma);
+            }
+        }
+
+        void closeVanVleckWeisskopf() {
+            if (vanVleckWeisskopfEngine != null) {
+                vanVleckWeisskopfEngine.close();
+            }
         }
 
         /** {@link #prepare} with a thread's tools; a failure is kept with the batch. */
@@ -763,8 +858,18 @@ public final class CrossSectionCalculator {
                 double nu = b.wavenumberCm1[i];
                 boolean chiLine = chiForCo2Lines && b.moleculeId[i] == CO2_MOLECULE_ID;
                 LineShapeKind effective = effectiveShape(aD, gL);
+                double centre = nu + shift[i];
+                boolean vvw = vanVleckWeisskopf(centre, gL);
+                if (vvw) {
+                    s.vanVleckWeisskopfLines++;
+                    if (PhysicalConstants.SECOND_RADIATION_CONSTANT_CM_K * centre
+                            > VanVleckWeisskopfProfile.MAX_REDUCED_FREQUENCY * temperatureK) {
+                        s.vanVleckWeisskopfOutsideLimit++;
+                    }
+                }
+                s.usedVanVleckWeisskopf[m] = vvw;
                 s.keyCm1[m] = nu;
-                s.centerCm1[m] = nu + shift[i];
+                s.centerCm1[m] = centre;
                 s.usedIntensity[m] = sT;
                 s.usedDoppler[m] = aD;
                 s.usedLorentz[m] = gL;
@@ -772,6 +877,9 @@ public final class CrossSectionCalculator {
                 m++;
                 WingKernel k = chiLine ? kernel : kernelNoChi;
                 s.lostIntensity[i] = sT * k.lostFraction(effective, aD, gL);
+                // a symmetric shape puts part of a low-frequency line's area at ν ≤ 0: counted as lost, reported
+                s.negativeIntensity[i] = vvw ? 0.0 : sT * k.negativeFrequencyFraction(effective, centre, aD, gL);
+                s.lostIntensity[i] += s.negativeIntensity[i];
                 if (nu >= gridFirstCm1 && nu <= gridLastCm1) {
                     // resolution is judged on the line's full half width (Voigt: Olivero–Longbothum), which is αD
                     // at low pressure: a pressure-broadened line is resolved even when αD is below the step
@@ -826,12 +934,15 @@ public final class CrossSectionCalculator {
                     default -> {
                         usedIntensity.add(sT);
                         lostIntensity.add(s.lostIntensity[i]);
+                        negativeIntensity.add(s.negativeIntensity[i]);
                     }
                 }
             }
             linesUsed += s.count;
             linesBelowThreshold += s.belowThreshold;
             linesWithoutWidth += s.withoutWidth;
+            linesVanVleckWeisskopf += s.vanVleckWeisskopfLines;
+            linesVanVleckWeisskopfOutsideLimit += s.vanVleckWeisskopfOutsideLimit;
             // strictly smaller: the first line of the smallest ratio wins, as in one pass over all lines
             if (s.worstResolution < worstResolution) {
                 worstResolution = s.worstResolution;
@@ -876,6 +987,17 @@ public final class CrossSectionCalculator {
             if (linesWithoutWidth > 0) {
                 warnings.add(linesWithoutWidth + " lines have zero Doppler and Lorentz width and were left out");
             }
+            double negativeFraction = used > 0 ? negativeIntensity.value() / used : 0.0;
+            if (negativeFraction > NEGATIVE_WAVENUMBER_WARNING_FRACTION) {
+                warnings.add(String.format(Locale.ROOT, "%.3g of the line intensity falls at wavenumbers <= 0 under "
+                        + "the %s shape and is lost (use --shape vvw for low-frequency lines)", negativeFraction,
+                        shape.label()));
+            }
+            if (linesVanVleckWeisskopfOutsideLimit > 0) {
+                warnings.add(linesVanVleckWeisskopfOutsideLimit + " lines have the Van Vleck-Weisskopf shape with "
+                        + "c2*nu0/T > " + VanVleckWeisskopfProfile.MAX_REDUCED_FREQUENCY + ", where its (nu/nu0)^2 "
+                        + "factor (the h*nu << kT limit) is more than 1 % from the Van Vleck-Huber factor");
+            }
             for (String w : tally.warnings()) {
                 // the tally words its lines for printing; the result's warnings carry no prefix
                 warnings.add(w.startsWith("warning: ") ? w.substring("warning: ".length()) : w);
@@ -889,6 +1011,13 @@ public final class CrossSectionCalculator {
             m.put("pressure_atm", Double.toString(pressureAtm));
             m.put("composition", request.composition().toString());
             m.put("line_shape", shape.label());
+            m.put("line_shape_rule", shapeRule(shape));
+            m.put("lines_van_vleck_weisskopf", Long.toString(linesVanVleckWeisskopf));
+            if (vanVleckWeisskopfEngine != null) {
+                m.put("van_vleck_weisskopf_summation", "exact engine (direct summation; the " + engine.id()
+                        + " engine sums the Voigt lines)");
+            }
+            m.put("negative_wavenumber_loss_fraction", Double.toString(negativeFraction));
             m.putAll(kernel.describe());
             m.put("intensity_threshold_cm_per_molecule", Double.toString(threshold));
             m.put("line_selection", request.selection().describe());
@@ -913,6 +1042,31 @@ public final class CrossSectionCalculator {
             return new CrossSectionResult(sigma, linesUsed, linesBelowThreshold, droppedFraction, used, tally,
                     engine.estimatedRelativeError(), m, seconds, lossFraction, warnings);
         }
+    }
+
+    /**
+     * Fraction of the used intensity at ν ≤ 0 (lost under a symmetric shape) above which the result warns: 10⁻⁶,
+     * far below any engine tolerance, so that a warning appears only where the loss can matter.
+     */
+    static final double NEGATIVE_WAVENUMBER_WARNING_FRACTION = 1e-6;
+
+    /** The shape rule in words, for the metadata of σ files and tables. */
+    static String shapeRule(LineShapeKind shape) {
+        return switch (shape) {
+            case VAN_VLECK_WEISSKOPF -> "Van Vleck-Weisskopf (1945) shape, (nu/nu0)^2 [V(nu-nu0) + V(nu+nu0)], for "
+                    + "every line with nu0 > 0";
+            case VOIGT, LORENTZ -> VanVleckWeisskopfProfile.ruleDescription();
+            default -> "doppler shape for every line (no pressure width: the Van Vleck-Weisskopf rule never applies)";
+        };
+    }
+
+    private static void copyRow(LineChunk from, int i, LineChunk to, int j) {
+        to.centerCm1[j] = from.centerCm1[i];
+        to.intensityCmPerMolecule[j] = from.intensityCmPerMolecule[i];
+        to.dopplerHwhmCm1[j] = from.dopplerHwhmCm1[i];
+        to.lorentzHwhmCm1[j] = from.lorentzHwhmCm1[i];
+        to.chiFactor[j] = from.chiFactor[i];
+        to.vanVleckWeisskopf[j] = from.vanVleckWeisskopf[i];
     }
 
     /** The pure shape the Voigt kernels reduce to for these widths (for the wing-loss formulas). */

@@ -22,6 +22,13 @@ public final class LineChunk {
     public final double[] lorentzHwhmCm1;
     /** Whether the line gets the sub-Lorentzian χ factor (CO2 broadened by CO2). */
     public final boolean[] chiFactor;
+    /**
+     * Whether the line has the Van Vleck–Weisskopf shape (see
+     * {@link org.linewright.broadening.voigt.VanVleckWeisskopfProfile}) instead of the Voigt profile. Engines that
+     * do not evaluate it leave such lines to {@link org.linewright.grid.engine.exact.ExactEngine} (the
+     * cross-section calculator routes them).
+     */
+    public final boolean[] vanVleckWeisskopf;
 
     public LineChunk(int capacity) {
         centerCm1 = new double[capacity];
@@ -29,6 +36,7 @@ public final class LineChunk {
         dopplerHwhmCm1 = new double[capacity];
         lorentzHwhmCm1 = new double[capacity];
         chiFactor = new boolean[capacity];
+        vanVleckWeisskopf = new boolean[capacity];
     }
 
     public int capacity() {
