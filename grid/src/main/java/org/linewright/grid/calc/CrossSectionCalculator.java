@@ -36,6 +36,7 @@ import org.linewright.broadening.width.PressureBroadening;
 import org.linewright.broadening.wings.ChiFactorKind;
 import org.linewright.broadening.wings.FixedCutoff;
 import org.linewright.broadening.wings.HwhmMultipleCutoff;
+import org.linewright.broadening.wings.PerrinHartmannChi;
 import org.linewright.broadening.wings.PressureScaledCutoff;
 import org.linewright.broadening.wings.WingCutoff;
 import org.linewright.broadening.wings.WingKernel;
@@ -67,8 +68,10 @@ import org.linewright.ingest.units.PhysicalConstants;
  *   <li>αD = ν/c·√(2 ln2 kT/m) with {@link DopplerWidth};</li>
  *   <li>the intensity threshold (lines with S(T) below it, or not finite, are dropped and their intensity
  *       reported);</li>
- *   <li>the χ-factor flag: CO2 lines (molecule 2) when the wing treatment asks for the CO2 χ factor and CO2
- *       (as a foreign gas, or the absorber itself) is in the background.</li>
+ *   <li>the χ factor: for CO2 lines (molecule 2) when the wing treatment asks for the CO2 χ factor and CO2
+ *       (as a foreign gas, or the absorber itself) is in the background, applied to the CO2-broadened share w of
+ *       the line's γL only (far wing (1 − w)·V + w·χ·V) and only inside the fit's range of validity
+ *       ({@link PerrinHartmannChi#validFor}); lines outside are counted and warned about.</li>
  * </ul>
  * The line shape is conveyed to the engines through the widths: a Doppler-only request zeroes γL, a Lorentz-only
  * request zeroes αD, and the Voigt kernels reduce exactly to the pure shapes in those limits. The Van
@@ -300,6 +303,7 @@ public final class CrossSectionCalculator {
             System.arraycopy(s.usedLorentz, from, chunk.lorentzHwhmCm1, c, n);
             System.arraycopy(s.usedChi, from, chunk.chiFactor, c, n);
             System.arraycopy(s.usedVanVleckWeisskopf, from, chunk.vanVleckWeisskopf, c, n);
+            System.arraycopy(s.usedChiExempt, from, chunk.chiExemptShare, c, n);
             chunk.size += n;
             sources[best].pos = end;
             if (n > 0) {
@@ -375,6 +379,7 @@ public final class CrossSectionCalculator {
         final double[] usedLorentz;
         final boolean[] usedChi;
         final boolean[] usedVanVleckWeisskopf;
+        final double[] usedChiExempt;
         /** S(T)·(fraction of the profile at ν ≤ 0, where no grid reaches) of each used Voigt-shaped row. */
         final double[] negativeIntensity;
         int rowsRead;
@@ -384,6 +389,7 @@ public final class CrossSectionCalculator {
         long withoutWidth;
         long vanVleckWeisskopfLines;
         long vanVleckWeisskopfOutsideLimit;
+        long chiOutsideValidity;
         /** This batch's smallest HWHM / spacing (first such line) and that line's widths and spacing. */
         double worstResolution;
         double worstHwhmCm1;
@@ -413,6 +419,7 @@ public final class CrossSectionCalculator {
             usedLorentz = new double[capacity];
             usedChi = new boolean[capacity];
             usedVanVleckWeisskopf = new boolean[capacity];
+            usedChiExempt = new double[capacity];
             negativeIntensity = new double[capacity];
         }
 
@@ -424,6 +431,7 @@ public final class CrossSectionCalculator {
             withoutWidth = 0;
             vanVleckWeisskopfLines = 0;
             vanVleckWeisskopfOutsideLimit = 0;
+            chiOutsideValidity = 0;
             worstResolution = Double.POSITIVE_INFINITY;
             worstHwhmCm1 = Double.NaN;
             worstDopplerCm1 = Double.NaN;
@@ -666,6 +674,7 @@ public final class CrossSectionCalculator {
         long linesWithoutWidth;
         long linesVanVleckWeisskopf;
         long linesVanVleckWeisskopfOutsideLimit;
+        long linesChiOutsideValidity;
         /** Direct summation of the Van Vleck–Weisskopf lines when the engine is not the exact one; made when needed. */
         ExactEngine vanVleckWeisskopfEngine;
         LineChunk vanVleckWeisskopfChunk;
@@ -736,7 +745,7 @@ public final class CrossSectionCalculator {
             int n = chunk.size;
             int flagged = 0;
             for (int i = 0; i < n; i++) {
-                if (chunk.vanVleckWeisskopf[i]) {
+                if (direct(chunk, i)) {
                     flagged++;
                 }
             }
@@ -753,7 +762,7 @@ public final class CrossSectionCalculator {
             side.size = 0;
             int kept = 0;
             for (int i = 0; i < n; i++) {
-                if (chunk.vanVleckWeisskopf[i]) {
+                if (direct(chunk, i)) {
                     copyRow(chunk, i, side, side.size++);
                 } else {
                     copyRow(chunk, i, chunk, kept++);
@@ -765,6 +774,11 @@ public final class CrossSectionCalculator {
             }
             vanVleckWeisskopfEngine.accumulate(side, sigma);
             side.size = 0;
+        }
+
+        /** Lines only the exact engine evaluates: the Van Vleck–Weisskopf shape, χ on part of the width. */
+        private static boolean direct(LineChunk chunk, int i) {
+            return chunk.vanVleckWeisskopf[i] || (chunk.chiFactor[i] && chunk.chiExemptShare[i] > 0);
         }
 
         void finishVanVleckWeisskopf(double[] sigma) {
@@ -856,9 +870,21 @@ public final class CrossSectionCalculator {
                 }
                 s.fate[i] = USED;
                 double nu = b.wavenumberCm1[i];
-                boolean chiLine = chiForCo2Lines && b.moleculeId[i] == CO2_MOLECULE_ID;
+                boolean chiLine = chiForCo2Lines && b.moleculeId[i] == CO2_MOLECULE_ID && gL > 0;
                 LineShapeKind effective = effectiveShape(aD, gL);
                 double centre = nu + shift[i];
+                double chiShare = 0.0;
+                if (chiLine) {
+                    if (PerrinHartmannChi.validFor(temperatureK, centre)) {
+                        // the CO2-broadened share of γL: CO2 as a foreign gas plus the absorber's own (CO2) part
+                        chiShare = Math.min(1.0, (PressureBroadening.partialHwhmCm1(p.widths, BackgroundGas.CO2, i,
+                                pressureAtm, temperatureK) + PressureBroadening.partialHwhmCm1(p.widths,
+                                BackgroundGas.SELF, i, pressureAtm, temperatureK)) / gL);
+                    } else {
+                        s.chiOutsideValidity++;
+                    }
+                    chiLine = chiShare > 0;
+                }
                 boolean vvw = vanVleckWeisskopf(centre, gL);
                 if (vvw) {
                     s.vanVleckWeisskopfLines++;
@@ -874,11 +900,17 @@ public final class CrossSectionCalculator {
                 s.usedDoppler[m] = aD;
                 s.usedLorentz[m] = gL;
                 s.usedChi[m] = chiLine;
+                s.usedChiExempt[m] = chiLine ? 1.0 - chiShare : 0.0;
                 m++;
-                WingKernel k = chiLine ? kernel : kernelNoChi;
-                s.lostIntensity[i] = sT * k.lostFraction(effective, aD, gL);
+                double lost = kernelNoChi.lostFraction(effective, aD, gL);
+                if (chiLine) {
+                    // linear in χ: the CO2-broadened share w loses what the χ kernel loses, the rest the plain one
+                    lost = chiShare * kernel.lostFraction(effective, aD, gL) + (1.0 - chiShare) * lost;
+                }
+                s.lostIntensity[i] = sT * lost;
                 // a symmetric shape puts part of a low-frequency line's area at ν ≤ 0: counted as lost, reported
-                s.negativeIntensity[i] = vvw ? 0.0 : sT * k.negativeFrequencyFraction(effective, centre, aD, gL);
+                s.negativeIntensity[i] = vvw ? 0.0
+                        : sT * kernelNoChi.negativeFrequencyFraction(effective, centre, aD, gL);
                 s.lostIntensity[i] += s.negativeIntensity[i];
                 if (nu >= gridFirstCm1 && nu <= gridLastCm1) {
                     // resolution is judged on the line's full half width (Voigt: Olivero–Longbothum), which is αD
@@ -943,6 +975,7 @@ public final class CrossSectionCalculator {
             linesWithoutWidth += s.withoutWidth;
             linesVanVleckWeisskopf += s.vanVleckWeisskopfLines;
             linesVanVleckWeisskopfOutsideLimit += s.vanVleckWeisskopfOutsideLimit;
+            linesChiOutsideValidity += s.chiOutsideValidity;
             // strictly smaller: the first line of the smallest ratio wins, as in one pass over all lines
             if (s.worstResolution < worstResolution) {
                 worstResolution = s.worstResolution;
@@ -993,6 +1026,13 @@ public final class CrossSectionCalculator {
                         + "the %s shape and is lost (use --shape vvw for low-frequency lines)", negativeFraction,
                         shape.label()));
             }
+            if (linesChiOutsideValidity > 0) {
+                warnings.add(String.format(Locale.ROOT, "%d CO2 lines lie outside the chi factor's range of validity "
+                        + "(T %.0f-%.0f K, line centres %.0f-%.0f cm-1): their wings are left Lorentzian",
+                        linesChiOutsideValidity, PerrinHartmannChi.VALID_MIN_TEMPERATURE_K,
+                        PerrinHartmannChi.VALID_MAX_TEMPERATURE_K, PerrinHartmannChi.VALID_MIN_CENTRE_CM1,
+                        PerrinHartmannChi.VALID_MAX_CENTRE_CM1));
+            }
             if (linesVanVleckWeisskopfOutsideLimit > 0) {
                 warnings.add(linesVanVleckWeisskopfOutsideLimit + " lines have the Van Vleck-Weisskopf shape with "
                         + "c2*nu0/T > " + VanVleckWeisskopfProfile.MAX_REDUCED_FREQUENCY + ", where its (nu/nu0)^2 "
@@ -1014,10 +1054,13 @@ public final class CrossSectionCalculator {
             m.put("line_shape_rule", shapeRule(shape));
             m.put("lines_van_vleck_weisskopf", Long.toString(linesVanVleckWeisskopf));
             if (vanVleckWeisskopfEngine != null) {
-                m.put("van_vleck_weisskopf_summation", "exact engine (direct summation; the " + engine.id()
-                        + " engine sums the Voigt lines)");
+                m.put("exact_summation", "lines with the Van Vleck-Weisskopf shape or chi on part of their width "
+                        + "summed by the exact engine; the " + engine.id() + " engine sums the others");
             }
             m.put("negative_wavenumber_loss_fraction", Double.toString(negativeFraction));
+            if (chiForCo2Lines) {
+                m.put("wing.chi.lines_outside_validity", Long.toString(linesChiOutsideValidity));
+            }
             m.putAll(kernel.describe());
             m.put("intensity_threshold_cm_per_molecule", Double.toString(threshold));
             m.put("line_selection", request.selection().describe());
@@ -1067,6 +1110,7 @@ public final class CrossSectionCalculator {
         to.lorentzHwhmCm1[j] = from.lorentzHwhmCm1[i];
         to.chiFactor[j] = from.chiFactor[i];
         to.vanVleckWeisskopf[j] = from.vanVleckWeisskopf[i];
+        to.chiExemptShare[j] = from.chiExemptShare[i];
     }
 
     /** The pure shape the Voigt kernels reduce to for these widths (for the wing-loss formulas). */

@@ -29,6 +29,13 @@ public final class LineChunk {
      * cross-section calculator routes them).
      */
     public final boolean[] vanVleckWeisskopf;
+    /**
+     * For a line with {@link #chiFactor}: the share 1 − w of its Lorentz width from gases the χ factor does not
+     * apply to (w the CO2-broadened share), so that its far wing is (1 − w)·V + w·χ·V. 0 (the default) applies χ
+     * to the whole line. Engines that do not evaluate it leave such lines to
+     * {@link org.linewright.grid.engine.exact.ExactEngine} (the cross-section calculator routes them).
+     */
+    public final double[] chiExemptShare;
 
     public LineChunk(int capacity) {
         centerCm1 = new double[capacity];
@@ -37,6 +44,7 @@ public final class LineChunk {
         lorentzHwhmCm1 = new double[capacity];
         chiFactor = new boolean[capacity];
         vanVleckWeisskopf = new boolean[capacity];
+        chiExemptShare = new double[capacity];
     }
 
     public int capacity() {

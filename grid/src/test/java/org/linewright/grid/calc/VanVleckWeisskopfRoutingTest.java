@@ -110,7 +110,7 @@ class VanVleckWeisskopfRoutingTest {
             for (double p : new double[] {0.01, 1.0, 10.0}) {
                 CrossSectionResult exact = compute("exact", shape, p, 296.0);
                 CrossSectionResult fast = compute("fast", shape, p, 296.0);
-                assertTrue(fast.metadata().containsKey("van_vleck_weisskopf_summation"), shape + " " + p);
+                assertTrue(fast.metadata().containsKey("exact_summation"), shape + " " + p);
                 double[] e = exact.sigmaCm2PerMolecule();
                 double[] f = fast.sigmaCm2PerMolecule();
                 double max = 0;

@@ -222,9 +222,19 @@ public final class ExactEngine implements CrossSectionEngine {
             int blockTo = Math.min(points, blockFrom + BLOCK_POINTS);
             for (int p = blockStart[b], end = blockStart[b + 1]; p < end; p++) {
                 int i = pairs[p];
-                WingKernel k = c.chiFactor[i] ? kernel : kernelNoChi;
-                k.addLine(LineShapeKind.VOIGT, c.vanVleckWeisskopf[i], g, Math.max(blockFrom, lineLo[i]),
-                        Math.min(blockTo, lineHi[i]), c.centerCm1[i], c.dopplerHwhmCm1[i], c.lorentzHwhmCm1[i], c.intensityCmPerMolecule[i], out);
+                int from = Math.max(blockFrom, lineLo[i]);
+                int to = Math.min(blockTo, lineHi[i]);
+                double s = c.intensityCmPerMolecule[i];
+                double exempt = c.chiFactor[i] ? c.chiExemptShare[i] : 1.0;
+                // the profile is linear in χ: (1 − w)·[line without χ] + w·[line with χ], same cutoff for both
+                if (exempt < 1.0) {
+                    kernel.addLine(LineShapeKind.VOIGT, c.vanVleckWeisskopf[i], g, from, to, c.centerCm1[i],
+                            c.dopplerHwhmCm1[i], c.lorentzHwhmCm1[i], s * (1.0 - exempt), out);
+                }
+                if (exempt > 0.0) {
+                    kernelNoChi.addLine(LineShapeKind.VOIGT, c.vanVleckWeisskopf[i], g, from, to, c.centerCm1[i],
+                            c.dopplerHwhmCm1[i], c.lorentzHwhmCm1[i], s * exempt, out);
+                }
             }
         }
     }
