@@ -1191,6 +1191,17 @@ public final class CrossSectionCalculator {
         public synchronized double partitionSum(int moleculeId, int isotopologue, double temperatureK) {
             return delegate.partitionSum(moleculeId, isotopologue, temperatureK);
         }
+
+        @Override
+        public synchronized String partitionSumSource(int moleculeId, int isotopologue, double temperatureK) {
+            return delegate.partitionSumSource(moleculeId, isotopologue, temperatureK);
+        }
+
+        @Override
+        public synchronized List<String> partitionSumWarnings(int moleculeId, int isotopologue,
+                                                              double temperatureK) {
+            return delegate.partitionSumWarnings(moleculeId, isotopologue, temperatureK);
+        }
     }
 
     /** Neumaier-compensated running sum (line intensities span many decades). */

@@ -180,6 +180,11 @@ class IncrementalBuildTest {
         CrossSectionTable a = CrossSectionTable.open(expected);
         CrossSectionTable b = CrossSectionTable.open(actual);
         assertArrayEquals(a.wavenumberCm1(), b.wavenumberCm1());
+        // the table records where Q(T) of each isotopologue came from (12C16O is 5/1, HITRAN numbering)
+        String q = b.metadata().get("partition_sum.5/1");
+        if (q == null || q.isBlank()) {
+            throw new AssertionError("no partition-sum source for 5/1 in " + b.metadata().keySet());
+        }
         for (int p = 0; p < PRESSURES_BAR.length; p++) {
             for (int t = 0; t < TEMPERATURES_K.length; t++) {
                 double[] x = a.sigma(p, t);
