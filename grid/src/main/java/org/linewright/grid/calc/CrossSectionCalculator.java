@@ -1094,7 +1094,7 @@ public final class CrossSectionCalculator {
     static final double NEGATIVE_WAVENUMBER_WARNING_FRACTION = 1e-6;
 
     /** The shape rule in words, for the metadata of σ files and tables. */
-    static String shapeRule(LineShapeKind shape) {
+    public static String shapeRule(LineShapeKind shape) {
         return switch (shape) {
             case VAN_VLECK_WEISSKOPF -> "Van Vleck-Weisskopf (1945) shape, (nu/nu0)^2 [V(nu-nu0) + V(nu+nu0)], for "
                     + "every line with nu0 > 0";

@@ -249,6 +249,7 @@ public final class TableBuilder {
                 warnings.addAll(notes.warnings());
             }
             qSources.forEach((k, v) -> metadata.put(k, String.join("; ", v)));
+            metadata.put("line_shape_rule", CrossSectionCalculator.shapeRule(plan.profile().shape()));
             int w = 0;
             for (String text : warnings) {
                 metadata.put("warning." + (++w), text);
