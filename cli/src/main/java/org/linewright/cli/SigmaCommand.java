@@ -112,7 +112,7 @@ public final class SigmaCommand implements Callable<Integer> {
     private double tolerance;
 
     @Option(names = "--shape", paramLabel = "SHAPE", defaultValue = "voigt",
-            description = "Line shape: voigt, doppler or lorentz (default ${DEFAULT-VALUE}).")
+            description = "Line shape: voigt, doppler, lorentz or vvw (Van Vleck-Weisskopf for every line; voigt and lorentz give it to lines with gamma_L/nu0 > 1e-4 and c2*nu0/T <= 0.2) (default ${DEFAULT-VALUE}).")
     private String shape;
 
     @Option(names = "--threshold", paramLabel = "S", defaultValue = "0",

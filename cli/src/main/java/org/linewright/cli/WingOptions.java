@@ -31,7 +31,8 @@ public final class WingOptions {
     boolean removePedestal;
 
     @Option(names = "--chi-factor",
-            description = "Sub-Lorentzian far wings (chi factor) for CO2 lines broadened by CO2.")
+            description = "Sub-Lorentzian far wings (chi factor, Perrin-Hartmann 1989) on the CO2-broadened share "
+                    + "of each CO2 line's width, only at 200-300 K and for lines at 2200-2450 cm-1 (warning outside).")
     boolean chiFactor;
 
     /** The wing treatment these options describe. */

@@ -55,6 +55,27 @@ public final class PressureBroadening {
      *
      * @param out receives γ_L in cm⁻¹ for rows {@code 0 .. widths.size-1}
      */
+    /**
+     * One gas's part of a row's Lorentz HWHM, p·x_g·γ_g·(296/T)^n_g in cm⁻¹ (0 when the gas is absent): the
+     * share of the width that gas's collisions make, for perturber-specific wing corrections.
+     *
+     * @param widths       resolved widths
+     * @param gas          the background gas
+     * @param row          row index
+     * @param pressureAtm  total pressure in atm
+     * @param temperatureK temperature in K
+     * @return the gas's part of γL in cm⁻¹
+     */
+    public static double partialHwhmCm1(ResolvedWidths widths, BackgroundGas gas, int row, double pressureAtm,
+                                        double temperatureK) {
+        double[] w = widths.widthCm1PerAtm[gas.ordinal()];
+        if (w == null) {
+            return 0.0;
+        }
+        double px = pressureAtm * widths.composition().fraction(gas);
+        return px * w[row] * Math.pow(REFERENCE_TEMPERATURE_K / temperatureK, widths.exponent[gas.ordinal()][row]);
+    }
+
     public static void lorentzHwhmCm1(ResolvedWidths widths, double pressureAtm, double temperatureK, double[] out) {
         checkState(pressureAtm, temperatureK);
         int n = widths.size;

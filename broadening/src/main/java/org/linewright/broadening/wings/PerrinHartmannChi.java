@@ -42,6 +42,34 @@ public final class PerrinHartmannChi {
     private static final double BETA3_CM1 = 0.0;
     private static final double EPSILON3_PER_K = 0.0;
 
+    /**
+     * Temperatures of the measurements the coefficients were fitted to, K (about 200–300 K, from memory, see the
+     * class comment): the cross-section calculator applies χ only inside [{@value #VALID_MIN_TEMPERATURE_K},
+     * {@value #VALID_MAX_TEMPERATURE_K}] and warns outside.
+     */
+    public static final double VALID_MIN_TEMPERATURE_K = 200.0;
+    /** Upper end of the temperature range of validity, K (see {@link #VALID_MIN_TEMPERATURE_K}). */
+    public static final double VALID_MAX_TEMPERATURE_K = 300.0;
+    /**
+     * Line centres of the 4.3 μm band (ν3 at 2349 cm⁻¹, from memory) whose far wing the fit describes, cm⁻¹:
+     * χ is applied only to CO2 lines centred in [{@value #VALID_MIN_CENTRE_CM1}, {@value #VALID_MAX_CENTRE_CM1}].
+     */
+    public static final double VALID_MIN_CENTRE_CM1 = 2200.0;
+    /** Upper end of the line-centre range of validity, cm⁻¹ (see {@link #VALID_MIN_CENTRE_CM1}). */
+    public static final double VALID_MAX_CENTRE_CM1 = 2450.0;
+
+    /**
+     * Whether the fit applies at this temperature and line centre (the ranges above).
+     *
+     * @param temperatureK T in K
+     * @param centreCm1    line centre in cm⁻¹
+     * @return whether χ may be applied
+     */
+    public static boolean validFor(double temperatureK, double centreCm1) {
+        return temperatureK >= VALID_MIN_TEMPERATURE_K && temperatureK <= VALID_MAX_TEMPERATURE_K
+                && centreCm1 >= VALID_MIN_CENTRE_CM1 && centreCm1 <= VALID_MAX_CENTRE_CM1;
+    }
+
     private final double temperatureK;
     private final double b1PerCm1;
     private final double b2PerCm1;
@@ -111,6 +139,11 @@ public final class PerrinHartmannChi {
         m.put("wing.chi.temperature_K", Double.toString(temperatureK));
         m.put("wing.chi.sigma_cm-1", SIGMA1_CM1 + "," + SIGMA2_CM1 + "," + SIGMA3_CM1);
         m.put("wing.chi.B_cm-1", b1PerCm1 + "," + b2PerCm1 + "," + b3PerCm1);
+        m.put("wing.chi.weighting", "applied to the CO2-broadened share w of each CO2 line's Lorentz width: "
+                + "phi = (1-w) phi_Lorentz-wing + w chi phi (binary-collision additivity)");
+        m.put("wing.chi.validity", "T " + VALID_MIN_TEMPERATURE_K + ".." + VALID_MAX_TEMPERATURE_K
+                + " K, line centres " + VALID_MIN_CENTRE_CM1 + ".." + VALID_MAX_CENTRE_CM1
+                + " cm-1 (from memory); not applied outside");
         return m;
     }
 }

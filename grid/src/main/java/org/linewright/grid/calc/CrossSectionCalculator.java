@@ -31,13 +31,16 @@ import org.linewright.broadening.sources.ResolvedWidths;
 import org.linewright.broadening.sources.WidthResolver;
 import org.linewright.broadening.sources.WidthSourceTally;
 import org.linewright.broadening.voigt.LineShapeKind;
+import org.linewright.broadening.voigt.VanVleckWeisskopfProfile;
 import org.linewright.broadening.width.DopplerWidth;
 import org.linewright.broadening.width.PressureBroadening;
 import org.linewright.broadening.wings.ChiFactorKind;
+import org.linewright.broadening.wings.PerrinHartmannChi;
 import org.linewright.broadening.wings.WingCutoff;
 import org.linewright.broadening.wings.WingKernel;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.LineChunk;
+import org.linewright.grid.engine.exact.ExactEngine;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.ToolVersion;
@@ -48,6 +51,7 @@ import org.linewright.ingest.source.IsotopologueLookup;
 import org.linewright.ingest.store.LineCursor;
 import org.linewright.ingest.store.LineQuery;
 import org.linewright.ingest.store.LineStore;
+import org.linewright.ingest.units.PhysicalConstants;
 
 /**
  * The one place that turns stored lines into engine input for one (p, T). For a {@link CrossSectionRequest} it
@@ -62,11 +66,19 @@ import org.linewright.ingest.store.LineStore;
  *   <li>αD = ν/c·√(2 ln2 kT/m) with {@link DopplerWidth};</li>
  *   <li>the intensity threshold (lines with S(T) below it, or not finite, are dropped and their intensity
  *       reported);</li>
- *   <li>the χ-factor flag: CO2 lines (molecule 2) when the wing treatment asks for the CO2 χ factor and CO2
- *       (as a foreign gas, or the absorber itself) is in the background.</li>
+ *   <li>the χ factor: for CO2 lines (molecule 2) when the wing treatment asks for the CO2 χ factor and CO2
+ *       (as a foreign gas, or the absorber itself) is in the background, applied to the CO2-broadened share w of
+ *       the line's γL only (far wing (1 − w)·V + w·χ·V) and only inside the fit's range of validity
+ *       ({@link PerrinHartmannChi#validFor}); lines outside are counted and warned about.</li>
  * </ul>
  * The line shape is conveyed to the engines through the widths: a Doppler-only request zeroes γL, a Lorentz-only
- * request zeroes αD, and the Voigt kernels reduce exactly to the pure shapes in those limits.
+ * request zeroes αD, and the Voigt kernels reduce exactly to the pure shapes in those limits. The Van
+ * Vleck–Weisskopf shape travels as a per-line flag ({@link LineChunk#vanVleckWeisskopf}): set on every line with
+ * ν₀ &gt; 0 for the {@code vvw} shape, and, with the Voigt or Lorentz shape, on the lines
+ * {@link VanVleckWeisskopfProfile#chosenFor} picks (γL/ν₀ &gt; 10⁻⁴ and c₂ν₀/T ≤ 0.2). The exact engine evaluates
+ * it; for any other engine those lines are summed directly by an {@link ExactEngine} into the same σ. The area a
+ * symmetric shape puts at ν ≤ 0 ({@link WingKernel#negativeFrequencyFraction}) is counted in the wing loss,
+ * recorded as {@code negative_wavenumber_loss_fraction} and warned about above 10⁻⁶.
  * Kept lines fill a reused {@link LineChunk} passed to {@link CrossSectionEngine#accumulate}. Lines reach σ only
  * within their cutoff of the shifted centre (the engines apply the {@link WingKernel}).
  *
@@ -224,9 +236,11 @@ public final class CrossSectionCalculator {
                 }
             }
             merge(run, open.toArray(new Feed[0]), engine, sigma, progress);
+            run.finishVanVleckWeisskopf(sigma);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         } finally {
+            run.closeVanVleckWeisskopf();
             for (Feed f : open) {
                 f.release();
             }
@@ -286,19 +300,21 @@ public final class CrossSectionCalculator {
             System.arraycopy(s.usedDoppler, from, chunk.dopplerHwhmCm1, c, n);
             System.arraycopy(s.usedLorentz, from, chunk.lorentzHwhmCm1, c, n);
             System.arraycopy(s.usedChi, from, chunk.chiFactor, c, n);
+            System.arraycopy(s.usedVanVleckWeisskopf, from, chunk.vanVleckWeisskopf, c, n);
+            System.arraycopy(s.usedChiExempt, from, chunk.chiExemptShare, c, n);
             chunk.size += n;
             sources[best].pos = end;
             if (n > 0) {
                 lastKey = s.keyCm1[end - 1];
             }
             if (chunk.size == chunk.capacity()) {
-                engine.accumulate(chunk, sigma);
+                run.feed(engine, chunk, sigma);
                 chunk.size = 0;
                 progress.progress(run.linesRead, run.fractionDone(lastKey));
             }
         }
         if (chunk.size > 0) {
-            engine.accumulate(chunk, sigma);
+            run.feed(engine, chunk, sigma);
             chunk.size = 0;
         }
     }
@@ -343,11 +359,18 @@ public final class CrossSectionCalculator {
         final double[] usedDoppler;
         final double[] usedLorentz;
         final boolean[] usedChi;
+        final boolean[] usedVanVleckWeisskopf;
+        final double[] usedChiExempt;
+        /** S(T)·(fraction of the profile at ν ≤ 0, where no grid reaches) of each used Voigt-shaped row. */
+        final double[] negativeIntensity;
         int rowsRead;
         int rows;
         int count;
         long belowThreshold;
         long withoutWidth;
+        long vanVleckWeisskopfLines;
+        long vanVleckWeisskopfOutsideLimit;
+        long chiOutsideValidity;
         /** This batch's smallest HWHM / spacing (first such line) and that line's widths and spacing. */
         double worstResolution;
         double worstHwhmCm1;
@@ -376,6 +399,9 @@ public final class CrossSectionCalculator {
             usedDoppler = new double[capacity];
             usedLorentz = new double[capacity];
             usedChi = new boolean[capacity];
+            usedVanVleckWeisskopf = new boolean[capacity];
+            usedChiExempt = new double[capacity];
+            negativeIntensity = new double[capacity];
         }
 
         void reset() {
@@ -384,6 +410,9 @@ public final class CrossSectionCalculator {
             count = 0;
             belowThreshold = 0;
             withoutWidth = 0;
+            vanVleckWeisskopfLines = 0;
+            vanVleckWeisskopfOutsideLimit = 0;
+            chiOutsideValidity = 0;
             worstResolution = Double.POSITIVE_INFINITY;
             worstHwhmCm1 = Double.NaN;
             worstDopplerCm1 = Double.NaN;
@@ -624,7 +653,14 @@ public final class CrossSectionCalculator {
         long linesUsed;
         long linesBelowThreshold;
         long linesWithoutWidth;
+        long linesVanVleckWeisskopf;
+        long linesVanVleckWeisskopfOutsideLimit;
+        long linesChiOutsideValidity;
+        /** Direct summation of the Van Vleck–Weisskopf lines when the engine is not the exact one; made when needed. */
+        ExactEngine vanVleckWeisskopfEngine;
+        LineChunk vanVleckWeisskopfChunk;
         final CompensatedSum totalIntensity = new CompensatedSum();
+        final CompensatedSum negativeIntensity = new CompensatedSum();
         final CompensatedSum droppedIntensity = new CompensatedSum();
         final CompensatedSum usedIntensity = new CompensatedSum();
         final CompensatedSum lostIntensity = new CompensatedSum();
@@ -663,6 +699,79 @@ public final class CrossSectionCalculator {
             Physics first = new Physics(lookup, request, chunkLines);
             made.add(first);
             idle.add(first);
+        }
+
+        /** Whether a line of shifted centre ν₀ and Lorentz HWHM γL gets the Van Vleck–Weisskopf shape. */
+        boolean vanVleckWeisskopf(double centreCm1, double lorentzHwhmCm1) {
+            if (!(centreCm1 > 0) || Double.isInfinite(centreCm1)) {
+                return false;
+            }
+            return switch (shape) {
+                case VAN_VLECK_WEISSKOPF -> true;
+                case VOIGT, LORENTZ -> VanVleckWeisskopfProfile.chosenFor(centreCm1, lorentzHwhmCm1, temperatureK);
+                default -> false;
+            };
+        }
+
+        /**
+         * Hands a chunk to the engine. An engine other than the exact one does not evaluate the Van Vleck–Weisskopf
+         * shape: those lines are moved (in order) to a chunk of their own and summed directly by an
+         * {@link ExactEngine} into the same σ; the rest keep their order for the engine.
+         */
+        void feed(CrossSectionEngine engine, LineChunk chunk, double[] sigma) {
+            if (engine instanceof ExactEngine) {
+                engine.accumulate(chunk, sigma);
+                return;
+            }
+            int n = chunk.size;
+            int flagged = 0;
+            for (int i = 0; i < n; i++) {
+                if (direct(chunk, i)) {
+                    flagged++;
+                }
+            }
+            if (flagged == 0) {
+                engine.accumulate(chunk, sigma);
+                return;
+            }
+            if (vanVleckWeisskopfEngine == null) {
+                vanVleckWeisskopfEngine = new ExactEngine(threads, request.wings());
+                vanVleckWeisskopfEngine.begin(request.grid(), pressureAtm, temperatureK);
+                vanVleckWeisskopfChunk = new LineChunk(chunk.capacity());
+            }
+            LineChunk side = vanVleckWeisskopfChunk;
+            side.size = 0;
+            int kept = 0;
+            for (int i = 0; i < n; i++) {
+                if (direct(chunk, i)) {
+                    copyRow(chunk, i, side, side.size++);
+                } else {
+                    copyRow(chunk, i, chunk, kept++);
+                }
+            }
+            chunk.size = kept;
+            if (kept > 0) {
+                engine.accumulate(chunk, sigma);
+            }
+            vanVleckWeisskopfEngine.accumulate(side, sigma);
+            side.size = 0;
+        }
+
+        /** Lines only the exact engine evaluates: the Van Vleck–Weisskopf shape, χ on part of the width. */
+        private static boolean direct(LineChunk chunk, int i) {
+            return chunk.vanVleckWeisskopf[i] || (chunk.chiFactor[i] && chunk.chiExemptShare[i] > 0);
+        }
+
+        void finishVanVleckWeisskopf(double[] sigma) {
+            if (vanVleckWeisskopfEngine != null) {
+                vanVleckWeisskopfEngine.finish(sigma);
+            }
+        }
+
+        void closeVanVleckWeisskopf() {
+            if (vanVleckWeisskopfEngine != null) {
+                vanVleckWeisskopfEngine.close();
+            }
         }
 
         /** {@link #prepare} with a thread's tools; a failure is kept with the batch. */
@@ -742,17 +851,48 @@ public final class CrossSectionCalculator {
                 }
                 s.fate[i] = USED;
                 double nu = b.wavenumberCm1[i];
-                boolean chiLine = chiForCo2Lines && b.moleculeId[i] == CO2_MOLECULE_ID;
+                boolean chiLine = chiForCo2Lines && b.moleculeId[i] == CO2_MOLECULE_ID && gL > 0;
                 LineShapeKind effective = effectiveShape(aD, gL);
+                double centre = nu + shift[i];
+                double chiShare = 0.0;
+                if (chiLine) {
+                    if (PerrinHartmannChi.validFor(temperatureK, centre)) {
+                        // the CO2-broadened share of γL: CO2 as a foreign gas plus the absorber's own (CO2) part
+                        chiShare = Math.min(1.0, (PressureBroadening.partialHwhmCm1(p.widths, BackgroundGas.CO2, i,
+                                pressureAtm, temperatureK) + PressureBroadening.partialHwhmCm1(p.widths,
+                                BackgroundGas.SELF, i, pressureAtm, temperatureK)) / gL);
+                    } else {
+                        s.chiOutsideValidity++;
+                    }
+                    chiLine = chiShare > 0;
+                }
+                boolean vvw = vanVleckWeisskopf(centre, gL);
+                if (vvw) {
+                    s.vanVleckWeisskopfLines++;
+                    if (PhysicalConstants.SECOND_RADIATION_CONSTANT_CM_K * centre
+                            > VanVleckWeisskopfProfile.MAX_REDUCED_FREQUENCY * temperatureK) {
+                        s.vanVleckWeisskopfOutsideLimit++;
+                    }
+                }
+                s.usedVanVleckWeisskopf[m] = vvw;
                 s.keyCm1[m] = nu;
-                s.centerCm1[m] = nu + shift[i];
+                s.centerCm1[m] = centre;
                 s.usedIntensity[m] = sT;
                 s.usedDoppler[m] = aD;
                 s.usedLorentz[m] = gL;
                 s.usedChi[m] = chiLine;
+                s.usedChiExempt[m] = chiLine ? 1.0 - chiShare : 0.0;
                 m++;
-                WingKernel k = chiLine ? kernel : kernelNoChi;
-                s.lostIntensity[i] = sT * k.lostFraction(effective, aD, gL);
+                double lost = kernelNoChi.lostFraction(effective, aD, gL);
+                if (chiLine) {
+                    // linear in χ: the CO2-broadened share w loses what the χ kernel loses, the rest the plain one
+                    lost = chiShare * kernel.lostFraction(effective, aD, gL) + (1.0 - chiShare) * lost;
+                }
+                s.lostIntensity[i] = sT * lost;
+                // a symmetric shape puts part of a low-frequency line's area at ν ≤ 0: counted as lost, reported
+                s.negativeIntensity[i] = vvw ? 0.0
+                        : sT * kernelNoChi.negativeFrequencyFraction(effective, centre, aD, gL);
+                s.lostIntensity[i] += s.negativeIntensity[i];
                 if (nu >= gridFirstCm1 && nu <= gridLastCm1) {
                     // resolution is judged on the line's full half width (Voigt: Olivero–Longbothum), which is αD
                     // at low pressure: a pressure-broadened line is resolved even when αD is below the step
@@ -807,12 +947,16 @@ public final class CrossSectionCalculator {
                     default -> {
                         usedIntensity.add(sT);
                         lostIntensity.add(s.lostIntensity[i]);
+                        negativeIntensity.add(s.negativeIntensity[i]);
                     }
                 }
             }
             linesUsed += s.count;
             linesBelowThreshold += s.belowThreshold;
             linesWithoutWidth += s.withoutWidth;
+            linesVanVleckWeisskopf += s.vanVleckWeisskopfLines;
+            linesVanVleckWeisskopfOutsideLimit += s.vanVleckWeisskopfOutsideLimit;
+            linesChiOutsideValidity += s.chiOutsideValidity;
             // strictly smaller: the first line of the smallest ratio wins, as in one pass over all lines
             if (s.worstResolution < worstResolution) {
                 worstResolution = s.worstResolution;
@@ -857,6 +1001,24 @@ public final class CrossSectionCalculator {
             if (linesWithoutWidth > 0) {
                 warnings.add(linesWithoutWidth + " lines have zero Doppler and Lorentz width and were left out");
             }
+            double negativeFraction = used > 0 ? negativeIntensity.value() / used : 0.0;
+            if (negativeFraction > NEGATIVE_WAVENUMBER_WARNING_FRACTION) {
+                warnings.add(String.format(Locale.ROOT, "%.3g of the line intensity falls at wavenumbers <= 0 under "
+                        + "the %s shape and is lost (use --shape vvw for low-frequency lines)", negativeFraction,
+                        shape.label()));
+            }
+            if (linesChiOutsideValidity > 0) {
+                warnings.add(String.format(Locale.ROOT, "%d CO2 lines lie outside the chi factor's range of validity "
+                        + "(T %.0f-%.0f K, line centres %.0f-%.0f cm-1): their wings are left Lorentzian",
+                        linesChiOutsideValidity, PerrinHartmannChi.VALID_MIN_TEMPERATURE_K,
+                        PerrinHartmannChi.VALID_MAX_TEMPERATURE_K, PerrinHartmannChi.VALID_MIN_CENTRE_CM1,
+                        PerrinHartmannChi.VALID_MAX_CENTRE_CM1));
+            }
+            if (linesVanVleckWeisskopfOutsideLimit > 0) {
+                warnings.add(linesVanVleckWeisskopfOutsideLimit + " lines have the Van Vleck-Weisskopf shape with "
+                        + "c2*nu0/T > " + VanVleckWeisskopfProfile.MAX_REDUCED_FREQUENCY + ", where its (nu/nu0)^2 "
+                        + "factor (the h*nu << kT limit) is more than 1 % from the Van Vleck-Huber factor");
+            }
             for (String w : tally.warnings()) {
                 // the tally words its lines for printing; the result's warnings carry no prefix
                 warnings.add(w.startsWith("warning: ") ? w.substring("warning: ".length()) : w);
@@ -870,6 +1032,16 @@ public final class CrossSectionCalculator {
             m.put("pressure_atm", Double.toString(pressureAtm));
             m.put("composition", request.composition().toString());
             m.put("line_shape", shape.label());
+            m.put("line_shape_rule", shapeRule(shape));
+            m.put("lines_van_vleck_weisskopf", Long.toString(linesVanVleckWeisskopf));
+            if (vanVleckWeisskopfEngine != null) {
+                m.put("exact_summation", "lines with the Van Vleck-Weisskopf shape or chi on part of their width "
+                        + "summed by the exact engine; the " + engine.id() + " engine sums the others");
+            }
+            m.put("negative_wavenumber_loss_fraction", Double.toString(negativeFraction));
+            if (chiForCo2Lines) {
+                m.put("wing.chi.lines_outside_validity", Long.toString(linesChiOutsideValidity));
+            }
             m.putAll(kernel.describe());
             m.put("intensity_threshold_cm_per_molecule", Double.toString(threshold));
             m.put("line_selection", request.selection().describe());
@@ -894,6 +1066,32 @@ public final class CrossSectionCalculator {
             return new CrossSectionResult(sigma, linesUsed, linesBelowThreshold, droppedFraction, used, tally,
                     engine.estimatedRelativeError(), m, seconds, lossFraction, warnings);
         }
+    }
+
+    /**
+     * Fraction of the used intensity at ν ≤ 0 (lost under a symmetric shape) above which the result warns: 10⁻⁶,
+     * far below any engine tolerance, so that a warning appears only where the loss can matter.
+     */
+    static final double NEGATIVE_WAVENUMBER_WARNING_FRACTION = 1e-6;
+
+    /** The shape rule in words, for the metadata of σ files and tables. */
+    public static String shapeRule(LineShapeKind shape) {
+        return switch (shape) {
+            case VAN_VLECK_WEISSKOPF -> "Van Vleck-Weisskopf (1945) shape, (nu/nu0)^2 [V(nu-nu0) + V(nu+nu0)], for "
+                    + "every line with nu0 > 0";
+            case VOIGT, LORENTZ -> VanVleckWeisskopfProfile.ruleDescription();
+            default -> "doppler shape for every line (no pressure width: the Van Vleck-Weisskopf rule never applies)";
+        };
+    }
+
+    private static void copyRow(LineChunk from, int i, LineChunk to, int j) {
+        to.centerCm1[j] = from.centerCm1[i];
+        to.intensityCmPerMolecule[j] = from.intensityCmPerMolecule[i];
+        to.dopplerHwhmCm1[j] = from.dopplerHwhmCm1[i];
+        to.lorentzHwhmCm1[j] = from.lorentzHwhmCm1[i];
+        to.chiFactor[j] = from.chiFactor[i];
+        to.vanVleckWeisskopf[j] = from.vanVleckWeisskopf[i];
+        to.chiExemptShare[j] = from.chiExemptShare[i];
     }
 
     /** The pure shape the Voigt kernels reduce to for these widths (for the wing-loss formulas). */
@@ -962,6 +1160,17 @@ public final class CrossSectionCalculator {
         @Override
         public synchronized double partitionSum(int moleculeId, int isotopologue, double temperatureK) {
             return delegate.partitionSum(moleculeId, isotopologue, temperatureK);
+        }
+
+        @Override
+        public synchronized String partitionSumSource(int moleculeId, int isotopologue, double temperatureK) {
+            return delegate.partitionSumSource(moleculeId, isotopologue, temperatureK);
+        }
+
+        @Override
+        public synchronized List<String> partitionSumWarnings(int moleculeId, int isotopologue,
+                                                              double temperatureK) {
+            return delegate.partitionSumWarnings(moleculeId, isotopologue, temperatureK);
         }
     }
 }

@@ -17,7 +17,8 @@ import org.linewright.ingest.InputException;
  * @param composition                     mole fractions of the background gases
  * @param grid                            the wavenumber grid σ is computed on
  * @param wings                           cutoff, pedestal and χ-factor treatment
- * @param shape                           line shape: Voigt, Doppler only or Lorentz only
+ * @param shape                           line shape: Voigt, Doppler only, Lorentz only or Van Vleck–Weisskopf
+ *                                        for every line (Voigt and Lorentz give it to low-frequency lines by a rule)
  * @param intensityThresholdCmPerMolecule lines with S(T) below this are left out (0 keeps every line)
  * @param selection                       species filter ({@link LineSelection#ALL} for every line)
  * @param widths                          width source options ({@link WidthOptions#DEFAULTS})
@@ -47,11 +48,6 @@ public record CrossSectionRequest(double temperatureK, double pressureAtm, Compo
         if (!(intensityThresholdCmPerMolecule >= 0) || Double.isInfinite(intensityThresholdCmPerMolecule)) {
             throw new InputException("intensity threshold: " + intensityThresholdCmPerMolecule
                     + " cm/molecule (expected a non-negative finite value)");
-        }
-        if (shape == LineShapeKind.VAN_VLECK_WEISSKOPF) {
-            // the engines do not yet carry the per-line shape: refuse rather than compute Voigt under its name
-            throw new InputException("line shape vvw: not yet available in cross sections (expected voigt, doppler "
-                    + "or lorentz)");
         }
         if (shape == LineShapeKind.LORENTZ && pressureAtm == 0) {
             throw new InputException("line shape lorentz at zero pressure: every line would have zero width "

@@ -22,6 +22,20 @@ public final class LineChunk {
     public final double[] lorentzHwhmCm1;
     /** Whether the line gets the sub-Lorentzian χ factor (CO2 broadened by CO2). */
     public final boolean[] chiFactor;
+    /**
+     * Whether the line has the Van Vleck–Weisskopf shape (see
+     * {@link org.linewright.broadening.voigt.VanVleckWeisskopfProfile}) instead of the Voigt profile. Engines that
+     * do not evaluate it leave such lines to {@link org.linewright.grid.engine.exact.ExactEngine} (the
+     * cross-section calculator routes them).
+     */
+    public final boolean[] vanVleckWeisskopf;
+    /**
+     * For a line with {@link #chiFactor}: the share 1 − w of its Lorentz width from gases the χ factor does not
+     * apply to (w the CO2-broadened share), so that its far wing is (1 − w)·V + w·χ·V. 0 (the default) applies χ
+     * to the whole line. Engines that do not evaluate it leave such lines to
+     * {@link org.linewright.grid.engine.exact.ExactEngine} (the cross-section calculator routes them).
+     */
+    public final double[] chiExemptShare;
 
     public LineChunk(int capacity) {
         centerCm1 = new double[capacity];
@@ -29,6 +43,8 @@ public final class LineChunk {
         dopplerHwhmCm1 = new double[capacity];
         lorentzHwhmCm1 = new double[capacity];
         chiFactor = new boolean[capacity];
+        vanVleckWeisskopf = new boolean[capacity];
+        chiExemptShare = new double[capacity];
     }
 
     public int capacity() {

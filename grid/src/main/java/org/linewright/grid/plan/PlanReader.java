@@ -278,7 +278,7 @@ public final class PlanReader {
         try {
             shape = LineShapeKind.parse(shapeText);
         } catch (IllegalArgumentException e) {
-            throw error("profile.shape", "\"" + shapeText + "\"", "voigt, doppler or lorentz");
+            throw error("profile.shape", "\"" + shapeText + "\"", "voigt, doppler, lorentz or vvw");
         }
         double cutoff = number(toml, "profile.cutoff_cm1", 25.0);
         if (!(cutoff > 0) || !Double.isFinite(cutoff)) {

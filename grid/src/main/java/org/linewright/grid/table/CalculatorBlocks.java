@@ -74,6 +74,9 @@ public final class CalculatorBlocks implements BlockCalculator {
                 }
             }
         }
+        // lines that had the Van Vleck-Weisskopf shape (recorded in the table as count.lines_van_vleck_weisskopf)
+        counts.put("lines_van_vleck_weisskopf",
+                Long.parseLong(r.metadata().getOrDefault("lines_van_vleck_weisskopf", "0")));
         return new BlockResult(r.sigmaCm2PerMolecule(), r.linesUsed(), r.linesBelowThreshold(), counts,
                 r.estimatedRelativeError(), r.warnings());
     }

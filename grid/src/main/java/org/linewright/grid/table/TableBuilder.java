@@ -29,6 +29,7 @@ import org.linewright.ingest.InputException;
 import org.linewright.ingest.ToolVersion;
 import org.linewright.ingest.partition.PartitionSums;
 import org.linewright.ingest.partition.TableSpec;
+import org.linewright.ingest.partition.PartitionSumNotes;
 import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.store.LineQuery;
 import org.linewright.ingest.store.LineStore;
@@ -235,6 +236,20 @@ public final class TableBuilder {
             // pressure-major, as the cells are stored
             metadata.put("estimated_relative_error_by_cell", byCell.toString());
             metadata.put("build_cells", Integer.toString(cells));
+            // per isotopologue, where Q(T) came from at the plan's temperatures (distinct sources joined), and why
+            // a value may be off
+            Map<String, java.util.LinkedHashSet<String>> qSources = new java.util.TreeMap<>();
+            for (double t : plan.temperaturesK()) {
+                PartitionSumNotes notes = PartitionSumNotes.of(registry, loaded.stores(), t);
+                notes.metadata().forEach((k, v) -> {
+                    if (k.startsWith("partition_sum.")) {
+                        qSources.computeIfAbsent(k, x -> new java.util.LinkedHashSet<>()).add(v);
+                    }
+                });
+                warnings.addAll(notes.warnings());
+            }
+            qSources.forEach((k, v) -> metadata.put(k, String.join("; ", v)));
+            metadata.put("line_shape_rule", CrossSectionCalculator.shapeRule(plan.profile().shape()));
             int w = 0;
             for (String text : warnings) {
                 metadata.put("warning." + (++w), text);

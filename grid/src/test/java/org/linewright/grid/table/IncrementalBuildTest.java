@@ -180,6 +180,15 @@ class IncrementalBuildTest {
         CrossSectionTable a = CrossSectionTable.open(expected);
         CrossSectionTable b = CrossSectionTable.open(actual);
         assertArrayEquals(a.wavenumberCm1(), b.wavenumberCm1());
+        // the table records where Q(T) of each isotopologue came from (12C16O is 5/1, HITRAN numbering)
+        String q = b.metadata().get("partition_sum.5/1");
+        if (q == null || q.isBlank()) {
+            throw new AssertionError("no partition-sum source for 5/1 in " + b.metadata().keySet());
+        }
+        // and the line-shape rule with the count of lines that had the Van Vleck-Weisskopf shape
+        if (!b.metadata().containsKey("line_shape_rule") || !b.metadata().containsKey("count.lines_van_vleck_weisskopf")) {
+            throw new AssertionError("no line-shape rule or Van Vleck-Weisskopf count in " + b.metadata().keySet());
+        }
         for (int p = 0; p < PRESSURES_BAR.length; p++) {
             for (int t = 0; t < TEMPERATURES_K.length; t++) {
                 double[] x = a.sigma(p, t);

@@ -27,7 +27,10 @@ import org.linewright.grid.wavenumber.WavenumberGrid;
  * with V the area-normalised Voigt profile evaluated by {@link org.linewright.broadening.voigt.VoigtProfile}
  * (Faddeeva function by Humlíček/Weideman-type methods, relative error below 1×10⁻⁹ in the far-wing closed
  * forms and 1×10⁻¹³ near the centre; the pure Doppler and Lorentz shapes are its limits αD = 0 or γL = 0), and
- * the cutoff d_i, pedestal and χ factor applied by {@link WingKernel}. Its error is that of the profile; the
+ * the cutoff d_i, pedestal and χ factor applied by {@link WingKernel}. A line flagged
+ * {@link LineChunk#vanVleckWeisskopf} gets the Van Vleck–Weisskopf shape
+ * (ν/ν₀)²·[V(ν − ν₀) + V(ν + ν₀)] instead (J.H. Van Vleck and V.F. Weisskopf, Rev. Mod. Phys. 17 (1945) 227; see
+ * {@link org.linewright.broadening.voigt.VanVleckWeisskopfProfile}) on the grid points within its cutoff. Its error is that of the profile; the
  * {@link #estimatedRelativeError()} is 0.
  *
  * <p>Parallel scheme: the grid is cut into fixed blocks of {@value #BLOCK_POINTS} points (independent of the
@@ -219,9 +222,19 @@ public final class ExactEngine implements CrossSectionEngine {
             int blockTo = Math.min(points, blockFrom + BLOCK_POINTS);
             for (int p = blockStart[b], end = blockStart[b + 1]; p < end; p++) {
                 int i = pairs[p];
-                WingKernel k = c.chiFactor[i] ? kernel : kernelNoChi;
-                k.addLine(LineShapeKind.VOIGT, g, Math.max(blockFrom, lineLo[i]), Math.min(blockTo, lineHi[i]),
-                        c.centerCm1[i], c.dopplerHwhmCm1[i], c.lorentzHwhmCm1[i], c.intensityCmPerMolecule[i], out);
+                int from = Math.max(blockFrom, lineLo[i]);
+                int to = Math.min(blockTo, lineHi[i]);
+                double s = c.intensityCmPerMolecule[i];
+                double exempt = c.chiFactor[i] ? c.chiExemptShare[i] : 1.0;
+                // the profile is linear in χ: (1 − w)·[line without χ] + w·[line with χ], same cutoff for both
+                if (exempt < 1.0) {
+                    kernel.addLine(LineShapeKind.VOIGT, c.vanVleckWeisskopf[i], g, from, to, c.centerCm1[i],
+                            c.dopplerHwhmCm1[i], c.lorentzHwhmCm1[i], s * (1.0 - exempt), out);
+                }
+                if (exempt > 0.0) {
+                    kernelNoChi.addLine(LineShapeKind.VOIGT, c.vanVleckWeisskopf[i], g, from, to, c.centerCm1[i],
+                            c.dopplerHwhmCm1[i], c.lorentzHwhmCm1[i], s * exempt, out);
+                }
             }
         }
     }
