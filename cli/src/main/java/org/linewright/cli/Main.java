@@ -19,10 +19,31 @@ public final class Main {
         System.setProperty("java.awt.headless", "true");
         PrintWriter out = new PrintWriter(System.out, true, Charset.defaultCharset());
         PrintWriter err = new PrintWriter(System.err, true, Charset.defaultCharset());
+        Thread.setDefaultUncaughtExceptionHandler((thread, failure) -> {
+            // A thread outside any executor (or a pool thread given a bare Runnable) died: one line, not the JVM's
+            // stack trace; after a JVM error (out of memory) nothing can be trusted to finish, so stop at once.
+            err.println(uncaughtLine(thread, failure));
+            err.flush();
+            if (failure instanceof VirtualMachineError) {
+                Runtime.getRuntime().halt(ExitCodes.INTERNAL_ERROR);
+            }
+        });
         int code = execute(out, err, args);
         out.flush();
         err.flush();
         System.exit(code);
+    }
+
+    /**
+     * The one line printed when {@code failure} escapes a thread other than the command's: what ran out and what
+     * to change for a JVM error, else the internal error and its thread.
+     */
+    static String uncaughtLine(Thread thread, Throwable failure) {
+        String resources = JvmErrors.describe(failure);
+        String line = resources != null ? resources
+                : "internal error in thread '" + thread.getName() + "': " + failure.getClass().getName()
+                        + (failure.getMessage() == null ? "" : ": " + ErrorReporting.oneLine(failure.getMessage()));
+        return ErrorReporting.PREFIX + ErrorReporting.printable(line);
     }
 
     /**

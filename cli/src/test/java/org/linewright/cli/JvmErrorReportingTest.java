@@ -7,6 +7,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.stream.IntStream;
 
 import org.junit.jupiter.api.Test;
 import picocli.CommandLine;
@@ -32,6 +36,29 @@ class JvmErrorReportingTest {
                 case "direct" -> throw new OutOfMemoryError("Direct buffer memory");
                 case "threads" -> throw new OutOfMemoryError("unable to create native thread: possibly out of memory");
                 case "wrapped" -> throw new IllegalStateException("worker failed", new OutOfMemoryError("Java heap space"));
+                case "executor" -> {
+                    // as the engines run their slices: a fixed pool, the failure comes back through Future.get
+                    ExecutorService pool = Executors.newFixedThreadPool(2);
+                    try {
+                        pool.submit(() -> {
+                            throw new OutOfMemoryError("Java heap space");
+                        }).get();
+                    } catch (InterruptedException | ExecutionException e) {
+                        throw new IllegalStateException("slice failed", e);
+                    } finally {
+                        pool.shutdownNow();
+                    }
+                    return 0;
+                }
+                case "parallel" -> {
+                    // a parallel stream rethrows a worker's error in the calling thread
+                    IntStream.range(0, 64).parallel().forEach(i -> {
+                        if (i == 37) {
+                            throw new OutOfMemoryError("Java heap space");
+                        }
+                    });
+                    return 0;
+                }
                 default -> throw new StackOverflowError();
             }
         }
@@ -69,6 +96,29 @@ class JvmErrorReportingTest {
     void heapExhaustionSaysHowToGiveMoreHeap() {
         assertOneLine(run("explode"), "Java heap", "LINEWRIGHT_JAVA_OPTS=-Xmx", "--threads", "block_points");
         assertOneLine(run("explode", "--what", "wrapped"), "Java heap", "LINEWRIGHT_JAVA_OPTS=-Xmx");
+    }
+
+    @Test
+    void workerThreadsReportTheSameLine() {
+        assertOneLine(run("explode", "--what", "executor"), "Java heap", "LINEWRIGHT_JAVA_OPTS=-Xmx", "--threads");
+        assertOneLine(run("explode", "--what", "parallel"), "Java heap", "LINEWRIGHT_JAVA_OPTS=-Xmx", "--threads");
+    }
+
+    @Test
+    void aThreadOutsideAnyExecutorGetsOneLineToo() throws InterruptedException {
+        // the line Main's default uncaught-exception handler prints for a bare thread that dies
+        Throwable[] seen = new Throwable[1];
+        Thread bare = new Thread(() -> {
+            throw new OutOfMemoryError("Java heap space");
+        }, "reader-1");
+        bare.setUncaughtExceptionHandler((t, e) -> seen[0] = e);
+        bare.start();
+        bare.join();
+        String line = Main.uncaughtLine(bare, seen[0]);
+        assertTrue(line.startsWith(ErrorReporting.PREFIX) && line.contains("Java heap")
+                && line.contains("LINEWRIGHT_JAVA_OPTS=-Xmx") && !line.contains("\n"), line);
+        String other = Main.uncaughtLine(bare, new IllegalStateException("bad\nstate"));
+        assertTrue(other.contains("internal error in thread 'reader-1'") && other.lines().count() == 1, other);
     }
 
     @Test
