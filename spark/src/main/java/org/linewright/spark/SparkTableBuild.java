@@ -124,6 +124,16 @@ public final class SparkTableBuild implements AutoCloseable {
                 + CONNECT_TIMEOUT_MS / 1000 + " s); check the address and that the cluster is up");
     }
 
+    /**
+     * The command line's entry ({@code linewright build --spark MASTER}): starts Spark on {@code master}, builds,
+     * stops. Progress goes to stderr unless {@code quiet}.
+     */
+    public static BuildReport run(TablePlan plan, String master, boolean quiet) throws IOException {
+        try (SparkTableBuild b = start(master, quiet ? null : System.err)) {
+            return b.build(plan, BuildListener.NONE);
+        }
+    }
+
     /** Builds {@code plan} with its pending cells as Spark tasks. */
     public BuildReport build(TablePlan plan, BuildListener listener) throws IOException {
         checkInputsOnExecutors(plan);
