@@ -18,6 +18,7 @@ final class SparkProgress extends SparkListener {
     private int failed;
     private long startNs;
     private long lastNs;
+    private final java.util.List<Double> taskSeconds = new java.util.ArrayList<>();
 
     SparkProgress(PrintStream out) {
         this.out = out;
@@ -27,6 +28,7 @@ final class SparkProgress extends SparkListener {
         total = cells;
         done = 0;
         failed = 0;
+        taskSeconds.clear();
         startNs = System.nanoTime();
         lastNs = startNs;
         active = true;
@@ -37,6 +39,11 @@ final class SparkProgress extends SparkListener {
             print();
         }
         active = false;
+    }
+
+    /** Run times of the successful cell tasks of the last build (executor run time), s. */
+    synchronized java.util.List<Double> taskSeconds() {
+        return java.util.List.copyOf(taskSeconds);
     }
 
     synchronized int failedTasks() {
@@ -51,6 +58,9 @@ final class SparkProgress extends SparkListener {
         synchronized (this) {
             if (end.taskInfo().successful()) {
                 done++;
+                if (end.taskMetrics() != null) {
+                    taskSeconds.add(end.taskMetrics().executorRunTime() * 1e-3);
+                }
             } else {
                 failed++;
             }

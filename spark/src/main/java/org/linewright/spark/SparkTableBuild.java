@@ -45,6 +45,7 @@ public final class SparkTableBuild implements AutoCloseable {
     private final JavaSparkContext context;
     private final boolean owned;
     private final SparkProgress progress;
+    private volatile double taskPhaseSeconds;
 
     private SparkTableBuild(JavaSparkContext context, boolean owned, PrintStream progressOut) {
         this.context = context;
@@ -141,6 +142,7 @@ public final class SparkTableBuild implements AutoCloseable {
         return TableBuilder.build(plan, CalculatorBlocks.factory(), 1, false, listener, RUNNER,
                 (p, layout, pending, workDir) -> {
                     progress.begin(pending.size());
+                    long t0 = System.nanoTime();
                     String planFile = p.planFile().toAbsolutePath().toString();
                     int blocks = layout.blocks();
                     double reach = layout.reachCm1();
@@ -152,6 +154,7 @@ public final class SparkTableBuild implements AutoCloseable {
                         throw new IOException("a Spark task failed " + TASK_ATTEMPTS + " times: "
                                 + CellTask.rootMessage(e), e);
                     } finally {
+                        taskPhaseSeconds = (System.nanoTime() - t0) * 1e-9;
                         progress.end();
                     }
                 });
@@ -170,6 +173,16 @@ public final class SparkTableBuild implements AutoCloseable {
             throw new InputException(missing.get(0) + ": not readable on a Spark executor (" + missing.size()
                     + " input(s) missing there); put the plan and its line lists on storage every executor sees");
         }
+    }
+
+    /** Executor run time of each successful cell task of the last build, s (for benchmarks). */
+    public List<Double> taskSeconds() {
+        return progress.taskSeconds();
+    }
+
+    /** Wall time of the last build's task phase (from submitting the cells to the last one saved), s. */
+    public double taskPhaseSeconds() {
+        return taskPhaseSeconds;
     }
 
     /** Spark's context (for tests). */
