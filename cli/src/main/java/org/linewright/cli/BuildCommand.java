@@ -61,6 +61,11 @@ public final class BuildCommand implements Callable<Integer> {
             description = "Threads for the engine (default: the number of processors); results are the same for any number.")
     private Integer threads;
 
+    @Option(names = "--spark", paramLabel = "MASTER",
+            description = "Compute the cells as Apache Spark tasks: local[N] (embedded, N task threads), "
+                    + "spark://HOST:PORT, yarn or k8s://URL (see docs/spark.md). Same table bits as a local build.")
+    private String sparkMaster;
+
     @Option(names = "--plot", paramLabel = "FILE.png",
             description = "Also plot σ at every pressure and temperature of the table, one curve each.")
     private Path plot;
@@ -79,7 +84,9 @@ public final class BuildCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         TablePlan plan = PlanReader.read(planFile);
         BuildReport report;
-        try (Progress progress = Progress.start("build", -1, "points", 1, quiet || dryRun)) {
+        if (sparkMaster != null && !dryRun) {
+            report = SparkRunner.build(spec, plan, sparkMaster, quiet);
+        } else try (Progress progress = Progress.start("build", -1, "points", 1, quiet || dryRun)) {
             report = TableBuilder.build(plan, CalculatorBlocks.factory(), threadCount, dryRun, new BuildListener() {
                 @Override
                 public void sourceStarted(Path source, long fileBytes) {

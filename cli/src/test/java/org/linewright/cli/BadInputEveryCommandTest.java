@@ -193,6 +193,7 @@ class BadInputEveryCommandTest {
                 v.add(new String[] {"x"});
             }
             case "--engine" -> v.add(new String[] {"bogus"});
+            case "--spark" -> v.add(new String[] {"bogus://nowhere"});
             case "--tolerance" -> {
                 v.add(new String[] {"-1"});
                 v.add(new String[] {"tight"});

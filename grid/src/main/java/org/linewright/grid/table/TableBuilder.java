@@ -101,6 +101,60 @@ public final class TableBuilder {
      */
     public static BuildReport build(TablePlan plan, CalculatorFactory factory, int threads, boolean dryRun,
                                     BuildListener listener) throws IOException {
+        return build(plan, factory, threads, dryRun, listener, LOCAL_RUNNER, null);
+    }
+
+    /** The runner named in a table's metadata when its cells were computed in this process. */
+    public static final String LOCAL_RUNNER = "local";
+
+    /**
+     * A cell still to compute.
+     *
+     * @param pressureIndex    index into the plan's pressures
+     * @param temperatureIndex index into the plan's temperatures
+     * @param block            block along the grid
+     * @param hash             the cell's input hash, the name its result is saved under in the block store
+     */
+    public record PendingCell(int pressureIndex, int temperatureIndex, int block, String hash)
+            implements java.io.Serializable {
+    }
+
+    /**
+     * Computes a build's pending cells somewhere else (for example as tasks of a cluster) and saves each result in
+     * the work folder's {@link BlockStore} under the cell's hash, before the builder assembles the table from the
+     * block store exactly as after a local build.
+     */
+    @FunctionalInterface
+    public interface CellRunner {
+        /**
+         * @param plan    the plan
+         * @param layout  the build's blocks (the runner's workers must derive the same layout from the plan)
+         * @param pending the cells to compute, pressure-major
+         * @param workDir the work folder holding the block store
+         */
+        void run(TablePlan plan, BlockLayout layout, List<PendingCell> pending, Path workDir) throws IOException;
+    }
+
+    /** Computes one cell of a build: the block's slice of the grid at the cell's (p, T). */
+    public static BlockResult computeCell(BlockCalculator calculator, TablePlan plan, BlockLayout layout,
+                                          int pressureIndex, int temperatureIndex, int block) throws IOException {
+        BlockResult r = calculator.compute(layout.slice(block), plan.pressuresAtm()[pressureIndex],
+                plan.temperaturesK()[temperatureIndex], layout.lineMinCm1(block), layout.lineMaxCm1(block));
+        if (r.sigmaCm2PerMolecule().length != layout.toIndex(block) - layout.fromIndex(block)) {
+            throw new IllegalStateException("calculator returned " + r.sigmaCm2PerMolecule().length
+                    + " values for a block of " + (layout.toIndex(block) - layout.fromIndex(block)));
+        }
+        return r;
+    }
+
+    /**
+     * As {@link #build(TablePlan, CalculatorFactory, int, boolean, BuildListener)}, with the pending cells
+     * computed by {@code cellRunner} (null: in this process) and {@code runner} recorded in the table's metadata
+     * as {@code runner}. Everything else — hashes, manifest, block store, table bits — is the same whichever
+     * computes the cells, so builds by either reuse each other's cells.
+     */
+    public static BuildReport build(TablePlan plan, CalculatorFactory factory, int threads, boolean dryRun,
+                                    BuildListener listener, String runner, CellRunner cellRunner) throws IOException {
         long t0 = System.nanoTime();
         MoleculeRegistry registry = registry(plan);
         LineCache.Loaded loaded = LineCache.load(plan.sources(), plan.baseDir().resolve(LineCache.CACHE_DIR),
@@ -140,6 +194,7 @@ public final class TableBuilder {
             }
             BlockStore blocks = dryRun ? null : new BlockStore(work);
             List<String> pending = new ArrayList<>();
+            List<PendingCell> pendingCells = new ArrayList<>();
             long pendingPoints = 0;
             for (int p = 0; p < np; p++) {
                 for (int t = 0; t < nt; t++) {
@@ -152,6 +207,7 @@ public final class TableBuilder {
                                 : blocks.has(h);
                         if (!done) {
                             pending.add(describeCell(plan, layout, p, t, b));
+                            pendingCells.add(new PendingCell(p, t, b, h));
                             pendingPoints += layout.toIndex(b) - layout.fromIndex(b);
                         }
                     }
@@ -165,6 +221,17 @@ public final class TableBuilder {
                         (System.nanoTime() - t0) * 1e-9);
             }
             manifest.write(work);
+            if (cellRunner != null && !pendingCells.isEmpty()) {
+                cellRunner.run(plan, layout, List.copyOf(pendingCells), work);
+                for (PendingCell c : pendingCells) {
+                    if (!blocks.has(c.hash())) {
+                        throw new IOException(work + ": the " + runner + " runner did not save cell "
+                                + BuildManifest.cellKey(c.pressureIndex(), c.temperatureIndex(), c.block()));
+                    }
+                    listener.computed(c.pressureIndex(), c.temperatureIndex(), c.block(),
+                            layout.toIndex(c.block()) - layout.fromIndex(c.block()));
+                }
+            }
             long linesUsed = 0;
             double maxError = 0;
             // each cell's estimate: the largest over its blocks
@@ -187,12 +254,7 @@ public final class TableBuilder {
                         if (blocks.has(h)) {
                             r = inMemory ? blocks.load(h) : blocks.loadSummary(h);
                         } else {
-                            r = calculator.compute(layout.slice(b), pressuresAtm[p], plan.temperaturesK()[t],
-                                    layout.lineMinCm1(b), layout.lineMaxCm1(b));
-                            if (r.sigmaCm2PerMolecule().length != layout.toIndex(b) - layout.fromIndex(b)) {
-                                throw new IllegalStateException("calculator returned " + r.sigmaCm2PerMolecule().length
-                                        + " values for a block of " + (layout.toIndex(b) - layout.fromIndex(b)));
-                            }
+                            r = computeCell(calculator, plan, layout, p, t, b);
                             blocks.save(h, r);
                             listener.computed(p, t, b, r.sigmaCm2PerMolecule().length);
                         }
@@ -219,6 +281,7 @@ public final class TableBuilder {
             metadata.put("tool_version", ToolVersion.get());
             metadata.put("created_utc", Instant.now().toString());
             metadata.put("plan_file", plan.planFile().getFileName().toString());
+            metadata.put("runner", runner);
             loaded.inputSha256().forEach((name, sha) -> metadata.put("input." + name + ".sha256", sha));
             parameters.forEach((k, v) -> metadata.put(k, v));
             metadata.put("pressure_bar_values", join(plan.pressuresBar()));
