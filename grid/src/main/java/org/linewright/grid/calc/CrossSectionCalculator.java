@@ -48,6 +48,7 @@ import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.partition.StoredPartitionFunctions;
 import org.linewright.ingest.source.IsotopologueLookup;
+import org.linewright.ingest.source.SynchronizedIsotopologueLookup;
 import org.linewright.ingest.store.LineCursor;
 import org.linewright.ingest.store.LineQuery;
 import org.linewright.ingest.store.LineStore;
@@ -172,7 +173,7 @@ public final class CrossSectionCalculator {
         this.chunkLines = chunkLines;
         // The stores' own partition functions (ExoMol-style .pf) apply at every temperature; user tables win.
         IsotopologueLookup withData = StoredPartitionFunctions.withStoredTables(lookup, this.stores);
-        this.lookup = threads == 1 ? withData : new SerializedLookup(withData);
+        this.lookup = threads == 1 ? withData : SynchronizedIsotopologueLookup.of(withData);
         if (threads == 1) {
             this.workers = null;
         } else {
@@ -1119,58 +1120,5 @@ public final class CrossSectionCalculator {
             }
         }
         b.size = n;
-    }
-
-    /**
-     * The registry called by one thread at a time: the workers' caches ask it only at the first sight of each
-     * isotopologue, so the lock costs nothing and a lookup need not be thread-safe.
-     */
-    private static final class SerializedLookup implements IsotopologueLookup {
-        private final IsotopologueLookup delegate;
-
-        SerializedLookup(IsotopologueLookup delegate) {
-            this.delegate = delegate;
-        }
-
-        @Override
-        public synchronized Id byIsotopeFormula(String isotopeFormula) {
-            return delegate.byIsotopeFormula(isotopeFormula);
-        }
-
-        @Override
-        public synchronized Id byCatalogTag(int speciesTag) {
-            return delegate.byCatalogTag(speciesTag);
-        }
-
-        @Override
-        public synchronized boolean isKnown(int moleculeId, int isotopologue) {
-            return delegate.isKnown(moleculeId, isotopologue);
-        }
-
-        @Override
-        public synchronized double massGPerMol(int moleculeId, int isotopologue) {
-            return delegate.massGPerMol(moleculeId, isotopologue);
-        }
-
-        @Override
-        public synchronized double naturalAbundance(int moleculeId, int isotopologue) {
-            return delegate.naturalAbundance(moleculeId, isotopologue);
-        }
-
-        @Override
-        public synchronized double partitionSum(int moleculeId, int isotopologue, double temperatureK) {
-            return delegate.partitionSum(moleculeId, isotopologue, temperatureK);
-        }
-
-        @Override
-        public synchronized String partitionSumSource(int moleculeId, int isotopologue, double temperatureK) {
-            return delegate.partitionSumSource(moleculeId, isotopologue, temperatureK);
-        }
-
-        @Override
-        public synchronized List<String> partitionSumWarnings(int moleculeId, int isotopologue,
-                                                              double temperatureK) {
-            return delegate.partitionSumWarnings(moleculeId, isotopologue, temperatureK);
-        }
     }
 }
