@@ -64,9 +64,16 @@ public final class VerifyCommand implements Callable<Integer> {
     @Option(names = "--report", paramLabel = "FILE", description = "Write the report to FILE (default: standard output).")
     private Path reportFile;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+    @Option(names = "--report-format", paramLabel = "FORMAT", defaultValue = "text",
             description = "Report format: text, csv or json (default: ${DEFAULT-VALUE}).")
     private String format;
+
+    /** Deprecated spelling of --report-format, read for one version. */
+    @Option(names = "--format", hidden = true, paramLabel = "FORMAT")
+    private void deprecatedReportFormat(String value) {
+        System.err.println("note: --format is deprecated, write --report-format");
+        format = value;
+    }
 
     @Option(names = "--plot", paramLabel = "FILE.png",
             description = "Draw the residuals of the intensity/Einstein-A relation and of the reference positions.")
