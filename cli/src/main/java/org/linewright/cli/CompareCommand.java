@@ -69,11 +69,14 @@ public final class CompareCommand implements Callable<Integer> {
             description = "Report format: text, csv or json (default: ${DEFAULT-VALUE}).")
     private String format;
 
+    /** Set by the deprecated spelling; applied after parsing, when picocli has filled in defaults. */
+    private String formatDeprecated;
+
     /** Deprecated spelling of --report-format, read for one version. */
     @Option(names = "--format", hidden = true, paramLabel = "FORMAT")
     private void deprecatedReportFormat(String value) {
         System.err.println("note: --format is deprecated, write --report-format");
-        format = value;
+        formatDeprecated = value;
     }
 
     @Option(names = "--max-shift", paramLabel = "WIDTH", converter = QuantityConverters.WavenumberInterval.class,
@@ -116,6 +119,9 @@ public final class CompareCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (formatDeprecated != null) {
+            format = formatDeprecated;
+        }
         ReportFormat reportFormat = ReportFormat.byId(format);
         double windowCm1 = window == null ? CompareOptions.DEFAULT_MATCH_WINDOW_CM1 : window.cm1();
         double toleranceCm1 = tolerance == null ? CompareOptions.DEFAULT_NEAREST_TOLERANCE_CM1 : tolerance.cm1();

@@ -111,11 +111,14 @@ public final class SigmaCommand implements Callable<Integer> {
                     + "(default ${DEFAULT-VALUE}; the exact engine ignores it). The summary prints the engine's estimate.")
     private double tolerance;
 
+    /** Set by the deprecated spelling; applied after parsing, when picocli has filled in defaults. */
+    private Double toleranceDeprecated;
+
     /** Deprecated spelling of --max-relative-error, read for one version. */
     @Option(names = "--tolerance", hidden = true, paramLabel = "T")
     private void deprecatedTolerance(double value) {
         System.err.println("note: --tolerance is deprecated, write --max-relative-error");
-        tolerance = value;
+        toleranceDeprecated = value;
     }
 
     @Option(names = "--shape", paramLabel = "SHAPE", defaultValue = "voigt",
@@ -126,11 +129,14 @@ public final class SigmaCommand implements Callable<Integer> {
             description = "Leave out lines with S(T) below this, cm/molecule (default ${DEFAULT-VALUE}: keep all).")
     private double threshold;
 
+    /** Set by the deprecated spelling; applied after parsing, when picocli has filled in defaults. */
+    private Double thresholdDeprecated;
+
     /** Deprecated spelling of --threshold-cm-per-molecule, read for one version. */
     @Option(names = "--threshold", hidden = true, paramLabel = "S")
     private void deprecatedThresholdCmPerMolecule(double value) {
         System.err.println("note: --threshold is deprecated, write --threshold-cm-per-molecule");
-        threshold = value;
+        thresholdDeprecated = value;
     }
 
     @Mixin
@@ -156,6 +162,12 @@ public final class SigmaCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (toleranceDeprecated != null) {
+            tolerance = toleranceDeprecated;
+        }
+        if (thresholdDeprecated != null) {
+            threshold = thresholdDeprecated;
+        }
         boolean quiet = root.globalOptions().quiet();
         CrossSectionFormat fileFormat = format == null ? CrossSectionFormat.fromExtension(out)
                 : CrossSectionFormat.parse(format);

@@ -68,11 +68,14 @@ public final class VerifyCommand implements Callable<Integer> {
             description = "Report format: text, csv or json (default: ${DEFAULT-VALUE}).")
     private String format;
 
+    /** Set by the deprecated spelling; applied after parsing, when picocli has filled in defaults. */
+    private String formatDeprecated;
+
     /** Deprecated spelling of --report-format, read for one version. */
     @Option(names = "--format", hidden = true, paramLabel = "FORMAT")
     private void deprecatedReportFormat(String value) {
         System.err.println("note: --format is deprecated, write --report-format");
-        format = value;
+        formatDeprecated = value;
     }
 
     @Option(names = "--plot", paramLabel = "FILE.png",
@@ -89,6 +92,9 @@ public final class VerifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (formatDeprecated != null) {
+            format = formatDeprecated;
+        }
         ReportFormat reportFormat = ReportFormat.byId(format);
         List<ReferenceLine> references = new ArrayList<>(ReferenceLines.builtIn());
         for (Path file : referenceFiles) {
