@@ -37,7 +37,7 @@ import picocli.CommandLine.Model.CommandSpec;
         description = {
             "Compare two line lists and report the lines added, removed and changed, each changed field with the "
                     + "size of its change, summarised per band (species and vibrational labels). Lines are paired by "
-                    + "species and quantum labels, else by nearest position within --tolerance.",
+                    + "species and quantum labels, else by nearest position within --pair-within.",
             "OLD and NEW are line stores or line-list files (read into temporary stores). Exit code 0 when the lists "
                     + "hold the same lines, 1 when they differ.",
             ""
@@ -46,7 +46,7 @@ import picocli.CommandLine.Model.CommandSpec;
             "",
             "Example:",
             "  linewright compare stores/co-2016 stores/co-2020 --report co-changes.csv --format csv",
-            "  linewright compare old.par new.par --window 0.1cm-1",
+            "  linewright compare old.par new.par --max-shift 0.1cm-1",
             "  linewright compare stores/co-2016 stores/co-2020 --plan plans/co-h2he.toml"
         })
 public final class CompareCommand implements Callable<Integer> {
@@ -65,17 +65,41 @@ public final class CompareCommand implements Callable<Integer> {
     @Option(names = "--report", paramLabel = "FILE", description = "Write the report to FILE (default: standard output).")
     private Path reportFile;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+    @Option(names = "--report-format", paramLabel = "FORMAT", defaultValue = "text",
             description = "Report format: text, csv or json (default: ${DEFAULT-VALUE}).")
     private String format;
 
-    @Option(names = "--window", paramLabel = "WIDTH", converter = QuantityConverters.WavenumberInterval.class,
+    /** Set by the deprecated spelling; applied after parsing, when picocli has filled in defaults. */
+    private String formatDeprecated;
+
+    /** Deprecated spelling of --report-format, read for one version. */
+    @Option(names = "--format", hidden = true, paramLabel = "FORMAT")
+    private void deprecatedReportFormat(String value) {
+        System.err.println("note: --format is deprecated, write --report-format");
+        formatDeprecated = value;
+    }
+
+    @Option(names = "--max-shift", paramLabel = "WIDTH", converter = QuantityConverters.WavenumberInterval.class,
             description = "Largest shift of a line whose labels are unchanged (default: 0.5 cm-1).")
     private Wavenumber window;
 
-    @Option(names = "--tolerance", paramLabel = "WIDTH", converter = QuantityConverters.WavenumberInterval.class,
+    @Option(names = "--pair-within", paramLabel = "WIDTH", converter = QuantityConverters.WavenumberInterval.class,
             description = "Lines whose labels changed are paired with the nearest line within this (default: 0.001 cm-1).")
     private Wavenumber tolerance;
+
+    /** Deprecated spelling of --max-shift, read for one version. */
+    @Option(names = "--window", hidden = true, paramLabel = "WIDTH", converter = QuantityConverters.WavenumberInterval.class)
+    private void deprecatedWindow(Wavenumber value) {
+        System.err.println("note: --window is deprecated, write --max-shift");
+        window = value;
+    }
+
+    /** Deprecated spelling of --pair-within, read for one version. */
+    @Option(names = "--tolerance", hidden = true, paramLabel = "WIDTH", converter = QuantityConverters.WavenumberInterval.class)
+    private void deprecatedTolerance(Wavenumber value) {
+        System.err.println("note: --tolerance is deprecated, write --pair-within");
+        tolerance = value;
+    }
 
     @Option(names = "--max-listed", paramLabel = "N", defaultValue = "100000",
             description = "Changes listed one by one in the report; all are counted (default: ${DEFAULT-VALUE}).")
@@ -95,14 +119,17 @@ public final class CompareCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (formatDeprecated != null) {
+            format = formatDeprecated;
+        }
         ReportFormat reportFormat = ReportFormat.byId(format);
         double windowCm1 = window == null ? CompareOptions.DEFAULT_MATCH_WINDOW_CM1 : window.cm1();
         double toleranceCm1 = tolerance == null ? CompareOptions.DEFAULT_NEAREST_TOLERANCE_CM1 : tolerance.cm1();
         if (!(windowCm1 > 0)) {
-            throw new InputException("--window: " + windowCm1 + " cm-1 (expected a positive width)");
+            throw new InputException("--max-shift: " + windowCm1 + " cm-1 (expected a positive width)");
         }
         if (!(toleranceCm1 >= 0)) {
-            throw new InputException("--tolerance: " + toleranceCm1 + " cm-1 (expected a width >= 0)");
+            throw new InputException("--pair-within: " + toleranceCm1 + " cm-1 (expected a width >= 0)");
         }
         if (maxListed < 0) {
             throw new InputException("--max-listed: " + maxListed + " (expected a whole number >= 0)");

@@ -53,9 +53,16 @@ public final class IngestCommand implements Callable<Integer> {
     @Option(names = "--store", required = true, paramLabel = "DIR", description = "The line store to write (created when missing).")
     private Path store;
 
-    @Option(names = "--format", paramLabel = "FORMAT",
+    @Option(names = "--input-format", paramLabel = "FORMAT",
             description = "Read every source as this format instead of detecting it: hitran160, hitran-delimited, exomol, catalog.")
     private String format;
+
+    /** Deprecated spelling of --input-format, read for one version. */
+    @Option(names = "--format", hidden = true, paramLabel = "FORMAT")
+    private void deprecatedInputFormat(String value) {
+        System.err.println("note: --format is deprecated, write --input-format");
+        format = value;
+    }
 
     @Option(names = "--lenient", description = "Go on after bad records; write them to the rejects file.")
     private boolean lenient;

@@ -106,18 +106,38 @@ public final class SigmaCommand implements Callable<Integer> {
             description = "Summation engine: exact or fast (default ${DEFAULT-VALUE}).")
     private String engine;
 
-    @Option(names = "--tolerance", paramLabel = "T", defaultValue = "1e-3",
+    @Option(names = "--max-relative-error", paramLabel = "T", defaultValue = "1e-3",
             description = "Largest relative error of the fast engine wherever sigma >= 1e-6 max sigma, in [1e-5, 0.1] "
                     + "(default ${DEFAULT-VALUE}; the exact engine ignores it). The summary prints the engine's estimate.")
     private double tolerance;
+
+    /** Set by the deprecated spelling; applied after parsing, when picocli has filled in defaults. */
+    private Double toleranceDeprecated;
+
+    /** Deprecated spelling of --max-relative-error, read for one version. */
+    @Option(names = "--tolerance", hidden = true, paramLabel = "T")
+    private void deprecatedTolerance(double value) {
+        System.err.println("note: --tolerance is deprecated, write --max-relative-error");
+        toleranceDeprecated = value;
+    }
 
     @Option(names = "--shape", paramLabel = "SHAPE", defaultValue = "voigt",
             description = "Line shape: voigt, doppler, lorentz or vvw (Van Vleck-Weisskopf for every line; voigt and lorentz give it to lines with gamma_L/nu0 > 1e-4 and c2*nu0/T <= 0.2) (default ${DEFAULT-VALUE}).")
     private String shape;
 
-    @Option(names = "--threshold", paramLabel = "S", defaultValue = "0",
+    @Option(names = "--threshold-cm-per-molecule", paramLabel = "S", defaultValue = "0",
             description = "Leave out lines with S(T) below this, cm/molecule (default ${DEFAULT-VALUE}: keep all).")
     private double threshold;
+
+    /** Set by the deprecated spelling; applied after parsing, when picocli has filled in defaults. */
+    private Double thresholdDeprecated;
+
+    /** Deprecated spelling of --threshold-cm-per-molecule, read for one version. */
+    @Option(names = "--threshold", hidden = true, paramLabel = "S")
+    private void deprecatedThresholdCmPerMolecule(double value) {
+        System.err.println("note: --threshold is deprecated, write --threshold-cm-per-molecule");
+        thresholdDeprecated = value;
+    }
 
     @Mixin
     private LineSelectionOptions lineSelection;
@@ -142,17 +162,23 @@ public final class SigmaCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (toleranceDeprecated != null) {
+            tolerance = toleranceDeprecated;
+        }
+        if (thresholdDeprecated != null) {
+            threshold = thresholdDeprecated;
+        }
         boolean quiet = root.globalOptions().quiet();
         CrossSectionFormat fileFormat = format == null ? CrossSectionFormat.fromExtension(out)
                 : CrossSectionFormat.parse(format);
         Composition composition = backgroundOptions.requiredComposition();
         LineShapeKind lineShape = parseShape(shape);
         if (!(threshold >= 0) || Double.isInfinite(threshold)) {
-            throw new InputException("--threshold: " + threshold + " (expected a non-negative intensity in cm/molecule)");
+            throw new InputException("--threshold-cm-per-molecule: " + threshold + " (expected a non-negative intensity in cm/molecule)");
         }
         if (!(tolerance > 0 && tolerance < 1)) {
             // checked for every engine: a value the exact engine ignores today is still a mistake of the caller
-            throw new InputException("--tolerance: " + tolerance + " (expected a target relative error between 0 and "
+            throw new InputException("--max-relative-error: " + tolerance + " (expected a target relative error between 0 and "
                     + "1, e.g. 1e-3)");
         }
         int threadCount = threads == null ? Runtime.getRuntime().availableProcessors() : threads;

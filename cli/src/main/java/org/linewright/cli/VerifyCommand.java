@@ -64,9 +64,19 @@ public final class VerifyCommand implements Callable<Integer> {
     @Option(names = "--report", paramLabel = "FILE", description = "Write the report to FILE (default: standard output).")
     private Path reportFile;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+    @Option(names = "--report-format", paramLabel = "FORMAT", defaultValue = "text",
             description = "Report format: text, csv or json (default: ${DEFAULT-VALUE}).")
     private String format;
+
+    /** Set by the deprecated spelling; applied after parsing, when picocli has filled in defaults. */
+    private String formatDeprecated;
+
+    /** Deprecated spelling of --report-format, read for one version. */
+    @Option(names = "--format", hidden = true, paramLabel = "FORMAT")
+    private void deprecatedReportFormat(String value) {
+        System.err.println("note: --format is deprecated, write --report-format");
+        formatDeprecated = value;
+    }
 
     @Option(names = "--plot", paramLabel = "FILE.png",
             description = "Draw the residuals of the intensity/Einstein-A relation and of the reference positions.")
@@ -82,6 +92,9 @@ public final class VerifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (formatDeprecated != null) {
+            format = formatDeprecated;
+        }
         ReportFormat reportFormat = ReportFormat.byId(format);
         List<ReferenceLine> references = new ArrayList<>(ReferenceLines.builtIn());
         for (Path file : referenceFiles) {

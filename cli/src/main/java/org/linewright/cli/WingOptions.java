@@ -18,9 +18,16 @@ public final class WingOptions {
                     + "(default ${DEFAULT-VALUE}).")
     double cutoffCm1;
 
-    @Option(names = "--cutoff-hwhm", paramLabel = "N",
+    @Option(names = "--cutoff-hwhm-multiple", paramLabel = "N",
             description = "Cut each line at N times its own Voigt half width (at most --cutoff).")
     Double hwhmMultiple;
+
+    /** Deprecated spelling of --cutoff-hwhm-multiple, read for one version. */
+    @Option(names = "--cutoff-hwhm", hidden = true, paramLabel = "N")
+    void deprecatedHwhm(double value) {
+        System.err.println("note: --cutoff-hwhm is deprecated, write --cutoff-hwhm-multiple");
+        hwhmMultiple = value;
+    }
 
     @Option(names = "--cutoff-per-atm", paramLabel = "CM1",
             description = "Cut at this many cm-1 per atm of pressure (at least 1 cm-1, at most --cutoff).")
@@ -43,7 +50,7 @@ public final class WingOptions {
                     perAtmCm1 == null ? Double.NaN : perAtmCm1);
         } catch (InputException e) {
             // The same rules as plans; named here by their options.
-            throw new InputException("--" + e.getMessage().replace("cutoff HWHM multiple", "cutoff-hwhm")
+            throw new InputException("--" + e.getMessage().replace("cutoff HWHM multiple", "cutoff-hwhm-multiple")
                     .replace("cutoff per atm", "cutoff-per-atm"));
         }
         return new WingTreatment(cutoff, removePedestal, chiFactor ? ChiFactorKind.PERRIN_HARTMANN_CO2 : ChiFactorKind.NONE);

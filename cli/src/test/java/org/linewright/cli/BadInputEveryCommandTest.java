@@ -129,7 +129,7 @@ class BadInputEveryCommandTest {
         switch (option) {
             case "--debug", "--quiet", "--lenient", "--no-default-widths", "--strict", "--chi-factor",
                     "--remove-pedestal", "--plot-wavelength", "--dry-run" -> v.add(new String[] {"=maybe"});
-            case "--format" -> {
+            case "--format", "--input-format", "--report-format" -> {
                 v.add(new String[] {"bogus"});
                 v.add(new String[] {text});
             }
@@ -188,17 +188,17 @@ class BadInputEveryCommandTest {
                 v.add(new String[] {"-1"});
                 v.add(new String[] {"far"});
             }
-            case "--cutoff-hwhm" -> {
+            case "--cutoff-hwhm-multiple", "--cutoff-hwhm" -> {
                 v.add(new String[] {"-1"});
                 v.add(new String[] {"x"});
             }
             case "--engine" -> v.add(new String[] {"bogus"});
             case "--spark" -> v.add(new String[] {"bogus://nowhere"});
-            case "--tolerance" -> {
+            case "--max-relative-error", "--tolerance", "--pair-within" -> {
                 v.add(new String[] {"-1"});
                 v.add(new String[] {"tight"});
             }
-            case "--window" -> {
+            case "--max-shift", "--window" -> {
                 v.add(new String[] {"-1"});
                 v.add(new String[] {"wide"});
             }
@@ -217,7 +217,7 @@ class BadInputEveryCommandTest {
                 v.add(new String[] {"-2"});
                 v.add(new String[] {"all"});
             }
-            case "--threshold" -> {
+            case "--threshold", "--threshold-cm-per-molecule" -> {
                 v.add(new String[] {"-1"});
                 v.add(new String[] {"NaN"});
             }

@@ -100,7 +100,7 @@ class IngestAndLinesCommandTest {
         Run missing = run("lines", tmp.resolve("no-store").toString());
         assertEquals(2, missing.code());
         assertEquals(1, missing.errLines().size(), missing.err());
-        Run badFormat = run("ingest", "x.par", "--store", tmp.toString(), "--format", "fits");
+        Run badFormat = run("ingest", "x.par", "--store", tmp.toString(), "--input-format", "fits");
         assertEquals(2, badFormat.code());
         assertEquals(1, badFormat.errLines().size(), badFormat.err());
     }

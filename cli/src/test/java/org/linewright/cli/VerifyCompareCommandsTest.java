@@ -118,7 +118,7 @@ class VerifyCompareCommandsTest {
         Path file = Files.write(temp.resolve("co.par"), records, StandardCharsets.US_ASCII);
         Path report = temp.resolve("out/report.json");
         Path plot = temp.resolve("out/residuals.png");
-        Run r = run("verify", file.toString(), "--format", "json", "--report", report.toString(), "--plot", plot.toString());
+        Run r = run("verify", file.toString(), "--report-format", "json", "--report", report.toString(), "--plot", plot.toString());
         assertEquals(ExitCodes.CHECK_FOUND_PROBLEMS, r.code(), r.err());
         String json = Files.readString(report);
         assertTrue(json.contains("\"passed\": false"), json);
@@ -131,7 +131,7 @@ class VerifyCompareCommandsTest {
     @Test
     void verifyBadInputIsOneLineAndExitCode2() throws IOException {
         assertOneErrorLine(run("verify", temp.resolve("missing.par").toString()));
-        assertOneErrorLine(run("verify", sample("sample_PH3.par").toString(), "--format", "xml"));
+        assertOneErrorLine(run("verify", sample("sample_PH3.par").toString(), "--report-format", "xml"));
         Path badReference = Files.writeString(temp.resolve("refs.tsv"), String.join("\t",
                 org.linewright.reference.data.ReferenceLines.COLUMNS) + "\nrotational\t5\t1\t1\t0\t-\t-\t-\tabc\tGHz\t0.001\tx\tfrom memory\n");
         Run r = run("verify", sample("sample_PH3.par").toString(), "--reference", badReference.toString());
@@ -169,13 +169,34 @@ class VerifyCompareCommandsTest {
         Path newFile = Files.write(temp.resolve("new.par"), newer, StandardCharsets.US_ASCII);
         Path report = temp.resolve("changes.csv");
 
-        Run r = run("compare", oldFile.toString(), newFile.toString(), "--format", "csv", "--report", report.toString());
+        Run r = run("compare", oldFile.toString(), newFile.toString(), "--report-format", "csv", "--report", report.toString());
         assertEquals(ExitCodes.CHECK_FOUND_PROBLEMS, r.code(), r.err());
         List<String> rows = Files.readAllLines(report);
         assertEquals(4, rows.size(), rows.toString());
         assertTrue(rows.stream().anyMatch(l -> l.startsWith("changed,quanta,") && l.contains(",wavenumber_cm1,")), rows.toString());
         assertTrue(rows.stream().anyMatch(l -> l.startsWith("added,")), rows.toString());
         assertTrue(rows.stream().anyMatch(l -> l.startsWith("removed,")), rows.toString());
+
+        // deprecated spellings (DEVELOPERS.md, "Naming"): same report, one note each on standard error
+        Run renamed = run("compare", oldFile.toString(), newFile.toString(), "--max-shift", "0.2cm-1", "--pair-within",
+                "0.002cm-1", "--report-format", "csv");
+        java.io.ByteArrayOutputStream notes = new java.io.ByteArrayOutputStream();
+        java.io.PrintStream stderr = System.err;
+        Run deprecated;
+        System.setErr(new java.io.PrintStream(notes, true, StandardCharsets.UTF_8));
+        try {
+            deprecated = run("compare", oldFile.toString(), newFile.toString(), "--window", "0.2cm-1", "--tolerance",
+                    "0.002cm-1", "--format", "csv");
+        } finally {
+            System.setErr(stderr);
+        }
+        assertEquals(renamed.code(), deprecated.code(), deprecated.err());
+        assertEquals(renamed.out(), deprecated.out());
+        String noted = notes.toString(StandardCharsets.UTF_8);
+        for (String n : new String[] {"--window is deprecated, write --max-shift",
+                "--tolerance is deprecated, write --pair-within", "--format is deprecated, write --report-format"}) {
+            assertTrue(noted.contains(n), noted);
+        }
 
         Run same = run("compare", oldFile.toString(), oldFile.toString());
         assertEquals(ExitCodes.OK, same.code(), same.err());
@@ -188,7 +209,7 @@ class VerifyCompareCommandsTest {
         Path store = temp.resolve("store");
         Run ingest = run("-q", "ingest", sample("sample_CO2.par").toString(), "--store", store.toString());
         assertEquals(ExitCodes.OK, ingest.code(), ingest.err());
-        Run verify = run("verify", store.toString(), "--format", "csv");
+        Run verify = run("verify", store.toString(), "--report-format", "csv");
         assertEquals(ExitCodes.OK, verify.code(), verify.err() + verify.out());
         // CO2 sample: 5492 records (samples README)
         assertTrue(verify.out().contains("summary,passed,,,,,lines,5492,"), verify.out());
@@ -233,7 +254,7 @@ class VerifyCompareCommandsTest {
                 "table = \"unused.arrow\"", ""));
         Path report = temp.resolve("plan-report.json");
         Run r = run("compare", sample("sample_CO.par").toString(), newFile.toString(), "--plan", plan.toString(),
-                "--threads", "1", "--format", "json", "--report", report.toString());
+                "--threads", "1", "--report-format", "json", "--report", report.toString());
         assertEquals(ExitCodes.CHECK_FOUND_PROBLEMS, r.code(), r.err());
         String json = Files.readString(report);
         // blocks of 2000 points (20 cm-1) from 2100 cm-1: 2147.08 lies in block 2, more than the reach from its edges
@@ -253,7 +274,7 @@ class VerifyCompareCommandsTest {
     void compareBadInputIsOneLineAndExitCode2() {
         assertOneErrorLine(run("compare", temp.resolve("a.par").toString(), temp.resolve("b.par").toString()));
         assertOneErrorLine(run("compare", temp.toString(), temp.toString()));
-        assertOneErrorLine(run("compare", "x", "y", "--window", "-1 cm-1"));
+        assertOneErrorLine(run("compare", "x", "y", "--max-shift", "-1 cm-1"));
         Run r = run("compare", sample("sample_CO.par").toString(), writeGarbage().toString());
         assertOneErrorLine(r);
         assertTrue(r.err().contains("garbage.par"), r.err());

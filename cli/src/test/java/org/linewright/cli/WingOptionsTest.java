@@ -37,7 +37,7 @@ class WingOptionsTest {
         assertEquals(ChiFactorKind.NONE, d.chiFactor());
         // 100 half widths of a Lorentzian line (alpha_D -> 0: Voigt HWHM = gamma_L; the Olivero-Longbothum 1977
         // fit gives (0.5346 + sqrt(0.2166)) = 1.000003 gamma_L there), capped at --cutoff.
-        WingTreatment h = parse("--cutoff-hwhm", "100", "--cutoff", "50");
+        WingTreatment h = parse("--cutoff-hwhm-multiple", "100", "--cutoff", "50");
         assertEquals(100 * 0.07, h.cutoff().distanceCm1(0.0, 0.07, 1.0), 100 * 0.07 * 4e-6);
         assertEquals(50.0, h.cutoff().distanceCm1(0.0, 0.7, 10.0), 1e-12);
         // 5 cm-1/atm between 1 cm-1 and the cap.
@@ -51,8 +51,15 @@ class WingOptionsTest {
 
     @Test
     void contradictoryOrNonPositiveValuesAreInputErrors() {
-        assertThrows(InputException.class, () -> parse("--cutoff-hwhm", "10", "--cutoff-per-atm", "2"));
+        assertThrows(InputException.class, () -> parse("--cutoff-hwhm-multiple", "10", "--cutoff-per-atm", "2"));
         assertThrows(InputException.class, () -> parse("--cutoff", "0"));
-        assertThrows(InputException.class, () -> parse("--cutoff-hwhm", "-1"));
+        assertThrows(InputException.class, () -> parse("--cutoff-hwhm-multiple", "-1"));
+    }
+
+    /** The deprecated spelling (DEVELOPERS.md, "Naming") still works for one version and gives the same treatment. */
+    @Test
+    void deprecatedCutoffHwhmSpellingGivesTheSameTreatment() {
+        assertEquals(parse("--cutoff-hwhm-multiple", "100", "--cutoff", "50").describe(),
+                parse("--cutoff-hwhm", "100", "--cutoff", "50").describe());
     }
 }

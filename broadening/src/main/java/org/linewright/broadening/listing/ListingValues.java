@@ -110,7 +110,7 @@ public final class ListingValues {
         m.put("linewright.listing.isotopologue", Integer.toString(request.isotopologue()));
         m.put("linewright.listing.strongest", Integer.toString(request.strongest()));
         if (cache != null) {
-            m.put("linewright.listing.temperature_k", Double.toString(request.temperatureK()));
+            m.put("linewright.listing.temperature_K", Double.toString(request.temperatureK()));
         }
         if (resolver != null) {
             m.put("linewright.listing.background", resolver.composition().toString());

@@ -29,7 +29,7 @@ public record FixedCutoff(double distanceCm1) implements WingCutoff {
     public Map<String, String> describe() {
         Map<String, String> m = new LinkedHashMap<>();
         m.put("wing.cutoff.rule", "fixed");
-        m.put("wing.cutoff.distance_cm-1", Double.toString(distanceCm1));
+        m.put("wing.cutoff.distance_cm1", Double.toString(distanceCm1));
         return m;
     }
 

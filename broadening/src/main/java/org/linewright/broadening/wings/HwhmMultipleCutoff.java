@@ -36,7 +36,7 @@ public record HwhmMultipleCutoff(double multiple, double maxDistanceCm1) impleme
         Map<String, String> m = new LinkedHashMap<>();
         m.put("wing.cutoff.rule", "voigt-hwhm-multiple");
         m.put("wing.cutoff.hwhm_multiple", Double.toString(multiple));
-        m.put("wing.cutoff.max_distance_cm-1", Double.toString(maxDistanceCm1));
+        m.put("wing.cutoff.max_distance_cm1", Double.toString(maxDistanceCm1));
         m.put("wing.cutoff.hwhm_formula", "Olivero-Longbothum 1977");
         return m;
     }

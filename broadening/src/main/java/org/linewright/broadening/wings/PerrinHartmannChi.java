@@ -137,8 +137,8 @@ public final class PerrinHartmannChi {
         Map<String, String> m = new LinkedHashMap<>();
         m.put("wing.chi.form", "Perrin-Hartmann 1989 (JQSRT 42, 311), CO2-CO2");
         m.put("wing.chi.temperature_K", Double.toString(temperatureK));
-        m.put("wing.chi.sigma_cm-1", SIGMA1_CM1 + "," + SIGMA2_CM1 + "," + SIGMA3_CM1);
-        m.put("wing.chi.B_cm-1", b1PerCm1 + "," + b2PerCm1 + "," + b3PerCm1);
+        m.put("wing.chi.sigma_cm1", SIGMA1_CM1 + "," + SIGMA2_CM1 + "," + SIGMA3_CM1);
+        m.put("wing.chi.B_per_cm1", b1PerCm1 + "," + b2PerCm1 + "," + b3PerCm1);
         m.put("wing.chi.weighting", "applied to the CO2-broadened share w of each CO2 line's Lorentz width: "
                 + "phi = (1-w) phi_Lorentz-wing + w chi phi (binary-collision additivity)");
         m.put("wing.chi.validity", "T " + VALID_MIN_TEMPERATURE_K + ".." + VALID_MAX_TEMPERATURE_K

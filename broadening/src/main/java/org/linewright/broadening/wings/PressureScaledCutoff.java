@@ -39,9 +39,9 @@ public record PressureScaledCutoff(double distancePerAtmCm1, double minDistanceC
     public Map<String, String> describe() {
         Map<String, String> m = new LinkedHashMap<>();
         m.put("wing.cutoff.rule", "pressure-scaled");
-        m.put("wing.cutoff.distance_per_atm_cm-1", Double.toString(distancePerAtmCm1));
-        m.put("wing.cutoff.min_distance_cm-1", Double.toString(minDistanceCm1));
-        m.put("wing.cutoff.max_distance_cm-1", Double.toString(maxDistanceCm1));
+        m.put("wing.cutoff.distance_per_atm_cm1", Double.toString(distancePerAtmCm1));
+        m.put("wing.cutoff.min_distance_cm1", Double.toString(minDistanceCm1));
+        m.put("wing.cutoff.max_distance_cm1", Double.toString(maxDistanceCm1));
         m.put("wing.cutoff.formula", "min(max, max(min, k*p))");
         return m;
     }

@@ -15,7 +15,7 @@ class WingCutoffTest {
         WingCutoff c = WingCutoff.defaultCutoff();
         assertEquals(25.0, c.distanceCm1(0.004, 0.07, 1.0));
         assertEquals(25.0, c.distanceCm1(1.0, 1.0, 100.0));
-        assertEquals(Map.of("wing.cutoff.rule", "fixed", "wing.cutoff.distance_cm-1", "25.0"), c.describe());
+        assertEquals(Map.of("wing.cutoff.rule", "fixed", "wing.cutoff.distance_cm1", "25.0"), c.describe());
     }
 
     @Test

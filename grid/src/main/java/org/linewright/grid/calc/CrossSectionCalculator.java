@@ -1029,8 +1029,9 @@ public final class CrossSectionCalculator {
             m.put("engine", engine.id());
             engine.describe().forEach((k, v) -> m.put("engine." + k, v));
             m.putAll(request.grid().describe());
-            m.put("temperature_k", Double.toString(temperatureK));
-            m.put("pressure_atm", Double.toString(pressureAtm));
+            m.put("temperature_K", Double.toString(temperatureK));
+            // bar, as in tables (1 bar = 1e5 Pa exactly); the calculation itself works in atm
+            m.put("pressure_bar", Double.toString(pressureAtm * org.linewright.ingest.units.PhysicalConstants.STANDARD_ATMOSPHERE_PA / 1e5));
             m.put("composition", request.composition().toString());
             m.put("line_shape", shape.label());
             m.put("line_shape_rule", shapeRule(shape));

@@ -136,14 +136,14 @@ public final class LineListingWriter {
             w.write(sb.append('\n').toString());
         } else {
             StringBuilder sb = new StringBuilder(String.format(Locale.ROOT,
-                    "%3s %3s %14s %11s %11s %7s %7s %5s %9s %11s %7s %7s  %-15s",
-                    "mol", "iso", "wavenumber", "S(296K)", "A(s-1)", "g_air", "g_self", "n_air", "d_air",
+                    "%3s %3s %14s %11s %11s %9s %10s %5s %9s %11s %7s %7s  %-15s",
+                    "mol", "iso", "wavenumber", "S(296K)", "A(s-1)", "gamma_air", "gamma_self", "n_air", "d_air",
                     "E''", "g'", "g''", "lower quanta"));
             if (computed.hasTemperature()) {
                 sb.append(String.format(Locale.ROOT, " %11s", "S(T)"));
             }
             if (computed.hasWidths()) {
-                sb.append(String.format(Locale.ROOT, " %9s %6s", "g_bg", "n_bg"));
+                sb.append(String.format(Locale.ROOT, " %9s %6s", "gamma_bg", "n_bg"));
             }
             w.write(sb.append('\n').toString());
         }
@@ -173,7 +173,7 @@ public final class LineListingWriter {
     private static void tableRows(Writer w, LineBatch b, ListingValues computed) throws IOException {
         for (int i = 0; i < b.size; i++) {
             StringBuilder sb = new StringBuilder(String.format(Locale.ROOT,
-                    "%3d %3d %14.6f %11.4e %11.4e %7.4f %7.4f %5.2f %9.6f %11.4f %7.1f %7.1f  %-15s",
+                    "%3d %3d %14.6f %11.4e %11.4e %9.4f %10.4f %5.2f %9.6f %11.4f %7.1f %7.1f  %-15s",
                     b.moleculeId[i], b.isotopologue[i], b.wavenumberCm1[i], b.intensityCmPerMolecule[i],
                     b.einsteinAS1[i], b.airWidthCm1PerAtm[i], b.selfWidthCm1PerAtm[i], b.airWidthExponent[i],
                     b.airShiftCm1PerAtm[i], b.lowerEnergyCm1[i], b.upperDegeneracy[i], b.lowerDegeneracy[i],

@@ -41,14 +41,23 @@ public final class PlanReader {
             "lines", Set.of("sources"),
             "grid", Set.of("wavenumber", "pressures_bar", "temperatures_K"),
             "background", Set.of(),
-            "profile", Set.of("engine", "tolerance", "shape", "cutoff_cm1", "cutoff_hwhm", "cutoff_per_atm_cm1",
-                    "remove_pedestal", "chi_factor",
-                    "threshold"),
+            "profile", Set.of("engine", "max_relative_error", "shape", "cutoff_cm1", "cutoff_hwhm_multiple",
+                    "cutoff_per_atm_cm1", "remove_pedestal", "chi_factor",
+                    "threshold_cm_per_molecule", "tolerance", "cutoff_hwhm", "threshold"),
             "species", Set.of("molecules", "isotopologues"),
             "partition_sums", Set.of("tables", "molecule_data"),
-            "widths", Set.of("order", "forbid_defaults"),
+            "widths", Set.of("order", "no_default_widths", "forbid_defaults"),
             "build", Set.of("block_points"),
             "output", Set.of("table", "precision"));
+    /**
+     * Keys renamed to the naming convention (DEVELOPERS.md, "Naming"): the old spelling is still read, for one
+     * version, with a one-line note on standard error naming the new one.
+     */
+    static final Map<String, String> DEPRECATED_KEYS = Map.of(
+            "profile.tolerance", "profile.max_relative_error",
+            "profile.cutoff_hwhm", "profile.cutoff_hwhm_multiple",
+            "profile.threshold", "profile.threshold_cm_per_molecule",
+            "widths.forbid_defaults", "widths.no_default_widths");
     private static final Set<String> WAVENUMBER_KEYS = Set.of("from", "to", "step", "resolving_power", "unit");
 
     private final Path file;
@@ -78,6 +87,20 @@ public final class PlanReader {
                     + ": not valid TOML: " + e.getMessage());
         }
         return new PlanReader(file, toml).plan();
+    }
+
+    /** The key to read for {@code newKey}: its deprecated spelling when only that one is given (with a note). */
+    private String key(String newKey) {
+        for (Map.Entry<String, String> e : DEPRECATED_KEYS.entrySet()) {
+            if (e.getValue().equals(newKey) && toml.contains(e.getKey())) {
+                if (toml.contains(newKey)) {
+                    throw error(e.getKey(), "and " + newKey + " are both given", "only " + newKey);
+                }
+                System.err.println(file + ": note: plan key " + e.getKey() + " is deprecated, write " + newKey);
+                return e.getKey();
+            }
+        }
+        return newKey;
     }
 
     private TablePlan plan() throws IOException {
@@ -140,10 +163,15 @@ public final class PlanReader {
         for (String label : order) {
             if (WidthSource.byLabel(label) == null) {
                 throw error("widths.order", "unknown width source \"" + label + "\"", "labels such as line, rule, "
-                        + "table, user, air-proxy, default");
+                        + "table, air-proxy, default");
+            }
+            if (WidthSource.byLabel(label) == WidthSource.USER_CONSTANT) {
+                // no plan key supplies user constants; a silent skip would hide the mistake
+                throw error("widths.order", "names \"user\", whose constants only the command line supplies "
+                        + "(--width-constants)", "line, rule, table, air-proxy, default");
             }
         }
-        boolean forbidDefaults = bool("widths.forbid_defaults", false);
+        boolean forbidDefaults = bool(key("widths.no_default_widths"), false);
         long block = integer("build.block_points", Long.MIN_VALUE);
         if (block == Long.MIN_VALUE) {
             block = TablePlan.ENGINE_BLOCK_POINTS;
@@ -261,15 +289,16 @@ public final class PlanReader {
         if (!engine.equals("exact") && !engine.equals("fast")) {
             throw error("profile.engine", "\"" + engine + "\"", "exact or fast");
         }
-        double tolerance = number(toml, "profile.tolerance", 1e-3);
+        String toleranceKey = key("profile.max_relative_error");
+        double tolerance = number(toml, toleranceKey, 1e-3);
         if (!(tolerance > 0 && tolerance < 1)) {
-            throw error("profile.tolerance", "is " + tolerance, "a relative tolerance between 0 and 1");
+            throw error(toleranceKey, "is " + tolerance, "a relative tolerance between 0 and 1");
         }
         if (engine.equals(org.linewright.grid.engine.fast.FastEngine.ID)
                 && !(tolerance >= org.linewright.grid.engine.fast.FastEngine.MIN_TOLERANCE
                 && tolerance <= org.linewright.grid.engine.fast.FastEngine.MAX_TOLERANCE)) {
             // refused before any work: the fast engine cannot keep it (its round-off, or beyond its method)
-            throw error("profile.tolerance", "is " + tolerance, "a tolerance the fast engine can keep, in ["
+            throw error(toleranceKey, "is " + tolerance, "a tolerance the fast engine can keep, in ["
                     + org.linewright.grid.engine.fast.FastEngine.MIN_TOLERANCE + ", "
                     + org.linewright.grid.engine.fast.FastEngine.MAX_TOLERANCE + "] (or the exact engine)");
         }
@@ -284,13 +313,14 @@ public final class PlanReader {
         if (!(cutoff > 0) || !Double.isFinite(cutoff)) {
             throw error("profile.cutoff_cm1", "is " + cutoff, "a positive distance in cm-1");
         }
-        double hwhm = number(toml, "profile.cutoff_hwhm", Double.NaN);
+        String hwhmKey = key("profile.cutoff_hwhm_multiple");
+        double hwhm = number(toml, hwhmKey, Double.NaN);
         double perAtm = number(toml, "profile.cutoff_per_atm_cm1", Double.NaN);
         if (!Double.isNaN(hwhm) && !Double.isNaN(perAtm)) {
-            throw error("profile.cutoff_hwhm", "and profile.cutoff_per_atm_cm1 are both given", "one cutoff rule");
+            throw error(hwhmKey, "and profile.cutoff_per_atm_cm1 are both given", "one cutoff rule");
         }
         if (!Double.isNaN(hwhm) && !(hwhm > 0)) {
-            throw error("profile.cutoff_hwhm", "is " + hwhm, "a positive multiple of the line's half width");
+            throw error(hwhmKey, "is " + hwhm, "a positive multiple of the line's half width");
         }
         if (!Double.isNaN(perAtm) && !(perAtm > 0)) {
             throw error("profile.cutoff_per_atm_cm1", "is " + perAtm, "a positive distance per atm in cm-1");
@@ -303,9 +333,10 @@ public final class PlanReader {
         } catch (IllegalArgumentException e) {
             throw error("profile.chi_factor", "\"" + chiText + "\"", "none or perrin-hartmann-co2");
         }
-        double threshold = number(toml, "profile.threshold", 0.0);
+        String thresholdKey = key("profile.threshold_cm_per_molecule");
+        double threshold = number(toml, thresholdKey, 0.0);
         if (!(threshold >= 0) || !Double.isFinite(threshold)) {
-            throw error("profile.threshold", "is " + threshold, "an intensity >= 0 in cm/molecule");
+            throw error(thresholdKey, "is " + threshold, "an intensity >= 0 in cm/molecule");
         }
         return new TablePlan.Profile(engine, tolerance, shape, cutoff, hwhm, perAtm, pedestal, chi, threshold);
     }

@@ -171,7 +171,7 @@ public record TablePlan(Path planFile, List<Path> sources, WavenumberGrid grid, 
         m.put("threshold_cm_per_molecule", Double.toString(profile.thresholdCmPerMolecule()));
         m.put("species", species.describe());
         m.put("width_order", String.join(",", widths.order()));
-        m.put("forbid_default_widths", Boolean.toString(widths.forbidDefaults()));
+        m.put("no_default_widths", Boolean.toString(widths.forbidDefaults()));
         m.put("block_points", blockPoints == ENGINE_BLOCK_POINTS ? "engine" : Integer.toString(blockPoints));
         return m;
     }

@@ -115,7 +115,7 @@ public final class CalculatorBlocks implements BlockCalculator {
         Map<String, String> m = new LinkedHashMap<>();
         m.put("engine", engine.id());
         engine.describe().forEach((k, v) -> m.put("engine." + k, v));
-        wings.describe().forEach((k, v) -> m.put("wings." + k, v));
+        m.putAll(wings.describe()); // keys already start with "wing."
         m.put("selection", selection.describe());
         m.put("widths", widths.describe());
         return m;

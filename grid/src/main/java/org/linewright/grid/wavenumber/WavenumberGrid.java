@@ -133,7 +133,7 @@ public final class WavenumberGrid {
     /** The grid's defining parameters, for output metadata. */
     public Map<String, String> describe() {
         Map<String, String> m = new LinkedHashMap<>();
-        m.put("grid_spacing", spacing.name().toLowerCase(java.util.Locale.ROOT));
+        m.put("grid_spacing_kind", spacing.name().toLowerCase(java.util.Locale.ROOT));
         m.put("grid_from_cm1", Double.toString(fromCm1));
         m.put("grid_to_cm1", Double.toString(toCm1));
         m.put(spacing == Spacing.UNIFORM ? "grid_step_cm1" : "grid_resolving_power", Double.toString(parameter));

@@ -100,7 +100,7 @@ class CrossSectionCalculatorSampleTest {
         assertEquals(kept, trapezoid(grid, r.sigmaCm2PerMolecule()), 1e-6 * kept);
         assertEquals(0.0, r.droppedIntensityFraction());
         assertEquals("exact", r.metadata().get("engine"));
-        assertEquals("296.0", r.metadata().get("temperature_k"));
+        assertEquals("296.0", r.metadata().get("temperature_K"));
         // 0.01 cm-1 resolves lines of half width ≈ 0.05 cm-1: no resolution warning
         assertTrue(r.warnings().stream().noneMatch(w -> w.contains("coarser")), r.warnings().toString());
     }

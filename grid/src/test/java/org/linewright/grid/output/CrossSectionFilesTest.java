@@ -37,7 +37,7 @@ class CrossSectionFilesTest {
     private final double[] sigma = {0.0, 1.0e-30, 2.5e-22, 3.3333333333333333e-21, Double.MIN_NORMAL, 4.9e-324,
         1.2345678901234567e-19, 7.0e-25, 0.1, 1.0e-40, 6.02214076e-23};
     private final Map<String, String> metadata = new LinkedHashMap<>(Map.of("engine", "exact",
-            "temperature_k", "296.0", "composition", "air=1.0"));
+            "temperature_K", "296.0", "composition", "air=1.0"));
 
     @Test
     void csvHasTheExactHeaderAndRoundTripsEveryValue() throws IOException {
@@ -96,7 +96,7 @@ class CrossSectionFilesTest {
             assertEquals("cm-1", nu.getAttribute("unit").getData());
             assertEquals("cm2/molecule", xs.getAttribute("unit").getData());
             assertEquals("exact", hdf.getAttribute("engine").getData());
-            assertEquals("296.0", hdf.getAttribute("temperature_k").getData());
+            assertEquals("296.0", hdf.getAttribute("temperature_K").getData());
         }
     }
 

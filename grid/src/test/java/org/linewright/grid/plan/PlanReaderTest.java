@@ -93,7 +93,7 @@ class PlanReaderTest {
         {"precision", "[output]\ntable = \"t.arrow\"\nprecision = \"float16\"", "output.precision: \"float16\""},
         {"extension", "[output]\ntable = \"t.csv\"", "output.table: \"t.csv\""},
         {"engine", "[profile]\nengine = \"quick\"", "profile.engine: \"quick\""},
-        {"fast tolerance", "[profile]\nengine = \"fast\"\ntolerance = 1e-9", "profile.tolerance: is 1.0E-9"},
+        {"fast tolerance", "[profile]\nengine = \"fast\"\nmax_relative_error = 1e-9", "profile.max_relative_error: is 1.0E-9"},
         {"cutoff", "[profile]\ncutoff_cm1 = -1.0", "profile.cutoff_cm1: is -1.0"},
         {"partition file", "[partition_sums]\ntables = [\"5/1=nothing.txt\"]", "partition_sums.tables: "},
         {"width source", "[widths]\norder = [\"guess\"]", "widths.order: unknown width source"},
@@ -117,14 +117,14 @@ class PlanReaderTest {
 
     @Test
     void cutoffRulesAreReadAndExclusive() throws IOException {
-        TablePlan hwhm = read(GOOD.replace("cutoff_cm1 = 25.0", "cutoff_cm1 = 25.0\ncutoff_hwhm = 500.0"));
+        TablePlan hwhm = read(GOOD.replace("cutoff_cm1 = 25.0", "cutoff_cm1 = 25.0\ncutoff_hwhm_multiple = 500.0"));
         assertEquals("voigt-hwhm-multiple", hwhm.profile().wings().cutoff().describe().get("wing.cutoff.rule"));
         TablePlan perAtm = read(GOOD.replace("cutoff_cm1 = 25.0", "cutoff_cm1 = 25.0\ncutoff_per_atm_cm1 = 5.0"));
         // d = min(25, max(1, 5 cm-1/atm x 2 atm)) = 10 cm-1 (the documented pressure rule)
         assertEquals(10.0, perAtm.profile().wings().cutoff().distanceCm1(0.003, 0.1, 2.0), 1e-12);
         InputException both = assertThrows(InputException.class, () -> read(GOOD.replace("cutoff_cm1 = 25.0",
-                "cutoff_cm1 = 25.0\ncutoff_hwhm = 500.0\ncutoff_per_atm_cm1 = 5.0")));
-        assertTrue(both.getMessage().contains("profile.cutoff_hwhm"), both.getMessage());
+                "cutoff_cm1 = 25.0\ncutoff_hwhm_multiple = 500.0\ncutoff_per_atm_cm1 = 5.0")));
+        assertTrue(both.getMessage().contains("profile.cutoff_hwhm_multiple"), both.getMessage());
     }
 
     @Test
@@ -143,7 +143,7 @@ class PlanReaderTest {
                 tables = ["5/1=data/q.txt"]
                 [widths]
                 order = ["line", "rule", "default"]
-                forbid_defaults = true
+                no_default_widths = true
                 [build]
                 block_points = 500
                 """);
@@ -188,5 +188,19 @@ class PlanReaderTest {
             out.append(line).append('\n');
         }
         return out.toString();
+    }
+
+    /** Each deprecated plan key (DEVELOPERS.md, "Naming") is still read for one version and gives the same plan. */
+    @Test
+    void deprecatedKeysGiveTheSamePlan() throws IOException {
+        String[][] pairs = {
+            {"cutoff_cm1 = 25.0\ncutoff_hwhm = 500.0", "cutoff_cm1 = 25.0\ncutoff_hwhm_multiple = 500.0"},
+            {"cutoff_cm1 = 25.0\nthreshold = 1e-25", "cutoff_cm1 = 25.0\nthreshold_cm_per_molecule = 1e-25"},
+            {"cutoff_cm1 = 25.0\ntolerance = 0.01", "cutoff_cm1 = 25.0\nmax_relative_error = 0.01"},
+        };
+        for (String[] p : pairs) {
+            assertEquals(read(GOOD.replace("cutoff_cm1 = 25.0", p[1])).describe(),
+                    read(GOOD.replace("cutoff_cm1 = 25.0", p[0])).describe(), p[0]);
+        }
     }
 }
