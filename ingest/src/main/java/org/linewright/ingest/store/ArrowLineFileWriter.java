@@ -150,6 +150,19 @@ final class ArrowLineFileWriter implements AutoCloseable {
 
     /** Ends the file, its schema completed with the summary and {@code extra}, forces it to disk and closes it. */
     void finish(Map<String, String> extra) throws IOException {
+        finish(extra, true);
+    }
+
+    /**
+     * Ends and closes a temporary file (a sorted run of the external sort) without forcing it to disk: it is read
+     * back and deleted by the same process, and a crash never lets the store list it, so an fsync would only cost
+     * time.
+     */
+    void finishTemporary() throws IOException {
+        finish(Map.of(), false);
+    }
+
+    private void finish(Map<String, String> extra, boolean durable) throws IOException {
         completion.put(StoreColumns.KEY_LINES, Long.toString(lines));
         completion.put(StoreColumns.KEY_WAVENUMBER_MIN, Double.toString(lines == 0 ? Double.NaN : minWavenumberCm1));
         completion.put(StoreColumns.KEY_WAVENUMBER_MAX, Double.toString(lines == 0 ? Double.NaN : lastWavenumberCm1));
@@ -161,7 +174,9 @@ final class ArrowLineFileWriter implements AutoCloseable {
         if (flushFailure != null) {
             throw flushFailure;
         }
-        channel.force(true);
+        if (durable) {
+            channel.force(true);
+        }
         close();
     }
 

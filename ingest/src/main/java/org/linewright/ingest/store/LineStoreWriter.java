@@ -222,11 +222,11 @@ public final class LineStoreWriter implements AutoCloseable {
             for (int from = 0; from < n; from += gather.capacity()) {
                 int m = Math.min(gather.capacity(), n - from);
                 gather.clear();
-                gather.gatherRows(runBuffer, order, from, m);
+                gatherRows(columns, new LineBatch[] {runBuffer}, null, order, from, m, gather, 0);
                 gather.size = m;
                 run.write(gather);
             }
-            run.finish(Map.of());
+            run.finishTemporary();
         }
         runBuffer.clear();
     }
@@ -291,7 +291,7 @@ public final class LineStoreWriter implements AutoCloseable {
     private ArrowLineFileWriter mergeRuns(Map<String, String> completion) throws IOException {
         if (stream != null) {
             // The lines streamed before the first out-of-order line form the first (oldest) run.
-            stream.finish(Map.of());
+            stream.finishTemporary();
             runs.add(0, stream.path());
             stream = null;
         }
@@ -313,7 +313,7 @@ public final class LineStoreWriter implements AutoCloseable {
                     runs.add(merged);
                     try (ArrowLineFileWriter w = new ArrowLineFileWriter(merged, schemaMetadata, columns)) {
                         mergeInto(group, w, spillBatch, columns);
-                        w.finish(Map.of());
+                        w.finishTemporary();
                     }
                     for (Path p : group) {
                         Files.deleteIfExists(p);
@@ -333,18 +333,160 @@ public final class LineStoreWriter implements AutoCloseable {
         return out;
     }
 
-    /** k-way merges the sorted run files into {@code out} (ties in run order). */
+    /**
+     * k-way merges the sorted run files into {@code out} (ties in run order). The merge order is found on the
+     * wavenumbers alone; the columns are then gathered column by column for a stretch of output rows (a stretch
+     * ends when the output batch is full or a run's slice must be refilled), so a line costs one pass per column
+     * rather than one copy call per column and per line.
+     */
     private static void mergeInto(List<Path> runFiles, ArrowLineFileWriter out, LineBatch batch, LineColumn[] columns)
             throws IOException {
         List<ArrowLineFile> files = new ArrayList<>();
         for (Path run : runFiles) {
             files.add(ArrowLineFile.open(run));
         }
+        List<LineColumn> numeric = new ArrayList<>();
+        List<LineColumn> text = new ArrayList<>();
+        for (LineColumn c : columns) {
+            (c.kind() == LineColumn.Kind.TEXT ? text : numeric).add(c);
+        }
+        LineQuery query = LineQuery.all().withColumns(List.of(columns));
         // Each run's scanner holds a slice of its lines: the slices together stay within MERGE_HEAP_BYTES.
         int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS, MERGE_HEAP_BYTES / (files.size() * BYTES_PER_LINE_ESTIMATE));
-        try (LineCursor cursor = new LineCursor(files, LineQuery.all().withColumns(List.of(columns)), sliceRows)) {
-            while (cursor.read(batch)) {
+        int k = files.size();
+        FileScanner[] scanners = new FileScanner[k];
+        try {
+            for (int i = 0; i < k; i++) {
+                scanners[i] = new FileScanner(files.get(i), query, numeric.toArray(new LineColumn[0]),
+                        text.toArray(new LineColumn[0]), sliceRows);
+            }
+            LineBatch[] slices = new LineBatch[k];
+            for (int i = 0; i < k; i++) {
+                slices[i] = scanners[i].buf;
+            }
+            int capacity = batch.capacity();
+            int[] fromRun = new int[capacity];
+            int[] fromRow = new int[capacity];
+            // Current key of each run; +infinity once the run is exhausted.
+            double[] keys = new double[k];
+            for (int i = 0; i < k; i++) {
+                keys[i] = scanners[i].ensure() ? scanners[i].key() : Double.POSITIVE_INFINITY;
+            }
+            batch.clear();
+            int stretch = 0;
+            while (true) {
+                int best = -1;
+                double bestKey = Double.POSITIVE_INFINITY;
+                for (int i = 0; i < k; i++) {
+                    // Strictly smaller: among equal wavenumbers the lowest run (the oldest input) wins.
+                    if (keys[i] < bestKey) {
+                        bestKey = keys[i];
+                        best = i;
+                    }
+                }
+                if (best < 0) {
+                    break;
+                }
+                FileScanner s = scanners[best];
+                fromRun[stretch] = best;
+                fromRow[stretch] = s.pos;
+                stretch++;
+                s.pos++;
+                boolean refill = s.pos >= s.buf.size;
+                if (refill || batch.size + stretch == capacity) {
+                    // Gather before a slice is overwritten or when the output batch is full.
+                    gatherRows(columns, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
+                    batch.size += stretch;
+                    stretch = 0;
+                    if (batch.size == capacity) {
+                        out.write(batch);
+                        batch.clear();
+                    }
+                }
+                if (refill) {
+                    keys[best] = s.ensure() ? s.key() : Double.POSITIVE_INFINITY;
+                } else {
+                    keys[best] = s.buf.wavenumberCm1[s.pos];
+                }
+            }
+            if (stretch > 0) {
+                gatherRows(columns, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
+                batch.size += stretch;
+            }
+            if (batch.size > 0) {
                 out.write(batch);
+                batch.clear();
+            }
+        } finally {
+            IOException first = null;
+            for (FileScanner s : scanners) {
+                if (s != null) {
+                    try {
+                        s.close();
+                    } catch (IOException e) {
+                        first = first == null ? e : first;
+                    }
+                }
+            }
+            if (first != null) {
+                throw first;
+            }
+        }
+    }
+
+    /**
+     * Copies the stored {@code columns} of rows {@code rows[from..from+n)} of the sources (row {@code i} from
+     * {@code sources[fromSource[i]]}, or from {@code sources[0]} when {@code fromSource} is null) to rows
+     * {@code [at, at+n)} of {@code dst}, column by column; text rows are appended (dst must hold {@code at}).
+     */
+    private static void gatherRows(LineColumn[] columns, LineBatch[] sources, int[] fromSource, int[] rows, int from,
+                                   int n, LineBatch dst, int at) {
+        int k = sources.length;
+        for (LineColumn c : columns) {
+            switch (c.kind()) {
+                case INT -> {
+                    int[][] s = new int[k][];
+                    for (int j = 0; j < k; j++) {
+                        s[j] = c.ints(sources[j]);
+                    }
+                    int[] d = c.ints(dst);
+                    for (int i = 0; i < n; i++) {
+                        d[at + i] = s[fromSource == null ? 0 : fromSource[from + i]][rows[from + i]];
+                    }
+                }
+                case LONG -> {
+                    long[][] s = new long[k][];
+                    for (int j = 0; j < k; j++) {
+                        s[j] = c.longs(sources[j]);
+                    }
+                    long[] d = c.longs(dst);
+                    for (int i = 0; i < n; i++) {
+                        d[at + i] = s[fromSource == null ? 0 : fromSource[from + i]][rows[from + i]];
+                    }
+                }
+                case DOUBLE -> {
+                    double[][] s = new double[k][];
+                    for (int j = 0; j < k; j++) {
+                        s[j] = c.doubles(sources[j]);
+                    }
+                    double[] d = c.doubles(dst);
+                    for (int i = 0; i < n; i++) {
+                        d[at + i] = s[fromSource == null ? 0 : fromSource[from + i]][rows[from + i]];
+                    }
+                }
+                case TEXT -> {
+                    TextColumn[] s = new TextColumn[k];
+                    for (int j = 0; j < k; j++) {
+                        s[j] = c.text(sources[j]);
+                    }
+                    TextColumn d = c.text(dst);
+                    for (int i = 0; i < n; i++) {
+                        TextColumn src = s[fromSource == null ? 0 : fromSource[from + i]];
+                        int r = rows[from + i];
+                        d.append(src.bytes(), src.start(r), src.length(r));
+                    }
+                }
+                default -> throw new AssertionError(c);
             }
         }
     }
