@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.intensity.IntensityScaling;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.WingTreatment;
@@ -140,6 +141,9 @@ public final class SigmaCommand implements Callable<Integer> {
     @Mixin
     private SpeciesDataOptions speciesData;
 
+    @Mixin
+    private IntensityConventionOptions intensityConvention;
+
     @Override
     public Integer call() throws Exception {
         boolean quiet = root.globalOptions().quiet();
@@ -159,9 +163,14 @@ public final class SigmaCommand implements Callable<Integer> {
         WavenumberGrid grid = grid();
         MoleculeRegistry registry = speciesData.registry();
         LineSelection selection = selection(registry);
+        IntensityScaling scaling = intensityConvention.scaling(registry,
+                lineSelection.resolve(registry).isotopologue() != 0);
         List<LineStore> opened = new ArrayList<>();
         for (Path dir : stores) {
             opened.add(LineStore.open(dir));
+        }
+        if (selection == LineSelection.ALL) {
+            refuseSeveralMolecules(opened, registry);
         }
         WingTreatment wings = wingOptions.treatment();
         WidthOptions widths = backgroundOptions.widthOptions();
@@ -170,13 +179,14 @@ public final class SigmaCommand implements Callable<Integer> {
         CrossSectionResult result;
         try (CrossSectionEngine eng = EngineFactory.create(engine, threadCount, wings, tolerance);
              Progress progress = Progress.start("sigma", PROGRESS_STEPS, "%", 1, quiet)) {
-            result = new CrossSectionCalculator(opened, registry, threadCount).compute(request, eng,
+            result = new CrossSectionCalculator(opened, registry, threadCount).withIntensityScaling(scaling).compute(request, eng,
                     (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
         }
         // The file records per isotopologue where its Q(T) came from, and any warning on it.
         PartitionSumNotes partitionSums = PartitionSumNotes.of(registry, opened, temperature.kelvin());
         Map<String, String> metadata = new LinkedHashMap<>(result.metadata());
         metadata.putAll(partitionSums.metadata());
+        metadata.putAll(scaling.metadata());
         CrossSectionFiles.write(out, fileFormat, grid, result.sigmaCm2PerMolecule(), metadata);
         if (plot != null) {
             CrossSectionPlot.write(plot, PlotStyle.of(String.format(Locale.ROOT, "T = %s K, p = %s bar, %s",
@@ -193,6 +203,29 @@ public final class SigmaCommand implements Callable<Integer> {
         }
         spec.commandLine().getErr().flush();
         return ExitCodes.OK;
+    }
+
+    /**
+     * σ in cm²/molecule over lines of several molecules has no single "molecule": refused (docs/physics.md,
+     * "Per molecule of what") until mixing ratios can be declared.
+     */
+    private static void refuseSeveralMolecules(List<LineStore> opened, MoleculeRegistry registry) {
+        java.util.TreeSet<Integer> molecules = new java.util.TreeSet<>();
+        for (LineStore store : opened) {
+            for (org.linewright.ingest.store.SourceInfo source : store.sources()) {
+                for (org.linewright.ingest.source.IsotopologueLookup.Id id : source.isotopologues()) {
+                    molecules.add(id.moleculeId());
+                }
+            }
+        }
+        if (molecules.size() > 1) {
+            List<String> names = new ArrayList<>();
+            for (int id : molecules) {
+                names.add(registry.molecule(id) == null ? Integer.toString(id) : registry.molecule(id).formula());
+            }
+            throw new InputException("the stores hold lines of several molecules " + names + ": sigma per molecule "
+                    + "of a mixture needs declared mixing ratios (expected --molecule to choose one)");
+        }
     }
 
     private static String fmt(double v) {
