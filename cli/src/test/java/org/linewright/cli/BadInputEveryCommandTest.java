@@ -203,6 +203,12 @@ class BadInputEveryCommandTest {
             }
             case "--shape" -> v.add(new String[] {"square"});
             case "--intensity-per" -> v.add(new String[] {"gram"});
+            case "--vmr" -> {
+                v.add(new String[] {"CO=-1"});
+                v.add(new String[] {"XYZ=0.5"});
+                v.add(new String[] {"CO=0.5,CO=0.2"});
+                v.add(new String[] {"lots"});
+            }
             case "--abundance" -> {
                 v.add(new String[] {"CO/1=2"});
                 v.add(new String[] {"CO/1=-0.5"});
