@@ -114,10 +114,10 @@ class IntensityConventionCommandTest {
         assertTrue(!Files.exists(tmp.resolve("mix.csv")));
     }
 
-    private static double[] sigmaOver2000To2400(String name, String... extra) throws IOException {
+    private static double[] sigmaOver20To300(String name, String... extra) throws IOException {
         Path csv = tmp.resolve(name + ".csv");
         String[] base = {"sigma", coStore.toString(), co2Store.toString(), "--temperature", "296", "--pressure",
-            "1atm", "--background", "air=1", "--between", "2000", "2400", "--step", "0.05", "--out", csv.toString(),
+            "1atm", "--background", "air=1", "--between", "20", "300", "--step", "0.05", "--out", csv.toString(),
             "-q"};
         String[] args = java.util.Arrays.copyOf(base, base.length + extra.length);
         System.arraycopy(extra, 0, args, base.length, extra.length);
@@ -131,9 +131,9 @@ class IntensityConventionCommandTest {
         // σ per molecule of the mixture, Σ x_m σ_m / Σ x_m (definition of a number-weighted mean; the
         // normalisation is stated in docs/physics.md): checked at every grid point against the single-molecule
         // σ of the same command, with ratios that do not sum to 1 so that the normalisation is tested too
-        double[] co = sigmaOver2000To2400("only-co", "--molecule", "CO");
-        double[] co2 = sigmaOver2000To2400("only-co2", "--molecule", "CO2");
-        double[] mix = sigmaOver2000To2400("mix-vmr", "--vmr", "CO=0.1,CO2=0.3");
+        double[] co = sigmaOver20To300("only-co", "--molecule", "CO");
+        double[] co2 = sigmaOver20To300("only-co2", "--molecule", "CO2");
+        double[] mix = sigmaOver20To300("mix-vmr", "--vmr", "CO=0.1,CO2=0.3");
         assertEquals(co.length, mix.length);
         assertTrue(java.util.Arrays.stream(co2).max().getAsDouble() > 0 && java.util.Arrays.stream(co).max()
                 .getAsDouble() > 0, "both samples absorb in the range");
