@@ -217,10 +217,25 @@ public final class SigmaCommand implements Callable<Integer> {
                     m++;
                 }
                 CrossSectionResult first = parts.get(0);
+                // keys whose values differ between the molecules (selection, counts, …) go per molecule,
+                // prefixed "mixture.FORMULA.", so that no value of one molecule stands for the mixture
+                Map<String, String> common = new LinkedHashMap<>(first.metadata());
+                for (CrossSectionResult r : parts) {
+                    common.entrySet().removeIf(e -> !e.getValue().equals(r.metadata().get(e.getKey())));
+                }
+                Map<String, String> mixMetadata = new LinkedHashMap<>(common);
+                Object[] formulas = vmrByFormula.keySet().toArray();
+                for (int k = 0; k < parts.size(); k++) {
+                    for (Map.Entry<String, String> e : parts.get(k).metadata().entrySet()) {
+                        if (!common.containsKey(e.getKey())) {
+                            mixMetadata.put("mixture." + formulas[k] + "." + e.getKey(), e.getValue());
+                        }
+                    }
+                }
                 result = new CrossSectionResult(MixtureCrossSection.combine(sigmas, vmr), first.linesUsed(),
                         first.linesBelowThreshold(), first.droppedIntensityFraction(),
                         first.sumIntensityCmPerMolecule(), first.widthSources(), first.estimatedRelativeError(),
-                        first.metadata(), first.seconds(), first.wingLossFraction(), first.warnings());
+                        mixMetadata, first.seconds(), first.wingLossFraction(), first.warnings());
             }
         }
         // The file records per isotopologue where its Q(T) came from, and any warning on it.
