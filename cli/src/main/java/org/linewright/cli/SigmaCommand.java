@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.intensity.IntensityScaling;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.WingTreatment;
@@ -22,6 +23,7 @@ import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.calc.CrossSectionRequest;
 import org.linewright.grid.calc.CrossSectionResult;
 import org.linewright.grid.calc.LineSelection;
+import org.linewright.grid.calc.MixtureCrossSection;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.EngineFactory;
 import org.linewright.grid.output.CrossSectionFiles;
@@ -142,6 +144,11 @@ public final class SigmaCommand implements Callable<Integer> {
     @Mixin
     private LineSelectionOptions lineSelection;
 
+    @Option(names = "--vmr", paramLabel = "MOLECULE=RATIO", split = ",",
+            description = "Volume mixing ratios of the absorbers when the stores hold several molecules, e.g. "
+                    + "CO=0.2,CO2=0.8: sigma per molecule of the mixture, sum x_m sigma_m / sum x_m.")
+    private List<String> vmrs;
+
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: the number of processors).")
     private Integer threads;
 
@@ -159,6 +166,9 @@ public final class SigmaCommand implements Callable<Integer> {
 
     @Mixin
     private SpeciesDataOptions speciesData;
+
+    @Mixin
+    private IntensityConventionOptions intensityConvention;
 
     @Override
     public Integer call() throws Exception {
@@ -185,24 +195,83 @@ public final class SigmaCommand implements Callable<Integer> {
         WavenumberGrid grid = grid();
         MoleculeRegistry registry = speciesData.registry();
         LineSelection selection = selection(registry);
+        IntensityScaling scaling = intensityConvention.scaling(registry,
+                lineSelection.resolve(registry).isotopologue() != 0);
         List<LineStore> opened = new ArrayList<>();
         for (Path dir : stores) {
             opened.add(LineStore.open(dir));
+        }
+        Map<Integer, Double> mixture = mixture(registry);
+        if (mixture != null && selection != LineSelection.ALL) {
+            throw new InputException("--vmr with --molecule: a mixture of the declared molecules or one molecule "
+                    + "(expected one of the two)");
+        }
+        if (selection == LineSelection.ALL) {
+            refuseSeveralMolecules(opened, registry, mixture);
         }
         WingTreatment wings = wingOptions.treatment();
         WidthOptions widths = backgroundOptions.widthOptions();
         CrossSectionRequest request = new CrossSectionRequest(temperature.kelvin(), pressure.atm(), composition, grid,
                 wings, lineShape, threshold, selection, widths);
         CrossSectionResult result;
+        List<CrossSectionResult> parts = new ArrayList<>();
+        Map<String, Double> vmrByFormula = new LinkedHashMap<>();
         try (CrossSectionEngine eng = EngineFactory.create(engine, threadCount, wings, tolerance);
              Progress progress = Progress.start("sigma", PROGRESS_STEPS, "%", 1, quiet)) {
-            result = new CrossSectionCalculator(opened, registry, threadCount).compute(request, eng,
-                    (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
+            CrossSectionCalculator calculator = new CrossSectionCalculator(opened, registry, threadCount)
+                    .withIntensityScaling(scaling);
+            if (mixture == null) {
+                result = calculator.compute(request, eng,
+                        (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
+                parts.add(result);
+            } else {
+                // one σ per declared molecule, then σ_mix = Σ x_m σ_m / Σ x_m (MixtureCrossSection)
+                double[][] sigmas = new double[mixture.size()][];
+                double[] vmr = new double[mixture.size()];
+                int m = 0;
+                for (Map.Entry<Integer, Double> e : mixture.entrySet()) {
+                    int done = m;
+                    CrossSectionRequest one = new CrossSectionRequest(temperature.kelvin(), pressure.atm(),
+                            composition, grid, wings, lineShape, threshold, LineSelection.molecules(e.getKey()),
+                            widths);
+                    CrossSectionResult r = calculator.compute(one, eng, (lines, fraction) -> progress.stepTo(
+                            Math.round((done + fraction) / mixture.size() * PROGRESS_STEPS)));
+                    parts.add(r);
+                    sigmas[m] = r.sigmaCm2PerMolecule();
+                    vmr[m] = e.getValue();
+                    vmrByFormula.put(registry.molecule(e.getKey()).formula(), e.getValue());
+                    m++;
+                }
+                CrossSectionResult first = parts.get(0);
+                // keys whose values differ between the molecules (selection, counts, …) go per molecule,
+                // prefixed "mixture.FORMULA.", so that no value of one molecule stands for the mixture
+                Map<String, String> common = new LinkedHashMap<>(first.metadata());
+                for (CrossSectionResult r : parts) {
+                    common.entrySet().removeIf(e -> !e.getValue().equals(r.metadata().get(e.getKey())));
+                }
+                Map<String, String> mixMetadata = new LinkedHashMap<>(common);
+                Object[] formulas = vmrByFormula.keySet().toArray();
+                for (int k = 0; k < parts.size(); k++) {
+                    for (Map.Entry<String, String> e : parts.get(k).metadata().entrySet()) {
+                        if (!common.containsKey(e.getKey())) {
+                            mixMetadata.put("mixture." + formulas[k] + "." + e.getKey(), e.getValue());
+                        }
+                    }
+                }
+                result = new CrossSectionResult(MixtureCrossSection.combine(sigmas, vmr), first.linesUsed(),
+                        first.linesBelowThreshold(), first.droppedIntensityFraction(),
+                        first.sumIntensityCmPerMolecule(), first.widthSources(), first.estimatedRelativeError(),
+                        mixMetadata, first.seconds(), first.wingLossFraction(), first.warnings());
+            }
         }
         // The file records per isotopologue where its Q(T) came from, and any warning on it.
         PartitionSumNotes partitionSums = PartitionSumNotes.of(registry, opened, temperature.kelvin());
         Map<String, String> metadata = new LinkedHashMap<>(result.metadata());
         metadata.putAll(partitionSums.metadata());
+        metadata.putAll(scaling.metadata());
+        if (mixture != null) {
+            metadata.putAll(MixtureCrossSection.metadata(vmrByFormula));
+        }
         CrossSectionFiles.write(out, fileFormat, grid, result.sigmaCm2PerMolecule(), metadata);
         if (plot != null) {
             CrossSectionPlot.write(plot, PlotStyle.of(String.format(Locale.ROOT, "T = %s K, p = %s bar, %s",
@@ -211,7 +280,13 @@ public final class SigmaCommand implements Callable<Integer> {
                             "T = " + fmt(temperature.kelvin()) + " K", result.sigmaCm2PerMolecule())), plotWavelength);
         }
         if (!quiet) {
-            summary(spec.commandLine().getOut(), result, grid);
+            for (int m = 0; m < parts.size(); m++) {
+                if (mixture != null) {
+                    spec.commandLine().getOut().println("molecule " + vmrByFormula.keySet().toArray()[m]
+                            + " (share " + MixtureCrossSection.metadata(vmrByFormula).get("mixture_shares") + "):");
+                }
+                summary(spec.commandLine().getOut(), parts.get(m), grid);
+            }
         }
         // A modelled Q(T) outside its stated accuracy changes every S(T) of its isotopologue: always say so.
         for (String warning : partitionSums.warnings()) {
@@ -219,6 +294,65 @@ public final class SigmaCommand implements Callable<Integer> {
         }
         spec.commandLine().getErr().flush();
         return ExitCodes.OK;
+    }
+
+    /**
+     * σ in cm²/molecule over lines of several molecules has no single "molecule": refused (docs/physics.md,
+     * "Per molecule of what") until mixing ratios can be declared.
+     */
+    private static void refuseSeveralMolecules(List<LineStore> opened, MoleculeRegistry registry,
+                                               Map<Integer, Double> mixture) {
+        java.util.TreeSet<Integer> molecules = new java.util.TreeSet<>();
+        for (LineStore store : opened) {
+            for (org.linewright.ingest.store.SourceInfo source : store.sources()) {
+                for (org.linewright.ingest.source.IsotopologueLookup.Id id : source.isotopologues()) {
+                    molecules.add(id.moleculeId());
+                }
+            }
+        }
+        if (mixture != null) {
+            for (int id : molecules) {
+                if (!mixture.containsKey(id)) {
+                    throw new InputException("--vmr: no mixing ratio for "
+                            + (registry.molecule(id) == null ? Integer.toString(id) : registry.molecule(id).formula())
+                            + ", whose lines are in the stores (expected a ratio for every molecule of the stores)");
+                }
+            }
+            return;
+        }
+        if (molecules.size() > 1) {
+            List<String> names = new ArrayList<>();
+            for (int id : molecules) {
+                names.add(registry.molecule(id) == null ? Integer.toString(id) : registry.molecule(id).formula());
+            }
+            throw new InputException("the stores hold lines of several molecules " + names + ": sigma per molecule "
+                    + "of a mixture needs declared mixing ratios (expected --vmr, e.g. CO=0.2,CO2=0.8, or --molecule)");
+        }
+    }
+
+    /** The declared mixing ratios by molecule id, in declaration order; null without {@code --vmr}. */
+    private Map<Integer, Double> mixture(MoleculeRegistry registry) {
+        if (vmrs == null || vmrs.isEmpty()) {
+            return null;
+        }
+        Map<Integer, Double> byId = new LinkedHashMap<>();
+        for (String item : vmrs) {
+            int eq = item.indexOf('=');
+            org.linewright.ingest.registry.Molecule m = eq > 0 ? registry.molecule(item.substring(0, eq).trim()) : null;
+            double x;
+            try {
+                x = eq > 0 ? Double.parseDouble(item.substring(eq + 1).trim()) : Double.NaN;
+            } catch (NumberFormatException e) {
+                x = Double.NaN;
+            }
+            if (m == null || !(x > 0) || Double.isInfinite(x) || byId.containsKey(m.id())) {
+                throw new InputException("--vmr " + org.linewright.ingest.text.OffendingText.quote(item)
+                        + ": expected MOLECULE=RATIO with a molecule of the registry, once, and a positive ratio, "
+                        + "e.g. CO=0.2");
+            }
+            byId.put(m.id(), x);
+        }
+        return byId;
     }
 
     private static String fmt(double v) {

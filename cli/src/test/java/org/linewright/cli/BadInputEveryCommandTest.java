@@ -203,6 +203,19 @@ class BadInputEveryCommandTest {
                 v.add(new String[] {"wide"});
             }
             case "--shape" -> v.add(new String[] {"square"});
+            case "--intensity-per" -> v.add(new String[] {"gram"});
+            case "--vmr" -> {
+                v.add(new String[] {"CO=-1"});
+                v.add(new String[] {"XYZ=0.5"});
+                v.add(new String[] {"CO=0.5,CO=0.2"});
+                v.add(new String[] {"lots"});
+            }
+            case "--abundance" -> {
+                v.add(new String[] {"CO/1=2"});
+                v.add(new String[] {"CO/1=-0.5"});
+                v.add(new String[] {"CO/99=0.5"});
+                v.add(new String[] {"half"});
+            }
             case "--step" -> {
                 v.add(new String[] {"-0.1"});
                 v.add(new String[] {"0"});

@@ -25,6 +25,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import org.linewright.broadening.background.BackgroundGas;
 import org.linewright.broadening.intensity.CompensatedSum;
 import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.intensity.IntensityScaling;
 import org.linewright.broadening.intensity.LineIntensity;
 import org.linewright.broadening.isotopologue.IsotopologueCache;
 import org.linewright.broadening.sources.ResolvedWidths;
@@ -129,6 +130,8 @@ public final class CrossSectionCalculator {
     private final IsotopologueLookup lookup;
     private final int threads;
     private final int chunkLines;
+    /** Convention and user abundances applied to S(T) of every line (docs/physics.md, "Per molecule of what"). */
+    private volatile IntensityScaling intensityScaling = IntensityScaling.NATURAL;
     /** Worker threads (none for one thread); idle threads end after {@value #WORKER_KEEP_ALIVE_SECONDS} s. */
     private final ThreadPoolExecutor workers;
     /** Batch buffers of earlier computations, reused instead of allocated per call. */
@@ -154,6 +157,22 @@ public final class CrossSectionCalculator {
      */
     public CrossSectionCalculator(List<LineStore> stores, IsotopologueLookup lookup, int threads) {
         this(stores, lookup, threads, CHUNK_LINES);
+    }
+
+    /**
+     * Sets the intensity convention and user isotopologue abundances for the following computations (default:
+     * per molecule of the natural-abundance species, registry abundances).
+     *
+     * @return this calculator
+     */
+    public CrossSectionCalculator withIntensityScaling(IntensityScaling scaling) {
+        this.intensityScaling = Objects.requireNonNull(scaling, "scaling");
+        return this;
+    }
+
+    /** The intensity convention and user abundances in use. */
+    public IntensityScaling intensityScaling() {
+        return intensityScaling;
     }
 
     /** With another batch size (tests use small batches to get many of them from small samples). */
@@ -616,9 +635,11 @@ public final class CrossSectionCalculator {
         final double[] doppler;
         final double[] lorentz;
         final double[] shift;
+        final IntensityScaling.Applier scaling;
 
-        Physics(IsotopologueLookup lookup, CrossSectionRequest request, int capacity) {
+        Physics(IsotopologueLookup lookup, CrossSectionRequest request, int capacity, IntensityScaling scaling) {
             isotopologues = new IsotopologueCache(lookup, request.temperatureK());
+            this.scaling = scaling.newApplier();
             resolver = request.widths().newResolver(request.composition());
             widths = resolver.newResult(capacity);
             doppler = new double[capacity];
@@ -697,7 +718,7 @@ public final class CrossSectionCalculator {
             // the query range is closed; [low, high) is enforced per line
             this.queryMaxCm1 = Math.min(highCm1, gridLastCm1 + reach);
             // tools for the first batch made here, on the calling thread, so that a bad request fails at once
-            Physics first = new Physics(lookup, request, chunkLines);
+            Physics first = new Physics(lookup, request, chunkLines, intensityScaling);
             made.add(first);
             idle.add(first);
         }
@@ -780,7 +801,7 @@ public final class CrossSectionCalculator {
             Physics p = idle.poll();
             try {
                 if (p == null) {
-                    p = new Physics(lookup, request, chunkLines);
+                    p = new Physics(lookup, request, chunkLines, intensityScaling);
                     made.add(p);
                 }
                 prepare(b, p);
@@ -819,6 +840,7 @@ public final class CrossSectionCalculator {
             double[] lorentz = p.lorentz;
             double[] shift = p.shift;
             LineIntensity.atTemperature(b, p.isotopologues, intensity);
+            p.scaling.apply(b, p.isotopologues, intensity);
             if (shape == LineShapeKind.LORENTZ) {
                 Arrays.fill(doppler, 0, n, 0.0);
             } else {
