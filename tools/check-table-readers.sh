@@ -11,6 +11,9 @@ root="$(cd "$(dirname "$(readlink -f "$0")")/.." && pwd)"
 work="$(mktemp -d "${TMPDIR:-/tmp}/linewright-readers.XXXXXX")"
 trap 'rm -rf "$work"' EXIT
 ARROW_JS_VERSION=21.2.0
+# Debian's python3-h5py lives in Debian's interpreter; a python3 earlier on PATH (pyenv, a venv) would not see it.
+PY=python3
+[[ -x /usr/bin/python3 ]] && PY=/usr/bin/python3
 
 for fmt in arrow h5; do
     cat > "$work/plan-$fmt.toml" <<PLAN
@@ -47,7 +50,7 @@ fi
 
 h5=""
 if command -v h5dump >/dev/null 2>&1; then
-    python3 - "$work" <<'PY'
+    "$PY" - "$work" <<'PY'
 import subprocess, sys, re, struct, hashlib
 work = sys.argv[1]
 def data(name, fmt="%.17g"):
@@ -72,8 +75,8 @@ with open(work + "/h5.txt", "w") as f:
 print(f"h5dump: {len(p)}x{len(t)}x{len(nu)} values, sigma_sha256 ok", file=sys.stderr)
 PY
     h5="h5dump"
-elif python3 -c "import h5py" >/dev/null 2>&1; then
-    python3 - "$work" <<'PY'
+elif "$PY" -c "import h5py" >/dev/null 2>&1; then
+    "$PY" - "$work" <<'PY'
 import sys, struct, hashlib, h5py
 work = sys.argv[1]
 with h5py.File(work + "/table.h5", "r") as f:
@@ -98,7 +101,7 @@ fi
 [[ -n "$h5" ]] && checked=$((checked + 1))
 
 if [[ -s "$work/arrow.txt" && -s "$work/h5.txt" ]]; then
-    python3 - "$work" <<'PY'
+    "$PY" - "$work" <<'PY'
 import sys
 work = sys.argv[1]
 a = [tuple(float(x) for x in l.split()) for l in open(work + "/arrow.txt")]
