@@ -1,15 +1,14 @@
 package org.linewright.grid.engine.exact;
 
+import org.linewright.grid.engine.ParallelTasks;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.concurrent.Callable;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.ChiFactorKind;
@@ -192,23 +191,7 @@ public final class ExactEngine implements CrossSectionEngine {
             work();
             return;
         }
-        try {
-            for (Future<Void> f : pool.invokeAll(workers)) {
-                f.get();
-            }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while summing line profiles", e);
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException re) {
-                throw re;
-            }
-            if (cause instanceof Error err) {
-                throw err;
-            }
-            throw new IllegalStateException(cause);
-        }
+        ParallelTasks.invokeAll(pool, workers, "summing line profiles");
     }
 
     /** Takes blocks until none is left; each block's lines are added in chunk order. */

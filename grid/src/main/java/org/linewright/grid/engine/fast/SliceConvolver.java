@@ -1,14 +1,13 @@
 package org.linewright.grid.engine.fast;
 
+import org.linewright.grid.engine.ParallelTasks;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ConcurrentLinkedQueue;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Future;
 import org.jtransforms.fft.DoubleFFT_1D;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.voigt.VoigtProfile;
@@ -156,29 +155,15 @@ final class SliceConvolver {
             });
         }
         double[][] blockSpectra = new double[blocks][];
-        try {
-            List<Future<BlockOutput>> futures = pool.invokeAll(tasks);
-            for (int b = 0; b < blocks; b++) {
-                BlockOutput out = futures.get(b).get();
-                blockSpectra[b] = out.spectrum;
-                counts.ffts += out.ffts;
-                counts.analyticSlices += out.analyticSlices;
-                counts.corrections += out.corrections;
-                counts.aliasError = Math.max(counts.aliasError, out.aliasError);
-                counts.curvatureError = Math.max(counts.curvatureError, out.curvatureError);
-            }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("fast engine interrupted", e);
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException re) {
-                throw re;
-            }
-            if (cause instanceof Error err) {
-                throw err;
-            }
-            throw new IllegalStateException(cause);
+        List<BlockOutput> outputs = ParallelTasks.invokeAll(pool, tasks, "convolving the fast engine's slices");
+        for (int b = 0; b < blocks; b++) {
+            BlockOutput out = outputs.get(b);
+            blockSpectra[b] = out.spectrum;
+            counts.ffts += out.ffts;
+            counts.analyticSlices += out.analyticSlices;
+            counts.corrections += out.corrections;
+            counts.aliasError = Math.max(counts.aliasError, out.aliasError);
+            counts.curvatureError = Math.max(counts.curvatureError, out.curvatureError);
         }
         // the blocks' spectra summed in block order, then one inverse transform
         double[] total = blockSpectra[0];
