@@ -651,6 +651,8 @@ public final class CrossSectionCalculator {
     /** The state of one computation: the request's constants, the per-thread tools and the reduced statistics. */
     private final class Run {
         final CrossSectionRequest request;
+        /** The scaling of this computation, read once: every batch's tools use the same one. */
+        final IntensityScaling scaling = intensityScaling;
         final double lowCm1;
         final double highCm1;
         final double queryMinCm1;
@@ -718,7 +720,7 @@ public final class CrossSectionCalculator {
             // the query range is closed; [low, high) is enforced per line
             this.queryMaxCm1 = Math.min(highCm1, gridLastCm1 + reach);
             // tools for the first batch made here, on the calling thread, so that a bad request fails at once
-            Physics first = new Physics(lookup, request, chunkLines, intensityScaling);
+            Physics first = new Physics(lookup, request, chunkLines, scaling);
             made.add(first);
             idle.add(first);
         }
@@ -801,7 +803,7 @@ public final class CrossSectionCalculator {
             Physics p = idle.poll();
             try {
                 if (p == null) {
-                    p = new Physics(lookup, request, chunkLines, intensityScaling);
+                    p = new Physics(lookup, request, chunkLines, scaling);
                     made.add(p);
                 }
                 prepare(b, p);
