@@ -75,7 +75,7 @@ public final class CompareCommand implements Callable<Integer> {
     /** Deprecated spelling of --report-format, read for one version. */
     @Option(names = "--format", hidden = true, paramLabel = "FORMAT")
     private void deprecatedReportFormat(String value) {
-        System.err.println("note: --format is deprecated, write --report-format");
+        DeprecatedSpelling.note(spec, "--format", "--report-format");
         formatDeprecated = value;
     }
 
@@ -90,14 +90,14 @@ public final class CompareCommand implements Callable<Integer> {
     /** Deprecated spelling of --max-shift, read for one version. */
     @Option(names = "--window", hidden = true, paramLabel = "WIDTH", converter = QuantityConverters.WavenumberInterval.class)
     private void deprecatedWindow(Wavenumber value) {
-        System.err.println("note: --window is deprecated, write --max-shift");
+        DeprecatedSpelling.note(spec, "--window", "--max-shift");
         window = value;
     }
 
     /** Deprecated spelling of --pair-within, read for one version. */
     @Option(names = "--tolerance", hidden = true, paramLabel = "WIDTH", converter = QuantityConverters.WavenumberInterval.class)
     private void deprecatedTolerance(Wavenumber value) {
-        System.err.println("note: --tolerance is deprecated, write --pair-within");
+        DeprecatedSpelling.note(spec, "--tolerance", "--pair-within");
         tolerance = value;
     }
 

@@ -12,7 +12,7 @@ final class Formats {
         try {
             return LineFormat.byId(id);
         } catch (IllegalArgumentException e) {
-            throw new InputException("--format: " + e.getMessage());
+            throw new InputException("--input-format: " + e.getMessage());
         }
     }
 }

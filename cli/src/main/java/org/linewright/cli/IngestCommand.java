@@ -60,7 +60,7 @@ public final class IngestCommand implements Callable<Integer> {
     /** Deprecated spelling of --input-format, read for one version. */
     @Option(names = "--format", hidden = true, paramLabel = "FORMAT")
     private void deprecatedInputFormat(String value) {
-        System.err.println("note: --format is deprecated, write --input-format");
+        DeprecatedSpelling.note(spec, "--format", "--input-format");
         format = value;
     }
 

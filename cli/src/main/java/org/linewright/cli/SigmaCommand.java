@@ -119,7 +119,7 @@ public final class SigmaCommand implements Callable<Integer> {
     /** Deprecated spelling of --max-relative-error, read for one version. */
     @Option(names = "--tolerance", hidden = true, paramLabel = "T")
     private void deprecatedTolerance(double value) {
-        System.err.println("note: --tolerance is deprecated, write --max-relative-error");
+        DeprecatedSpelling.note(spec, "--tolerance", "--max-relative-error");
         toleranceDeprecated = value;
     }
 
@@ -137,7 +137,7 @@ public final class SigmaCommand implements Callable<Integer> {
     /** Deprecated spelling of --threshold-cm-per-molecule, read for one version. */
     @Option(names = "--threshold", hidden = true, paramLabel = "S")
     private void deprecatedThresholdCmPerMolecule(double value) {
-        System.err.println("note: --threshold is deprecated, write --threshold-cm-per-molecule");
+        DeprecatedSpelling.note(spec, "--threshold", "--threshold-cm-per-molecule");
         thresholdDeprecated = value;
     }
 

@@ -74,7 +74,7 @@ public final class VerifyCommand implements Callable<Integer> {
     /** Deprecated spelling of --report-format, read for one version. */
     @Option(names = "--format", hidden = true, paramLabel = "FORMAT")
     private void deprecatedReportFormat(String value) {
-        System.err.println("note: --format is deprecated, write --report-format");
+        DeprecatedSpelling.note(spec, "--format", "--report-format");
         formatDeprecated = value;
     }
 

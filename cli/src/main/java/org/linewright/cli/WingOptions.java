@@ -4,7 +4,9 @@ import org.linewright.broadening.wings.ChiFactorKind;
 import org.linewright.broadening.wings.WingCutoff;
 import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.ingest.InputException;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
 
 /**
  * How line wings are treated: a picocli mixin for the commands that compute cross sections. The cutoff is a
@@ -13,6 +15,9 @@ import picocli.CommandLine.Option;
  * sub-Lorentzian χ factor of Perrin &amp; Hartmann (1989). Every choice goes into the output's metadata.
  */
 public final class WingOptions {
+    @Spec(Spec.Target.MIXEE)
+    private CommandSpec mixee;
+
     @Option(names = "--cutoff", paramLabel = "CM1", defaultValue = "25",
             description = "Wing cutoff distance from each line centre in cm-1, or the cap of the rules below "
                     + "(default ${DEFAULT-VALUE}).")
@@ -25,7 +30,7 @@ public final class WingOptions {
     /** Deprecated spelling of --cutoff-hwhm-multiple, read for one version. */
     @Option(names = "--cutoff-hwhm", hidden = true, paramLabel = "N")
     void deprecatedHwhm(double value) {
-        System.err.println("note: --cutoff-hwhm is deprecated, write --cutoff-hwhm-multiple");
+        DeprecatedSpelling.note(mixee, "--cutoff-hwhm", "--cutoff-hwhm-multiple");
         hwhmMultiple = value;
     }
 

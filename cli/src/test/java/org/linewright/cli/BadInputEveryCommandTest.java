@@ -335,7 +335,9 @@ class BadInputEveryCommandTest {
 
     private static void check(List<String> argv, List<String> failures) {
         Run r = run(argv.toArray(String[]::new));
-        String stderr = r.err().strip();
+        // a hidden old spelling prints its one deprecation note first (DEVELOPERS.md, "Naming"); the error is
+        // then the one line after it
+        String stderr = r.err().strip().replaceFirst("^note: --[a-z-]+ is deprecated, write --[a-z-]+\\R", "");
         String what = String.join(" ", argv) + "\n    -> exit " + r.code() + ": " + stderr.replace("\n", "\n       ");
         if (r.code() != ExitCodes.BAD_INPUT) {
             failures.add(what);

@@ -15,7 +15,7 @@ import org.linewright.reference.report.ReportFormat;
  */
 public final class TableImpactWriter {
     /** Header of the CSV table. */
-    public static final String CSV_HEADER = "pressure_bar,temperature_k,block,from_cm1,to_cm1,change_positions,"
+    public static final String CSV_HEADER = "pressure_bar,temperature_K,block,from_cm1,to_cm1,change_positions,"
             + "max_abs_change_cm2_per_molecule,max_relative_change,at_wavenumber_cm1";
 
     private TableImpactWriter() {
@@ -56,7 +56,7 @@ public final class TableImpactWriter {
                 for (int i = 0; i < cells.size(); i++) {
                     TableImpact.Cell c = cells.get(i);
                     b.append(i == 0 ? "\n" : ",\n").append("  {\"pressure_bar\": ").append(c.pressureBar())
-                            .append(", \"temperature_k\": ").append(c.temperatureK())
+                            .append(", \"temperature_K\": ").append(c.temperatureK())
                             .append(", \"block\": ").append(c.block())
                             .append(", \"from_cm1\": ").append(c.fromCm1()).append(", \"to_cm1\": ").append(c.toCm1())
                             .append(", \"change_positions\": ").append(c.changePositions())
