@@ -212,14 +212,13 @@ public final class SigmaCommand implements Callable<Integer> {
         WingTreatment wings = wingOptions.treatment();
         WidthOptions widths = backgroundOptions.widthOptions();
         CrossSectionRequest request = new CrossSectionRequest(temperature.kelvin(), pressure.atm(), composition, grid,
-                wings, lineShape, threshold, selection, widths);
+                wings, lineShape, threshold, selection, widths, scaling);
         CrossSectionResult result;
         List<CrossSectionResult> parts = new ArrayList<>();
         Map<String, Double> vmrByFormula = new LinkedHashMap<>();
         try (CrossSectionEngine eng = EngineFactory.create(engine, threadCount, wings, tolerance);
              Progress progress = Progress.start("sigma", PROGRESS_STEPS, "%", 1, quiet)) {
-            CrossSectionCalculator calculator = new CrossSectionCalculator(opened, registry, threadCount)
-                    .withIntensityScaling(scaling);
+            CrossSectionCalculator calculator = new CrossSectionCalculator(opened, registry, threadCount);
             if (mixture == null) {
                 result = calculator.compute(request, eng,
                         (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
@@ -231,9 +230,7 @@ public final class SigmaCommand implements Callable<Integer> {
                 int m = 0;
                 for (Map.Entry<Integer, Double> e : mixture.entrySet()) {
                     int done = m;
-                    CrossSectionRequest one = new CrossSectionRequest(temperature.kelvin(), pressure.atm(),
-                            composition, grid, wings, lineShape, threshold, LineSelection.molecules(e.getKey()),
-                            widths);
+                    CrossSectionRequest one = request.withSelection(LineSelection.molecules(e.getKey()));
                     CrossSectionResult r = calculator.compute(one, eng, (lines, fraction) -> progress.stepTo(
                             Math.round((done + fraction) / mixture.size() * PROGRESS_STEPS)));
                     parts.add(r);
