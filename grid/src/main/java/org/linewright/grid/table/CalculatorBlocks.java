@@ -14,6 +14,7 @@ import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.calc.CrossSectionRequest;
 import org.linewright.grid.calc.CrossSectionResult;
 import org.linewright.grid.calc.LineSelection;
+import org.linewright.grid.calc.MixtureCrossSection;
 import org.linewright.grid.calc.ProgressListener;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.grid.engine.CrossSectionEngine;
@@ -26,7 +27,9 @@ import org.linewright.ingest.store.LineStore;
 /**
  * The table builder's blocks computed by the cross-section calculator with the plan's engine: each block is one
  * {@link CrossSectionCalculator#compute} on the block's slice of the grid, restricted to the lines whose stored
- * centres lie within the block's reach. The engine uses the build's threads (same bits for any count).
+ * centres lie within the block's reach, with the plan's intensity convention and abundances. With mixing ratios
+ * declared ({@code species.vmr}) a block is one computation per declared molecule, combined into σ per molecule
+ * of the mixture ({@link MixtureCrossSection}). The engine uses the build's threads (same bits for any count).
  */
 public final class CalculatorBlocks implements BlockCalculator {
     private final CrossSectionCalculator calculator;
@@ -59,11 +62,43 @@ public final class CalculatorBlocks implements BlockCalculator {
     @Override
     public BlockResult compute(WavenumberGrid blockGrid, double pressureAtm, double temperatureK, double lineMinCm1,
                                double lineMaxCm1) {
+        TablePlan.Species species = plan.species();
         CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm, plan.composition(), blockGrid,
-                wings, plan.profile().shape(), plan.profile().thresholdCmPerMolecule(), selection, widths);
+                wings, plan.profile().shape(), plan.profile().thresholdCmPerMolecule(), selection, widths,
+                species.intensityScaling());
+        if (!species.mixture()) {
+            return block(compute(request, lineMinCm1, lineMaxCm1));
+        }
+        // one σ per declared molecule, then σ_mix = Σ x_m σ_m / Σ x_m, as sigma --vmr does (MixtureCrossSection)
+        List<TablePlan.Vmr> vmr = species.vmr();
+        double[][] sigmas = new double[vmr.size()][];
+        double[] ratios = new double[vmr.size()];
+        long linesUsed = 0;
+        long linesBelowThreshold = 0;
+        Map<String, Long> counts = new LinkedHashMap<>();
+        double error = 0;
+        java.util.Set<String> warnings = new java.util.LinkedHashSet<>();
+        for (int m = 0; m < vmr.size(); m++) {
+            BlockResult one = block(compute(request.withSelection(LineSelection.molecules(vmr.get(m).moleculeId())),
+                    lineMinCm1, lineMaxCm1));
+            sigmas[m] = one.sigmaCm2PerMolecule();
+            ratios[m] = vmr.get(m).ratio();
+            linesUsed += one.linesUsed();
+            linesBelowThreshold += one.linesBelowThreshold();
+            one.counts().forEach((k, v) -> counts.merge(k, v, Long::sum));
+            error = Math.max(error, one.estimatedRelativeError());
+            warnings.addAll(one.warnings());
+        }
+        return new BlockResult(MixtureCrossSection.combine(sigmas, ratios), linesUsed, linesBelowThreshold, counts,
+                error, List.copyOf(warnings));
+    }
+
+    private CrossSectionResult compute(CrossSectionRequest request, double lineMinCm1, double lineMaxCm1) {
         // the calculator's range is half-open [low, high); the block's reach is closed
-        CrossSectionResult r = calculator.compute(request, engine, lineMinCm1, Math.nextUp(lineMaxCm1),
-                ProgressListener.NONE);
+        return calculator.compute(request, engine, lineMinCm1, Math.nextUp(lineMaxCm1), ProgressListener.NONE);
+    }
+
+    private static BlockResult block(CrossSectionResult r) {
         Map<String, Long> counts = new LinkedHashMap<>();
         WidthSourceTally tally = r.widthSources();
         for (BackgroundGas gas : BackgroundGas.values()) {
