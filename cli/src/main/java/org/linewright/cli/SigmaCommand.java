@@ -212,55 +212,26 @@ public final class SigmaCommand implements Callable<Integer> {
         }
         WingTreatment wings = wingOptions.treatment();
         WidthOptions widths = backgroundOptions.widthOptions();
+        Map<String, Double> vmrByFormula = new LinkedHashMap<>();
+        if (mixture != null) {
+            // σ_mix = Σ x_m σ_m / Σ x in one pass: each line's S(T) carries its molecule's share (IntensityScaling)
+            int[] ids = new int[mixture.size()];
+            int m = 0;
+            for (Map.Entry<Integer, Double> e : mixture.entrySet()) {
+                ids[m++] = e.getKey();
+                vmrByFormula.put(registry.molecule(e.getKey()).formula(), e.getValue());
+            }
+            selection = LineSelection.molecules(ids);
+            scaling = scaling.withMoleculeShares(mixture);
+        }
         CrossSectionRequest request = new CrossSectionRequest(temperature.kelvin(), pressure.atm(), composition, grid,
                 wings, lineShape, threshold, selection, widths, scaling);
         CrossSectionResult result;
-        List<CrossSectionResult> parts = new ArrayList<>();
-        Map<String, Double> vmrByFormula = new LinkedHashMap<>();
         try (CrossSectionEngine eng = EngineFactory.create(engine, threadCount, wings, tolerance);
              Progress progress = Progress.start("sigma", PROGRESS_STEPS, "%", 1, quiet)) {
             CrossSectionCalculator calculator = new CrossSectionCalculator(opened, registry, threadCount);
-            if (mixture == null) {
-                result = calculator.compute(request, eng,
-                        (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
-                parts.add(result);
-            } else {
-                // one σ per declared molecule, then σ_mix = Σ x_m σ_m / Σ x_m (MixtureCrossSection)
-                double[][] sigmas = new double[mixture.size()][];
-                double[] vmr = new double[mixture.size()];
-                int m = 0;
-                for (Map.Entry<Integer, Double> e : mixture.entrySet()) {
-                    int done = m;
-                    CrossSectionRequest one = request.withSelection(LineSelection.molecules(e.getKey()));
-                    CrossSectionResult r = calculator.compute(one, eng, (lines, fraction) -> progress.stepTo(
-                            Math.round((done + fraction) / mixture.size() * PROGRESS_STEPS)));
-                    parts.add(r);
-                    sigmas[m] = r.sigmaCm2PerMolecule();
-                    vmr[m] = e.getValue();
-                    vmrByFormula.put(registry.molecule(e.getKey()).formula(), e.getValue());
-                    m++;
-                }
-                CrossSectionResult first = parts.get(0);
-                // keys whose values differ between the molecules (selection, counts, …) go per molecule,
-                // prefixed "mixture.FORMULA.", so that no value of one molecule stands for the mixture
-                Map<String, String> common = new LinkedHashMap<>(first.metadata());
-                for (CrossSectionResult r : parts) {
-                    common.entrySet().removeIf(e -> !e.getValue().equals(r.metadata().get(e.getKey())));
-                }
-                Map<String, String> mixMetadata = new LinkedHashMap<>(common);
-                Object[] formulas = vmrByFormula.keySet().toArray();
-                for (int k = 0; k < parts.size(); k++) {
-                    for (Map.Entry<String, String> e : parts.get(k).metadata().entrySet()) {
-                        if (!common.containsKey(e.getKey())) {
-                            mixMetadata.put("mixture." + formulas[k] + "." + e.getKey(), e.getValue());
-                        }
-                    }
-                }
-                result = new CrossSectionResult(MixtureCrossSection.combine(sigmas, vmr), first.linesUsed(),
-                        first.linesBelowThreshold(), first.droppedIntensityFraction(),
-                        first.sumIntensityCmPerMolecule(), first.widthSources(), first.estimatedRelativeError(),
-                        mixMetadata, first.seconds(), first.wingLossFraction(), first.warnings());
-            }
+            result = calculator.compute(request, eng,
+                    (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
         }
         // The file records per isotopologue where its Q(T) came from, and any warning on it.
         PartitionSumNotes partitionSums = PartitionSumNotes.of(registry, opened, temperature.kelvin());
@@ -278,13 +249,11 @@ public final class SigmaCommand implements Callable<Integer> {
                             "T = " + fmt(temperature.kelvin()) + " K", result.sigmaCm2PerMolecule())), plotWavelength);
         }
         if (!quiet) {
-            for (int m = 0; m < parts.size(); m++) {
-                if (mixture != null) {
-                    spec.commandLine().getOut().println("molecule " + vmrByFormula.keySet().toArray()[m]
-                            + " (share " + MixtureCrossSection.metadata(vmrByFormula).get("mixture_shares") + "):");
-                }
-                summary(spec.commandLine().getOut(), parts.get(m), grid);
+            if (mixture != null) {
+                spec.commandLine().getOut().println("mixture, per molecule of the declared absorbers (shares "
+                        + MixtureCrossSection.metadata(vmrByFormula).get("mixture_shares") + "):");
             }
+            summary(spec.commandLine().getOut(), result, grid);
         }
         // A modelled Q(T) outside its stated accuracy changes every S(T) of its isotopologue: always say so.
         for (String warning : partitionSums.warnings()) {

@@ -157,10 +157,9 @@ class IntensityConventionCommandTest {
         assertEquals(0, r.code(), r.err());
         try (HdfFile hdf = new HdfFile(h5)) {
             assertEquals("CO=0.2500000000;CO2=0.7500000000", hdf.getAttribute("mixture_shares").getData());
-            // no one molecule's selection stands for the mixture: each is recorded under its own prefix
-            assertEquals(null, hdf.getAttribute("line_selection"));
-            assertTrue(hdf.getAttribute("mixture.CO.line_selection") != null);
-            assertTrue(hdf.getAttribute("mixture.CO2.line_selection") != null);
+            // one computation over the lines of both declared molecules
+            String selection = (String) hdf.getAttribute("line_selection").getData();
+            assertEquals("molecules=5,2", selection);
         }
     }
 

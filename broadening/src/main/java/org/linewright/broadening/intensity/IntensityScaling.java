@@ -19,8 +19,10 @@ import org.linewright.ingest.line.LineBatch;
  * </pre>
  * S is linear in the abundance on both paths of {@link LineIntensity} (S(296 K) given, or from A with I_a;
  * Šimečková et al. 2006, JQSRT 98, 130, eq. 20), so one factor per isotopologue applied after S(T) is exact and
- * treats lines given by S(296 K) and by Einstein A alike. Immutable; {@link #apply} allocates nothing once each
- * isotopologue has been seen (factors kept in slots as in {@link IsotopologueCache}).
+ * treats lines given by S(296 K) and by Einstein A alike. For σ per molecule of a mixture the factor also carries
+ * the molecule's share x_m / Σ x ({@link #withMoleculeShares}): σ_mix = Σ_m x_m σ_m / Σ x is then one sum over the
+ * lines of every declared molecule, computed (and its error estimated) in one pass. Immutable; {@link #apply}
+ * allocates nothing once each isotopologue has been seen (factors kept in slots as in {@link IsotopologueCache}).
  */
 public final class IntensityScaling {
     /** The stored intensities unchanged: natural abundances, no user values. */
@@ -30,6 +32,8 @@ public final class IntensityScaling {
     private final IntensityConvention convention;
     private final Map<Long, Double> userAbundances;
     private final Map<String, Double> userAbundancesByName;
+    /** Molecule id → x_m / Σ x; empty for one molecule (no mixture). */
+    private final Map<Integer, Double> moleculeShares;
 
     /**
      * @param convention per natural-abundance molecule or per isotopologue molecule
@@ -54,6 +58,47 @@ public final class IntensityScaling {
         }
         this.userAbundances = byKey;
         this.userAbundancesByName = Collections.unmodifiableMap(new LinkedHashMap<>(userAbundances));
+        this.moleculeShares = Map.of();
+    }
+
+    private IntensityScaling(IntensityScaling base, Map<Integer, Double> moleculeShares) {
+        this.convention = base.convention;
+        this.userAbundances = base.userAbundances;
+        this.userAbundancesByName = base.userAbundancesByName;
+        this.moleculeShares = moleculeShares;
+    }
+
+    /**
+     * This scaling, each molecule's intensities also multiplied by its share of a declared mixture.
+     *
+     * @param volumeMixingRatios molecule id → x_m, each positive and finite
+     * @return the scaling with factor x_m / Σ x on every isotopologue of molecule m; a molecule absent from the map
+     *         gets factor 0 (its lines are not part of the mixture)
+     * @throws InputException for a ratio that is not positive and finite, or an empty map
+     */
+    public IntensityScaling withMoleculeShares(Map<Integer, Double> volumeMixingRatios) {
+        if (volumeMixingRatios.isEmpty()) {
+            throw new InputException("a mixture without molecules (expected at least one mixing ratio)");
+        }
+        double total = 0;
+        for (Map.Entry<Integer, Double> e : volumeMixingRatios.entrySet()) {
+            double x = e.getValue();
+            if (!(x > 0) || Double.isInfinite(x)) {
+                throw new InputException("mixing ratio of molecule " + e.getKey() + ": " + x
+                        + " (expected a positive number)");
+            }
+            total += x;
+        }
+        Map<Integer, Double> shares = new LinkedHashMap<>();
+        for (Map.Entry<Integer, Double> e : volumeMixingRatios.entrySet()) {
+            shares.put(e.getKey(), e.getValue() / total);
+        }
+        return new IntensityScaling(this, Collections.unmodifiableMap(shares));
+    }
+
+    /** Molecule id → share x_m / Σ x of the declared mixture, in declaration order; empty without a mixture. */
+    public Map<Integer, Double> moleculeShares() {
+        return moleculeShares;
     }
 
     private static long key(int moleculeId, int isotopologue) {
@@ -71,7 +116,8 @@ public final class IntensityScaling {
 
     /** True when {@link #apply} changes nothing. */
     public boolean isIdentity() {
-        return convention == IntensityConvention.NATURAL_ABUNDANCE && userAbundances.isEmpty();
+        return convention == IntensityConvention.NATURAL_ABUNDANCE && userAbundances.isEmpty()
+                && moleculeShares.isEmpty();
     }
 
     /**
@@ -80,6 +126,18 @@ public final class IntensityScaling {
      * @throws InputException when the factor needs a_list and the registry has none
      */
     public double factor(int moleculeId, int isotopologue, double listAbundance) {
+        return abundanceFactor(moleculeId, isotopologue, listAbundance) * shareOf(moleculeId);
+    }
+
+    private double shareOf(int moleculeId) {
+        if (moleculeShares.isEmpty()) {
+            return 1.0;
+        }
+        Double share = moleculeShares.get(moleculeId);
+        return share == null ? 0.0 : share;
+    }
+
+    private double abundanceFactor(int moleculeId, int isotopologue, double listAbundance) {
         Double user = userAbundances.get(key(moleculeId, isotopologue));
         if (convention == IntensityConvention.NATURAL_ABUNDANCE && user == null) {
             return 1.0;

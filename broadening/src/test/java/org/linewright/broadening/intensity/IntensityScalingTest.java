@@ -89,4 +89,38 @@ class IntensityScalingTest {
         assertThrows(InputException.class,
                 () -> new IntensityScaling(IntensityConvention.ISOTOPOLOGUE, Map.of("5/1", 0.5)));
     }
+
+    /**
+     * σ_mix = Σ x_m σ_m / Σ x (definition, docs/physics.md): each molecule's S is multiplied by x_m / Σ x, on top of
+     * the abundance factor; a molecule outside the mixture contributes nothing.
+     */
+    @Test
+    void moleculeSharesMultiplyOnTopOfAbundances() {
+        SampleIsotopologues lookup = SampleIsotopologues.withLinearRotorQ();
+        LineBatch b = mixedBatch();
+        for (int i = 0; i < b.size; i += 5) {
+            b.moleculeId[i] = 2; // some rows of another molecule (CO2 id), outside or inside the mixture
+        }
+        IntensityScaling base = new IntensityScaling(IntensityConvention.NATURAL_ABUNDANCE, Map.of("5/2", 2 * A2));
+        IntensityScaling coOnly = base.withMoleculeShares(Map.of(5, 0.3));
+        IntensityScaling both = base.withMoleculeShares(new java.util.LinkedHashMap<>(Map.of(5, 1.0, 2, 3.0)));
+        assertEquals(Map.of(5, 0.25, 2, 0.75), both.moleculeShares());
+        IsotopologueCache cache = new IsotopologueCache(lookup, 296);
+        double[] plain = new double[b.size];
+        double[] one = new double[b.size];
+        double[] two = new double[b.size];
+        LineIntensity.atTemperature(b, cache, plain);
+        base.newApplier().apply(b, cache, plain);
+        LineIntensity.atTemperature(b, cache, one);
+        coOnly.newApplier().apply(b, cache, one);
+        LineIntensity.atTemperature(b, cache, two);
+        both.newApplier().apply(b, cache, two);
+        for (int i = 0; i < b.size; i++) {
+            boolean co = b.moleculeId[i] == 5;
+            assertEquals(co ? plain[i] : 0.0, one[i], 1e-15 * plain[i], "row " + i);
+            assertEquals((co ? 0.25 : 0.75) * plain[i], two[i], 1e-15 * plain[i], "row " + i);
+        }
+        assertThrows(InputException.class, () -> base.withMoleculeShares(Map.of(5, -1.0)));
+        assertThrows(InputException.class, () -> base.withMoleculeShares(Map.of()));
+    }
 }

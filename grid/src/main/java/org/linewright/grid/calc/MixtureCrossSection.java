@@ -13,35 +13,13 @@ import org.linewright.ingest.InputException;
  *   σ_mix(ν) = Σ_m x_m σ_m(ν) / Σ_m x_m
  * </pre>
  * normalised by the sum of the declared ratios, so σ_mix is per molecule of the absorbing molecules declared
- * (an absorption coefficient is then κ = n · Σ x_m · σ_mix with n the total number density). The sum runs in the
- * order the molecules were declared, point by point (same bits for the same inputs).
+ * (an absorption coefficient is then κ = n · Σ x_m · σ_mix with n the total number density). It is computed as one
+ * sum over the lines of every declared molecule, each line's S(T) multiplied by its molecule's share
+ * ({@link org.linewright.broadening.intensity.IntensityScaling#withMoleculeShares}), so that the engine's error
+ * estimate and the intensity threshold apply to σ_mix itself. This class names the convention in the output.
  */
 public final class MixtureCrossSection {
     private MixtureCrossSection() {
-    }
-
-    /**
-     * @param sigmas σ_m per molecule, in the order of {@code vmr}, all of one length
-     * @param vmr x_m per molecule (formula → ratio), each positive and finite
-     * @return σ_mix
-     */
-    public static double[] combine(double[][] sigmas, double[] vmr) {
-        if (sigmas.length != vmr.length || sigmas.length == 0) {
-            throw new IllegalArgumentException("one mixing ratio per cross section expected");
-        }
-        double total = 0;
-        for (double x : vmr) {
-            total += x;
-        }
-        double[] out = new double[sigmas[0].length];
-        for (int m = 0; m < sigmas.length; m++) {
-            double share = vmr[m] / total;
-            double[] s = sigmas[m];
-            for (int i = 0; i < out.length; i++) {
-                out[i] += share * s[i];
-            }
-        }
-        return out;
     }
 
     /**

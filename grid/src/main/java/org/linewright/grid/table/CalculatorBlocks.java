@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.linewright.broadening.background.BackgroundGas;
+import org.linewright.broadening.intensity.IntensityScaling;
 import org.linewright.broadening.sources.GasParameters;
 import org.linewright.broadening.sources.WidthResolver;
 import org.linewright.broadening.sources.WidthSource;
@@ -14,7 +15,6 @@ import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.calc.CrossSectionRequest;
 import org.linewright.grid.calc.CrossSectionResult;
 import org.linewright.grid.calc.LineSelection;
-import org.linewright.grid.calc.MixtureCrossSection;
 import org.linewright.grid.calc.ProgressListener;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.grid.engine.CrossSectionEngine;
@@ -28,8 +28,9 @@ import org.linewright.ingest.store.LineStore;
  * The table builder's blocks computed by the cross-section calculator with the plan's engine: each block is one
  * {@link CrossSectionCalculator#compute} on the block's slice of the grid, restricted to the lines whose stored
  * centres lie within the block's reach, with the plan's intensity convention and abundances. With mixing ratios
- * declared ({@code species.vmr}) a block is one computation per declared molecule, combined into σ per molecule
- * of the mixture ({@link MixtureCrossSection}). The engine uses the build's threads (same bits for any count).
+ * declared ({@code species.vmr}) a block is one computation over the declared molecules' lines, each S(T) carrying
+ * its molecule's share, which gives σ per molecule of the mixture ({@code MixtureCrossSection}) with the engine's
+ * error estimate and the threshold applying to σ_mix itself. The engine uses the build's threads (same bits for any count).
  */
 public final class CalculatorBlocks implements BlockCalculator {
     private final CrossSectionCalculator calculator;
@@ -37,6 +38,8 @@ public final class CalculatorBlocks implements BlockCalculator {
     private final TablePlan plan;
     private final WingTreatment wings;
     private final LineSelection selection;
+    /** The plan's intensity convention and abundances, with the molecules' shares of a declared mixture. */
+    private final IntensityScaling scaling;
     private final WidthOptions widths;
 
     private CalculatorBlocks(TablePlan plan, List<LineStore> stores, MoleculeRegistry registry, int threads) {
@@ -45,7 +48,20 @@ public final class CalculatorBlocks implements BlockCalculator {
         this.wings = plan.profile().wings();
         this.engine = EngineFactory.create(plan.profile().engine(), threads, wings, plan.profile().tolerance());
         int[] molecules = plan.species().molecules().stream().mapToInt(Integer::intValue).toArray();
-        this.selection = new LineSelection(molecules, plan.species().isotopologues().toArray(new int[0][]));
+        TablePlan.Species species = plan.species();
+        if (species.mixture()) {
+            // σ_mix = Σ x_m σ_m / Σ x in one pass, as sigma --vmr: the declared molecules' lines, each S(T)
+            // multiplied by its molecule's share x_m / Σ x (IntensityScaling.withMoleculeShares)
+            Map<Integer, Double> ratios = new LinkedHashMap<>();
+            for (TablePlan.Vmr v : species.vmr()) {
+                ratios.put(v.moleculeId(), v.ratio());
+            }
+            this.selection = LineSelection.molecules(ratios.keySet().stream().mapToInt(Integer::intValue).toArray());
+            this.scaling = species.intensityScaling().withMoleculeShares(ratios);
+        } else {
+            this.selection = new LineSelection(molecules, species.isotopologues().toArray(new int[0][]));
+            this.scaling = species.intensityScaling();
+        }
         List<WidthSource> order = new ArrayList<>();
         for (String label : plan.widths().order()) {
             order.add(WidthSource.byLabel(label));
@@ -62,35 +78,9 @@ public final class CalculatorBlocks implements BlockCalculator {
     @Override
     public BlockResult compute(WavenumberGrid blockGrid, double pressureAtm, double temperatureK, double lineMinCm1,
                                double lineMaxCm1) {
-        TablePlan.Species species = plan.species();
         CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm, plan.composition(), blockGrid,
-                wings, plan.profile().shape(), plan.profile().thresholdCmPerMolecule(), selection, widths,
-                species.intensityScaling());
-        if (!species.mixture()) {
-            return block(compute(request, lineMinCm1, lineMaxCm1));
-        }
-        // one σ per declared molecule, then σ_mix = Σ x_m σ_m / Σ x_m, as sigma --vmr does (MixtureCrossSection)
-        List<TablePlan.Vmr> vmr = species.vmr();
-        double[][] sigmas = new double[vmr.size()][];
-        double[] ratios = new double[vmr.size()];
-        long linesUsed = 0;
-        long linesBelowThreshold = 0;
-        Map<String, Long> counts = new LinkedHashMap<>();
-        double error = 0;
-        java.util.Set<String> warnings = new java.util.LinkedHashSet<>();
-        for (int m = 0; m < vmr.size(); m++) {
-            BlockResult one = block(compute(request.withSelection(LineSelection.molecules(vmr.get(m).moleculeId())),
-                    lineMinCm1, lineMaxCm1));
-            sigmas[m] = one.sigmaCm2PerMolecule();
-            ratios[m] = vmr.get(m).ratio();
-            linesUsed += one.linesUsed();
-            linesBelowThreshold += one.linesBelowThreshold();
-            one.counts().forEach((k, v) -> counts.merge(k, v, Long::sum));
-            error = Math.max(error, one.estimatedRelativeError());
-            warnings.addAll(one.warnings());
-        }
-        return new BlockResult(MixtureCrossSection.combine(sigmas, ratios), linesUsed, linesBelowThreshold, counts,
-                error, List.copyOf(warnings));
+                wings, plan.profile().shape(), plan.profile().thresholdCmPerMolecule(), selection, widths, scaling);
+        return block(compute(request, lineMinCm1, lineMaxCm1));
     }
 
     private CrossSectionResult compute(CrossSectionRequest request, double lineMinCm1, double lineMaxCm1) {

@@ -4,19 +4,25 @@ import org.linewright.broadening.wings.WingKernel;
 
 /**
  * One family of lines in a {@link FastPlan}: lines of one width kind (Voigt, Doppler-dominated, pure Lorentz,
- * Lorentz-dominated), without or with the χ factor, with the width axes chosen for them and the errors those axes
- * were measured to make. Immutable.
+ * Lorentz-dominated, and the Voigt and Lorentz-dominated lines whose Lorentz width is large against the cutoff — the
+ * "wide" kinds, given their own, finer Lorentz axis), without or with the χ factor, with the width axes chosen for
+ * them and the errors those axes were measured to make. Immutable.
  */
 final class Family {
     static final int VOIGT = 0;
     static final int DOPPLER_DOMINATED = 1;
     static final int LORENTZ_ONLY = 2;
     static final int LORENTZ_DOMINATED = 3;
+    /** Voigt lines with γL at or above the plan's wide split: axes like {@link #VOIGT}, planned on their own. */
+    static final int VOIGT_WIDE = 4;
+    /** Lorentz-dominated lines with γL at or above the wide split: axes like {@link #LORENTZ_DOMINATED}. */
+    static final int LORENTZ_DOMINATED_WIDE = 5;
     /** Width kinds; a family index is a kind, plus this for lines with the χ factor. */
-    static final int KINDS = 4;
-    /** Families: four width kinds, each without and with the χ factor. */
+    static final int KINDS = 6;
+    /** Families: six width kinds, each without and with the χ factor. */
     static final int COUNT = 2 * KINDS;
-    private static final String[] KIND_NAMES = {"voigt", "doppler", "lorentz", "lorentz-dominated"};
+    private static final String[] KIND_NAMES = {"voigt", "doppler", "lorentz", "lorentz-dominated", "voigt-wide",
+        "lorentz-dominated-wide"};
 
     /** Family index, 0 … {@link #COUNT} − 1. */
     final int index;
@@ -65,6 +71,17 @@ final class Family {
 
     static int kind(int familyIndex) {
         return familyIndex % KINDS;
+    }
+
+    /** The kind whose axes a family takes: a wide kind's narrow counterpart, else the family's own kind. */
+    static int axisKind(int familyIndex) {
+        int kind = kind(familyIndex);
+        return kind == VOIGT_WIDE ? VOIGT : (kind == LORENTZ_DOMINATED_WIDE ? LORENTZ_DOMINATED : kind);
+    }
+
+    /** The wide counterpart of a Voigt or Lorentz-dominated kind; any other kind unchanged. */
+    static int wide(int kind) {
+        return kind == VOIGT ? VOIGT_WIDE : (kind == LORENTZ_DOMINATED ? LORENTZ_DOMINATED_WIDE : kind);
     }
 
     static boolean withChi(int familyIndex) {

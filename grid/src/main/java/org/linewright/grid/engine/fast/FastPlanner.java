@@ -166,8 +166,13 @@ final class FastPlanner {
             double widthBudget = widthBudget(stats, h, b.uniform);
             chooseLorentzSplit(stats[Family.VOIGT], stats[Family.VOIGT + Family.KINDS], widthBudget);
             chooseDopplerSplit(stats[Family.VOIGT], stats[Family.VOIGT + Family.KINDS], widthBudget);
+            wideSplitCm1 = Double.POSITIVE_INFINITY;
             classify(b.lineFamily);
             stats = gather(b.lineFamily);
+            if (chooseWideSplit(stats, widthBudget(stats, h, b.uniform))) {
+                classify(b.lineFamily);
+                stats = gather(b.lineFamily);
+            }
             double budget = widthBudget(stats, h, b.uniform);
             cheaperDirect = false;
             int failing = planFamilies(b, stats, budget);
@@ -222,6 +227,108 @@ final class FastPlanner {
         return Double.isFinite(d) && d > 0 ? d : Double.NaN;
     }
 
+    /** γL from which Voigt and Lorentz-dominated lines form the wide families (+∞: none), set while planning. */
+    private double wideSplitCm1 = Double.POSITIVE_INFINITY;
+    /** Lorentz nodes of a family from which a wide split is worth searching. */
+    static final int WIDE_SPLIT_MIN_NODES = 48;
+    /** Log distance between the wide-split candidates below the widest γL. */
+    static final double WIDE_SPLIT_LOG_STEP = 0.5;
+    /** Candidates searched. */
+    static final int WIDE_SPLIT_CANDIDATES = 10;
+
+    /**
+     * Chooses the wide split γ_w. The Lorentz axis of a family takes the log step its worst line needs — the one of
+     * largest γL, whose cutoff edge (at R/γL of a few) weighs most against the criterion's floor, so that step can
+     * be ten times finer than the rest of the family needs. Giving the lines with γL ≥ γ_w their own families (the
+     * same kinds, their own axes, every error still measured for each family's own worst line) lets the narrower
+     * lines take the coarser step. γ_w is the candidate γ_max·e^(−k/2), k = 1 … {@value #WIDE_SPLIT_CANDIDATES}, of
+     * fewest width slices (Lorentz nodes × Doppler nodes, each axis as {@link #planFamilies} would choose it),
+     * kept only when it saves at least a sixth of the slices.
+     *
+     * @return whether a split was set (the lines must then be classified again)
+     */
+    private boolean chooseWideSplit(FamilyStatistics[] stats, double budget) {
+        FastErrorModel.Form form = formCm1(stepCm1);
+        int[] candidates = {Family.VOIGT, Family.LORENTZ_DOMINATED, Family.VOIGT + Family.KINDS,
+            Family.LORENTZ_DOMINATED + Family.KINDS};
+        double gammaLo = Double.POSITIVE_INFINITY;
+        double gammaHi = 0;
+        double full = 0;
+        boolean worth = false;
+        for (int index : candidates) {
+            FamilyStatistics f = stats[index];
+            if (f == null || !(f.gammaMin > 0)) {
+                continue;
+            }
+            int nodes = lorentzNodes(f.gammaMin, f.gammaMax, f.alphaMin, budget, form);
+            worth |= nodes >= WIDE_SPLIT_MIN_NODES;
+            full += nodes * dopplerNodes(index, f.alphaMin, f.alphaMax, f.gammaMin, f.gammaMax, budget, form);
+            gammaLo = Math.min(gammaLo, f.gammaMin);
+            gammaHi = Math.max(gammaHi, f.gammaMax);
+        }
+        if (!worth) {
+            return false;
+        }
+        double best = full;
+        double bestSplit = Double.POSITIVE_INFINITY;
+        for (int k = 1; k <= WIDE_SPLIT_CANDIDATES; k++) {
+            double split = gammaHi * Math.exp(-WIDE_SPLIT_LOG_STEP * k);
+            if (split <= gammaLo * Math.exp(WIDE_SPLIT_LOG_STEP)) {
+                break;
+            }
+            double total = 0;
+            for (int index : candidates) {
+                FamilyStatistics f = stats[index];
+                if (f == null || !(f.gammaMin > 0)) {
+                    continue;
+                }
+                // the narrow part keeps the family's αD range (conservative: its narrowest αD stays the worst case)
+                if (f.gammaMin < split) {
+                    double hi = Math.min(f.gammaMax, split);
+                    total += lorentzNodes(f.gammaMin, hi, f.alphaMin, budget, form)
+                            * dopplerNodes(index, f.alphaMin, f.alphaMax, f.gammaMin, hi, budget, form);
+                }
+                if (f.gammaMax >= split) {
+                    double lo = Math.max(f.gammaMin, split);
+                    total += lorentzNodes(lo, f.gammaMax, f.alphaMin, budget, form)
+                            * dopplerNodes(index, f.alphaMin, f.alphaMax, lo, f.gammaMax, budget, form);
+                }
+            }
+            if (total < best) {
+                best = total;
+                bestSplit = split;
+            }
+        }
+        if (best > full * 5 / 6) {
+            return false;
+        }
+        wideSplitCm1 = bestSplit;
+        return true;
+    }
+
+    /** Lorentz nodes of a geometric axis over [γlo, γhi] as {@link #planFamilies} chooses it (half the budget). */
+    private static int lorentzNodes(double gammaLoCm1, double gammaHiCm1, double alphaMinCm1, double budget,
+                                    FastErrorModel.Form form) {
+        double step = FastErrorModel.Planner.lorentzStep(alphaMinCm1 / gammaHiCm1, budget / 2, MIN_LOG_STEP,
+                MAX_LOG_STEP, form.rescaled(gammaHiCm1));
+        return WidthAxis.geometric(gammaLoCm1, gammaHiCm1, step, 1).size();
+    }
+
+    /** Doppler nodes as {@link #planFamilies} chooses them for a kind over these width ranges (half the budget). */
+    private static int dopplerNodes(int index, double alphaLoCm1, double alphaHiCm1, double gammaLoCm1,
+                                    double gammaHiCm1, double budget, FastErrorModel.Form form) {
+        if (Family.axisKind(index) == Family.LORENTZ_DOMINATED) {
+            return 1;
+        }
+        FastErrorModel.Form perAlpha = form.rescaled(alphaHiCm1);
+        double step = Math.min(
+                FastErrorModel.Planner.dopplerStep(gammaLoCm1 / alphaHiCm1, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP,
+                        perAlpha),
+                FastErrorModel.Planner.dopplerStep(gammaHiCm1 / alphaHiCm1, budget / 2, MIN_LOG_STEP, MAX_LOG_STEP,
+                        perAlpha));
+        return WidthAxis.geometric(alphaLoCm1, alphaHiCm1, step, 2).size();
+    }
+
     /** Family of each line not summed directly, from the current splits. */
     private void classify(byte[] lineFamily) {
         for (int i = 0; i < lines.count; i++) {
@@ -236,6 +343,9 @@ final class FastPlanner {
         int kind = a == 0 ? Family.LORENTZ_ONLY
                 : (g < lowSplitCm1 ? Family.DOPPLER_DOMINATED
                 : (g >= highSplitRatio * a ? Family.LORENTZ_DOMINATED : Family.VOIGT));
+        if (g >= wideSplitCm1) {
+            kind = Family.wide(kind);
+        }
         return chi ? kind + Family.KINDS : kind;
     }
 
@@ -462,7 +572,7 @@ final class FastPlanner {
             if (f == null) {
                 continue;
             }
-            int kind = Family.kind(index);
+            int kind = Family.axisKind(index);
             WidthAxis doppler;
             double dopplerError = 0;
             if (kind == Family.LORENTZ_ONLY) {
