@@ -24,6 +24,7 @@ import org.linewright.grid.calc.CrossSectionRequest;
 import org.linewright.grid.calc.CrossSectionResult;
 import org.linewright.grid.calc.LineSelection;
 import org.linewright.grid.calc.MixtureCrossSection;
+import org.linewright.grid.calc.StoreMolecules;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.EngineFactory;
 import org.linewright.grid.output.CrossSectionFiles;
@@ -224,12 +225,11 @@ public final class SigmaCommand implements Callable<Integer> {
             scaling = scaling.withMoleculeShares(mixture);
         }
         CrossSectionRequest request = new CrossSectionRequest(temperature.kelvin(), pressure.atm(), composition, grid,
-                wings, lineShape, threshold, selection, widths);
+                wings, lineShape, threshold, selection, widths, scaling);
         CrossSectionResult result;
         try (CrossSectionEngine eng = EngineFactory.create(engine, threadCount, wings, tolerance);
              Progress progress = Progress.start("sigma", PROGRESS_STEPS, "%", 1, quiet)) {
-            CrossSectionCalculator calculator = new CrossSectionCalculator(opened, registry, threadCount)
-                    .withIntensityScaling(scaling);
+            CrossSectionCalculator calculator = new CrossSectionCalculator(opened, registry, threadCount);
             result = calculator.compute(request, eng,
                     (lines, fraction) -> progress.stepTo(Math.round(fraction * PROGRESS_STEPS)));
         }
@@ -269,30 +269,19 @@ public final class SigmaCommand implements Callable<Integer> {
      */
     private static void refuseSeveralMolecules(List<LineStore> opened, MoleculeRegistry registry,
                                                Map<Integer, Double> mixture) {
-        java.util.TreeSet<Integer> molecules = new java.util.TreeSet<>();
-        for (LineStore store : opened) {
-            for (org.linewright.ingest.store.SourceInfo source : store.sources()) {
-                for (org.linewright.ingest.source.IsotopologueLookup.Id id : source.isotopologues()) {
-                    molecules.add(id.moleculeId());
-                }
-            }
-        }
+        java.util.SortedSet<Integer> molecules = StoreMolecules.of(opened);
         if (mixture != null) {
             for (int id : molecules) {
                 if (!mixture.containsKey(id)) {
-                    throw new InputException("--vmr: no mixing ratio for "
-                            + (registry.molecule(id) == null ? Integer.toString(id) : registry.molecule(id).formula())
+                    throw new InputException("--vmr: no mixing ratio for " + StoreMolecules.name(registry, id)
                             + ", whose lines are in the stores (expected a ratio for every molecule of the stores)");
                 }
             }
             return;
         }
         if (molecules.size() > 1) {
-            List<String> names = new ArrayList<>();
-            for (int id : molecules) {
-                names.add(registry.molecule(id) == null ? Integer.toString(id) : registry.molecule(id).formula());
-            }
-            throw new InputException("the stores hold lines of several molecules " + names + ": sigma per molecule "
+            throw new InputException("the stores hold lines of several molecules "
+                    + StoreMolecules.names(registry, molecules) + ": sigma per molecule "
                     + "of a mixture needs declared mixing ratios (expected --vmr, e.g. CO=0.2,CO2=0.8, or --molecule)");
         }
     }

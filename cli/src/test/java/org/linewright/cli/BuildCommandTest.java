@@ -1,6 +1,7 @@
 package org.linewright.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
@@ -90,5 +91,30 @@ class BuildCommandTest {
         String[] lines = r.err().strip().split("\\R");
         assertEquals(1, lines.length, r.err());
         assertTrue(lines[0].contains("grid.wavenumbr: unknown key"), r.err());
+    }
+
+    @Test
+    void severalMoleculesWithoutMixingRatiosAreRefusedInOneLineWithExitCode2(@TempDir Path dir) throws Exception {
+        Path co2 = Paths.get("..", "demo", "data", "synthetic-co2.par.bz2");
+        assumeTrue(Files.isRegularFile(SYNTHETIC_CO) && Files.isRegularFile(co2), "shipped demo data not found");
+        Path plan = plan(dir, "mix.arrow");
+        Files.writeString(plan, Files.readString(plan).replace("sources = [\"",
+                "sources = [\"" + co2.toAbsolutePath().normalize().toString().replace("\\", "/") + "\", \""));
+        Run r = run("build", plan.toString(), "--threads", "1");
+        assertEquals(2, r.code(), r.err());
+        String[] lines = r.err().strip().split("\\R");
+        assertEquals(1, lines.length, r.err());
+        // the demo's invented lists are of CO (molecule 5) and CO2 (molecule 2), named in ascending molecule number
+        assertTrue(lines[0].startsWith("linewright: error: ") && lines[0].contains("several molecules [CO2, CO]")
+                && lines[0].contains("species.vmr"), lines[0]);
+        assertFalse(Files.exists(dir.resolve("mix.arrow")));
+        assertFalse(Files.exists(dir.resolve("mix.arrow.work")), "no cell was computed");
+
+        // with the ratios declared, the same plan builds
+        Files.writeString(plan, Files.readString(plan).replace("[output]", "[species]\nvmr = { CO = 3.0, CO2 = 1.0 }\n[output]"));
+        Run ok = run("build", plan.toString(), "--threads", "1");
+        assertEquals(0, ok.code(), ok.err());
+        assertEquals("CO=0.7500000000;CO2=0.2500000000",
+                CrossSectionTable.open(dir.resolve("mix.arrow")).metadata().get("mixture_shares"));
     }
 }

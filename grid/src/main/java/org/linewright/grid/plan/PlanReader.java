@@ -6,18 +6,24 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.linewright.broadening.background.BackgroundGas;
 import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.intensity.IntensityConvention;
+import org.linewright.broadening.intensity.IntensityScaling;
 import org.linewright.broadening.sources.WidthSource;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.ChiFactorKind;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.partition.TableSpec;
+import org.linewright.ingest.registry.Isotopologue;
+import org.linewright.ingest.registry.Molecule;
+import org.linewright.ingest.registry.MoleculeRegistry;
 import org.linewright.ingest.units.PhysicalConstants;
 import org.tomlj.Toml;
 import org.tomlj.TomlArray;
@@ -44,7 +50,7 @@ public final class PlanReader {
             "profile", Set.of("engine", "max_relative_error", "shape", "cutoff_cm1", "cutoff_hwhm_multiple",
                     "cutoff_per_atm_cm1", "remove_pedestal", "chi_factor",
                     "threshold_cm_per_molecule", "tolerance", "cutoff_hwhm", "threshold"),
-            "species", Set.of("molecules", "isotopologues"),
+            "species", Set.of("molecules", "isotopologues", "intensity_per", "abundance", "vmr"),
             "partition_sums", Set.of("tables", "molecule_data"),
             "widths", Set.of("order", "no_default_widths", "forbid_defaults"),
             "build", Set.of("block_points"),
@@ -136,7 +142,6 @@ public final class PlanReader {
         double[] temperatures = positiveAscending("grid.temperatures_K");
         Composition composition = composition();
         TablePlan.Profile profile = profile();
-        TablePlan.Species species = species();
         List<TableSpec> tables = new ArrayList<>();
         for (String spec : strings("partition_sums.tables", false)) {
             TableSpec t;
@@ -159,6 +164,7 @@ public final class PlanReader {
                 throw new InputException(file + ": partition_sums.molecule_data: " + moleculeData + ": no such file");
             }
         }
+        TablePlan.Species species = species(moleculeData);
         List<String> order = strings("widths.order", false);
         for (String label : order) {
             if (WidthSource.byLabel(label) == null) {
@@ -341,7 +347,93 @@ public final class PlanReader {
         return new TablePlan.Profile(engine, tolerance, shape, cutoff, hwhm, perAtm, pedestal, chi, threshold);
     }
 
-    private TablePlan.Species species() {
+    private TablePlan.Species species(Path moleculeData) throws IOException {
+        TablePlan.Species selection = selection();
+        // molecule and isotopologue names are those of the registry the build will use (built-in plus the plan's)
+        MoleculeRegistry registry = MoleculeRegistry.builtIn();
+        if (moleculeData != null) {
+            registry = registry.withUserFile(moleculeData);
+        }
+        String conventionText = string("species.intensity_per", IntensityConvention.NATURAL_ABUNDANCE.label());
+        IntensityConvention convention;
+        try {
+            convention = IntensityConvention.parse(conventionText);
+        } catch (IllegalArgumentException e) {
+            throw error("species.intensity_per", "\"" + conventionText + "\"", "natural-abundance or isotopologue");
+        }
+        boolean oneIsotopologue = selection.molecules().isEmpty() && selection.isotopologues().size() == 1;
+        if (convention == IntensityConvention.ISOTOPOLOGUE && !oneIsotopologue) {
+            throw error("species.intensity_per", "is \"isotopologue\" without one isotopologue selected",
+                    "species.isotopologues with one MOL/ISO and no species.molecules (sigma per molecule of one "
+                            + "isotopologue)");
+        }
+        Map<String, Double> abundances = new LinkedHashMap<>();
+        TomlTable a = table("species.abundance");
+        if (a != null) {
+            for (String name : a.keySet()) {
+                String key = "species.abundance.\"" + name + "\"";
+                Isotopologue iso = registry.isotopologue(name);
+                if (iso == null) {
+                    throw error(key, "unknown isotopologue", "MOL/ISO of the registry, e.g. \"H2O/4\" or \"1/4\"");
+                }
+                Object v = a.get(List.of(name));
+                if (!(v instanceof Number n) || !(n.doubleValue() > 0 && n.doubleValue() <= 1)) {
+                    throw error(key, "is " + show(v), "a fraction in (0, 1]");
+                }
+                if (convention == IntensityConvention.ISOTOPOLOGUE) {
+                    throw error(key, "is given with species.intensity_per = \"isotopologue\"",
+                            "one or the other (no abundance applies per molecule of one isotopologue)");
+                }
+                String id = iso.moleculeId() + "/" + iso.number();
+                if (abundances.containsKey(id)) {
+                    throw error(key, "names isotopologue " + id + " a second time", "each isotopologue once");
+                }
+                abundances.put(id, n.doubleValue());
+            }
+        }
+        List<TablePlan.Vmr> vmr = new ArrayList<>();
+        TomlTable x = table("species.vmr");
+        if (x != null) {
+            if (x.isEmpty()) {
+                throw error("species.vmr", "is empty", "a mixing ratio per molecule, e.g. { CO = 0.2, CO2 = 0.8 }");
+            }
+            if (!selection.all()) {
+                throw error("species.vmr", "is given with species.molecules or species.isotopologues",
+                        "a mixture of the declared molecules or a selection (one of the two)");
+            }
+            java.util.Set<Integer> seen = new java.util.HashSet<>();
+            for (String name : x.keySet()) {
+                String key = "species.vmr." + name;
+                Molecule m = registry.molecule(name);
+                if (m == null) {
+                    throw error(key, "unknown molecule", "a molecule of the registry, e.g. CO or 5");
+                }
+                Object v = x.get(List.of(name));
+                if (!(v instanceof Number n) || !(n.doubleValue() > 0) || !Double.isFinite(n.doubleValue())) {
+                    throw error(key, "is " + show(v), "a positive mixing ratio");
+                }
+                if (!seen.add(m.id())) {
+                    throw error(key, "names " + m.formula() + " a second time", "each molecule once");
+                }
+                vmr.add(new TablePlan.Vmr(m.id(), m.formula(), n.doubleValue()));
+            }
+        }
+        return new TablePlan.Species(selection.molecules(), selection.isotopologues(),
+                new IntensityScaling(convention, abundances), vmr);
+    }
+
+    private TomlTable table(String key) {
+        Object o = toml.get(key);
+        if (o == null) {
+            return null;
+        }
+        if (!(o instanceof TomlTable t)) {
+            throw error(key, "is " + show(o), "an inline table such as { KEY = VALUE, ... }");
+        }
+        return t;
+    }
+
+    private TablePlan.Species selection() {
         List<Integer> molecules = new ArrayList<>();
         TomlArray m = array("species.molecules");
         if (m != null) {

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.intensity.IntensityScaling;
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.ChiFactorKind;
 import org.linewright.broadening.wings.WingCutoff;
@@ -97,21 +98,48 @@ public record TablePlan(Path planFile, List<Path> sources, WavenumberGrid grid, 
     }
 
     /**
-     * Species selection: lines pass when their molecule is listed or their (molecule, isotopologue) pair is; with
-     * both lists empty every line passes.
+     * Species selection, intensity convention and mixture: lines pass when their molecule is listed or their
+     * (molecule, isotopologue) pair is; with both lists empty every line passes. S(T) of every line is rescaled by
+     * {@code intensityScaling} (docs/physics.md, "Per molecule of what"); with mixing ratios declared the table
+     * holds σ per molecule of the mixture, Σ x_m σ_m / Σ x_m ({@code MixtureCrossSection}).
      *
-     * @param molecules      molecule numbers
-     * @param isotopologues  {@code {molecule, isotopologue}} pairs
+     * @param molecules        molecule numbers
+     * @param isotopologues    {@code {molecule, isotopologue}} pairs
+     * @param intensityScaling intensity convention and user isotopologue abundances (null: natural, registry)
+     * @param vmr              declared volume mixing ratios, in plan order (empty: no mixture; then only lines of
+     *                         one molecule may take part)
      */
-    public record Species(List<Integer> molecules, List<int[]> isotopologues) {
+    public record Species(List<Integer> molecules, List<int[]> isotopologues, IntensityScaling intensityScaling,
+                          List<Vmr> vmr) {
         public Species {
             molecules = List.copyOf(molecules);
             isotopologues = List.copyOf(isotopologues);
+            intensityScaling = intensityScaling == null ? IntensityScaling.NATURAL : intensityScaling;
+            vmr = vmr == null ? List.of() : List.copyOf(vmr);
+        }
+
+        /** A selection with the stored intensities unchanged and no mixture. */
+        public Species(List<Integer> molecules, List<int[]> isotopologues) {
+            this(molecules, isotopologues, IntensityScaling.NATURAL, List.of());
         }
 
         /** True when no selection is set. */
         public boolean all() {
             return molecules.isEmpty() && isotopologues.isEmpty();
+        }
+
+        /** True when mixing ratios are declared. */
+        public boolean mixture() {
+            return !vmr.isEmpty();
+        }
+
+        /** The declared ratios by formula, in plan order (for {@code MixtureCrossSection.metadata}). */
+        public Map<String, Double> vmrByFormula() {
+            Map<String, Double> m = new LinkedHashMap<>();
+            for (Vmr v : vmr) {
+                m.put(v.formula(), v.ratio());
+            }
+            return m;
         }
 
         /** Text form for metadata, e.g. {@code molecules=5 isotopologues=2/1}. */
@@ -128,6 +156,16 @@ public record TablePlan(Path planFile, List<Path> sources, WavenumberGrid grid, 
             }
             return b.toString();
         }
+    }
+
+    /**
+     * One declared volume mixing ratio.
+     *
+     * @param moleculeId molecule number
+     * @param formula    its formula in the registry (for metadata and messages)
+     * @param ratio      x_m, positive and finite (only the ratios' proportions matter)
+     */
+    public record Vmr(int moleculeId, String formula, double ratio) {
     }
 
     /**
@@ -170,6 +208,17 @@ public record TablePlan(Path planFile, List<Path> sources, WavenumberGrid grid, 
         m.put("chi_factor", profile.chiFactor().name().toLowerCase(Locale.ROOT));
         m.put("threshold_cm_per_molecule", Double.toString(profile.thresholdCmPerMolecule()));
         m.put("species", species.describe());
+        // exact values (not the metadata's rounded ones): a change of any bit changes the cells' hashes
+        m.put("intensity_per", species.intensityScaling().convention().label());
+        StringBuilder abundance = new StringBuilder();
+        species.intensityScaling().userAbundances().forEach((iso, a) ->
+                abundance.append(abundance.length() == 0 ? "" : ";").append(iso).append('=').append(a));
+        m.put("abundance", abundance.length() == 0 ? "natural" : abundance.toString());
+        StringBuilder vmr = new StringBuilder();
+        for (Vmr v : species.vmr()) {
+            vmr.append(vmr.length() == 0 ? "" : ";").append(v.formula()).append('=').append(v.ratio());
+        }
+        m.put("vmr", vmr.length() == 0 ? "none" : vmr.toString());
         m.put("width_order", String.join(",", widths.order()));
         m.put("no_default_widths", Boolean.toString(widths.forbidDefaults()));
         m.put("block_points", blockPoints == ENGINE_BLOCK_POINTS ? "engine" : Integer.toString(blockPoints));

@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.linewright.broadening.background.BackgroundGas;
+import org.linewright.broadening.intensity.IntensityScaling;
 import org.linewright.broadening.sources.GasParameters;
 import org.linewright.broadening.sources.WidthResolver;
 import org.linewright.broadening.sources.WidthSource;
@@ -26,7 +27,10 @@ import org.linewright.ingest.store.LineStore;
 /**
  * The table builder's blocks computed by the cross-section calculator with the plan's engine: each block is one
  * {@link CrossSectionCalculator#compute} on the block's slice of the grid, restricted to the lines whose stored
- * centres lie within the block's reach. The engine uses the build's threads (same bits for any count).
+ * centres lie within the block's reach, with the plan's intensity convention and abundances. With mixing ratios
+ * declared ({@code species.vmr}) a block is one computation over the declared molecules' lines, each S(T) carrying
+ * its molecule's share, which gives σ per molecule of the mixture ({@code MixtureCrossSection}) with the engine's
+ * error estimate and the threshold applying to σ_mix itself. The engine uses the build's threads (same bits for any count).
  */
 public final class CalculatorBlocks implements BlockCalculator {
     private final CrossSectionCalculator calculator;
@@ -34,6 +38,8 @@ public final class CalculatorBlocks implements BlockCalculator {
     private final TablePlan plan;
     private final WingTreatment wings;
     private final LineSelection selection;
+    /** The plan's intensity convention and abundances, with the molecules' shares of a declared mixture. */
+    private final IntensityScaling scaling;
     private final WidthOptions widths;
 
     private CalculatorBlocks(TablePlan plan, List<LineStore> stores, MoleculeRegistry registry, int threads) {
@@ -42,7 +48,20 @@ public final class CalculatorBlocks implements BlockCalculator {
         this.wings = plan.profile().wings();
         this.engine = EngineFactory.create(plan.profile().engine(), threads, wings, plan.profile().tolerance());
         int[] molecules = plan.species().molecules().stream().mapToInt(Integer::intValue).toArray();
-        this.selection = new LineSelection(molecules, plan.species().isotopologues().toArray(new int[0][]));
+        TablePlan.Species species = plan.species();
+        if (species.mixture()) {
+            // σ_mix = Σ x_m σ_m / Σ x in one pass, as sigma --vmr: the declared molecules' lines, each S(T)
+            // multiplied by its molecule's share x_m / Σ x (IntensityScaling.withMoleculeShares)
+            Map<Integer, Double> ratios = new LinkedHashMap<>();
+            for (TablePlan.Vmr v : species.vmr()) {
+                ratios.put(v.moleculeId(), v.ratio());
+            }
+            this.selection = LineSelection.molecules(ratios.keySet().stream().mapToInt(Integer::intValue).toArray());
+            this.scaling = species.intensityScaling().withMoleculeShares(ratios);
+        } else {
+            this.selection = new LineSelection(molecules, species.isotopologues().toArray(new int[0][]));
+            this.scaling = species.intensityScaling();
+        }
         List<WidthSource> order = new ArrayList<>();
         for (String label : plan.widths().order()) {
             order.add(WidthSource.byLabel(label));
@@ -60,10 +79,16 @@ public final class CalculatorBlocks implements BlockCalculator {
     public BlockResult compute(WavenumberGrid blockGrid, double pressureAtm, double temperatureK, double lineMinCm1,
                                double lineMaxCm1) {
         CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm, plan.composition(), blockGrid,
-                wings, plan.profile().shape(), plan.profile().thresholdCmPerMolecule(), selection, widths);
+                wings, plan.profile().shape(), plan.profile().thresholdCmPerMolecule(), selection, widths, scaling);
+        return block(compute(request, lineMinCm1, lineMaxCm1));
+    }
+
+    private CrossSectionResult compute(CrossSectionRequest request, double lineMinCm1, double lineMaxCm1) {
         // the calculator's range is half-open [low, high); the block's reach is closed
-        CrossSectionResult r = calculator.compute(request, engine, lineMinCm1, Math.nextUp(lineMaxCm1),
-                ProgressListener.NONE);
+        return calculator.compute(request, engine, lineMinCm1, Math.nextUp(lineMaxCm1), ProgressListener.NONE);
+    }
+
+    private static BlockResult block(CrossSectionResult r) {
         Map<String, Long> counts = new LinkedHashMap<>();
         WidthSourceTally tally = r.widthSources();
         for (BackgroundGas gas : BackgroundGas.values()) {

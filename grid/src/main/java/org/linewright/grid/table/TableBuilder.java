@@ -18,6 +18,8 @@ import java.util.Set;
 import java.util.TreeMap;
 import org.linewright.broadening.background.Composition;
 import org.linewright.grid.calc.CrossSectionCalculator;
+import org.linewright.grid.calc.MixtureCrossSection;
+import org.linewright.grid.calc.StoreMolecules;
 import org.linewright.grid.manifest.BlockLayout;
 import org.linewright.grid.manifest.BlockStore;
 import org.linewright.grid.manifest.BuildManifest;
@@ -163,6 +165,7 @@ public final class TableBuilder {
         for (LineStore s : loaded.stores()) {
             linesInStores += s.totalLines();
         }
+        refuseUndeclaredMixture(plan, loaded.stores(), registry);
         Path work = workDir(plan.outputTable());
         try (BlockCalculator calculator = factory.create(plan, loaded.stores(), registry, threads)) {
             Blocks blocksPlan = blocks(plan, calculator, loaded.stores());
@@ -284,6 +287,11 @@ public final class TableBuilder {
             metadata.put("runner", runner);
             loaded.inputSha256().forEach((name, sha) -> metadata.put("input." + name + ".sha256", sha));
             parameters.forEach((k, v) -> metadata.put(k, v));
+            // the same keys as a sigma file's: convention, user abundances, and each species' share of a mixture
+            metadata.putAll(plan.species().intensityScaling().metadata());
+            if (plan.species().mixture()) {
+                metadata.putAll(MixtureCrossSection.metadata(plan.species().vmrByFormula()));
+            }
             metadata.put("pressure_bar_values", join(plan.pressuresBar()));
             metadata.put("temperature_K_values", join(plan.temperaturesK()));
             metadata.put("lines_in_stores", Long.toString(linesInStores));
@@ -397,6 +405,46 @@ public final class TableBuilder {
         boolean fromEngine = plan.blockPoints() == TablePlan.ENGINE_BLOCK_POINTS;
         int blockPoints = fromEngine ? calculator.preferredBlockPoints(grid, cutoff) : plan.blockPoints();
         return new Blocks(new BlockLayout(grid, blockPoints, reach), fromEngine, shiftBound, maxPressureAtm, slack);
+    }
+
+    /**
+     * σ in cm²/molecule over lines of several molecules has no single "molecule" (docs/physics.md, "Per molecule
+     * of what"): a plan whose selected lines span several molecules must declare their mixing ratios
+     * ({@code species.vmr}), one for each of them. Checked once the stores are open, before any block is hashed or
+     * computed.
+     *
+     * @throws InputException one line naming the molecules found and the key to write
+     */
+    static void refuseUndeclaredMixture(TablePlan plan, List<LineStore> stores, MoleculeRegistry registry) {
+        TablePlan.Species species = plan.species();
+        java.util.SortedSet<Integer> found = new java.util.TreeSet<>();
+        for (int id : StoreMolecules.of(stores)) {
+            boolean selected = species.all() || species.molecules().contains(id)
+                    || species.isotopologues().stream().anyMatch(pair -> pair[0] == id);
+            if (selected) {
+                found.add(id);
+            }
+        }
+        if (species.mixture()) {
+            Set<Integer> declared = new HashSet<>();
+            species.vmr().forEach(v -> declared.add(v.moleculeId()));
+            for (int id : found) {
+                if (!declared.contains(id)) {
+                    throw new InputException(plan.planFile() + ": species.vmr: no mixing ratio for "
+                            + StoreMolecules.name(registry, id) + ", whose lines are in the stores (expected a ratio "
+                            + "for every molecule of the stores " + StoreMolecules.names(registry, found) + ")");
+                }
+            }
+        } else if (found.size() > 1) {
+            List<String> names = StoreMolecules.names(registry, found);
+            StringBuilder example = new StringBuilder();
+            for (String n : names) {
+                example.append(example.length() == 0 ? "" : ", ").append(n).append(" = ...");
+            }
+            throw new InputException(plan.planFile() + ": the line stores hold lines of several molecules " + names
+                    + ": a table per molecule of a mixture needs declared mixing ratios (expected species.vmr = { "
+                    + example + " } in the plan, or species.molecules with one molecule)");
+        }
     }
 
     /** The plan's species selection as a line query (every line when none is set). */

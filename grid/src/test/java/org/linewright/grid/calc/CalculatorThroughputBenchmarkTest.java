@@ -70,7 +70,7 @@ class CalculatorThroughputBenchmarkTest {
         for (int pass = 0; pass < 2; pass++) {
             System.out.printf(Locale.ROOT, "  read only, 15 cross-section columns: %.3f s; calculator columns: %.3f s%n",
                     readOnly(store, LineQuery.CROSS_SECTION_COLUMNS),
-                    readOnly(store, CrossSectionCalculator.PHYSICS_COLUMNS));
+                    readOnly(store, LinePreparation.PHYSICS_COLUMNS));
         }
         wholeGrid(store, registry, request, lines, "fixed 25 cm-1 cutoff");
         // a cutoff of 20 half widths (at most 25 cm-1): the wing loss of each line is a numerical integral

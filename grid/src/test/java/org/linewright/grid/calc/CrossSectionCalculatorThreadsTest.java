@@ -16,6 +16,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.linewright.broadening.background.BackgroundGas;
 import org.linewright.broadening.background.Composition;
+import org.linewright.broadening.intensity.IntensityConvention;
+import org.linewright.broadening.intensity.IntensityScaling;
 import org.linewright.broadening.sources.WidthOptions;
 import org.linewright.broadening.sources.WidthSource;
 import org.linewright.broadening.voigt.LineShapeKind;
@@ -225,6 +227,47 @@ class CrossSectionCalculatorThreadsTest {
         for (int threads = 2; threads <= 3; threads++) {
             assertSame(one, run(new CrossSectionCalculator(List.of(synthetic), REGISTRY, threads),
                     request, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY), threads + " threads");
+        }
+    }
+
+    @Test
+    void oneCalculatorServesRequestsOfDifferentIntensityScalingsAtOnce() throws Exception {
+        // the scaling travels with the request: two threads computing with one calculator, each its own
+        // scaling, get the bits a calculator of their own gives them
+        WavenumberGrid grid = WavenumberGrid.uniform(2010.0, 2030.0, 0.1);
+        CrossSectionRequest natural = new CrossSectionRequest(296.0, 1.0, Composition.air(), grid,
+                WingTreatment.defaults(), LineShapeKind.VOIGT, 0.0, LineSelection.ALL, WidthOptions.DEFAULTS);
+        double registryAbundance = REGISTRY.naturalAbundance(5, 2);
+        CrossSectionRequest doubled = natural.withIntensityScaling(new IntensityScaling(
+                IntensityConvention.NATURAL_ABUNDANCE, Map.of("5/2", 2 * registryAbundance)));
+        Run naturalAlone = run(new CrossSectionCalculator(List.of(synthetic), REGISTRY, 1), natural,
+                Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY);
+        Run doubledAlone = run(new CrossSectionCalculator(List.of(synthetic), REGISTRY, 1), doubled,
+                Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY);
+        CrossSectionCalculator shared = new CrossSectionCalculator(List.of(synthetic), REGISTRY, 2);
+        java.util.concurrent.ExecutorService callers = java.util.concurrent.Executors.newFixedThreadPool(2);
+        try {
+            for (int round = 0; round < 3; round++) {
+                var a = callers.submit(() -> run(shared, natural, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY));
+                var b = callers.submit(() -> run(shared, doubled, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY));
+                assertSame(naturalAlone, a.get(), "natural, round " + round);
+                assertSame(doubledAlone, b.get(), "doubled 5/2, round " + round);
+            }
+        } finally {
+            callers.shutdownNow();
+        }
+        // S is linear in the abundance (Simeckova et al. 2006, JQSRT 98, 130, eq. 20): doubling one isotopologue's
+        // abundance adds its natural sigma once more
+        Run iso2 = run(new CrossSectionCalculator(List.of(synthetic), REGISTRY, 1),
+                natural.withSelection(LineSelection.isotopologue(5, 2)), Double.NEGATIVE_INFINITY,
+                Double.POSITIVE_INFINITY);
+        double[] n = naturalAlone.result.sigmaCm2PerMolecule();
+        double[] d = doubledAlone.result.sigmaCm2PerMolecule();
+        double[] i2 = iso2.result.sigmaCm2PerMolecule();
+        double max = Arrays.stream(d).max().orElseThrow();
+        assertTrue(Arrays.stream(i2).max().orElseThrow() > 1e-3 * max, "isotopologue 2 contributes");
+        for (int i = 0; i < n.length; i++) {
+            assertEquals(n[i] + i2[i], d[i], 1e-12 * max, "point " + i);
         }
     }
 

@@ -99,6 +99,23 @@ class PlanReaderTest {
         {"width source", "[widths]\norder = [\"guess\"]", "widths.order: unknown width source"},
         {"block points", "[build]\nblock_points = 0", "build.block_points: is 0"},
         {"isotopologue", "[species]\nisotopologues = [\"5-1\"]", "species.isotopologues: \"5-1\""},
+        {"intensity convention", "[species]\nintensity_per = \"molecule\"", "species.intensity_per: \"molecule\""},
+        {"isotopologue convention over a molecule", "[species]\nmolecules = [5]\nintensity_per = \"isotopologue\"",
+            "species.intensity_per: is \"isotopologue\" without one isotopologue selected"},
+        {"abundance not a table", "[species]\nabundance = \"CO/2=0.02\"", "species.abundance: is the string"},
+        {"unknown isotopologue", "[species]\nabundance = { \"CO/99\" = 0.02 }", "species.abundance.\"CO/99\": unknown isotopologue"},
+        {"abundance above 1", "[species]\nabundance = { \"CO/2\" = 1.5 }", "species.abundance.\"CO/2\": is 1.5"},
+        {"abundance twice", "[species]\nabundance = { \"CO/2\" = 0.02, \"5/2\" = 0.03 }", "names isotopologue 5/2 a second time"},
+        {"abundance with the isotopologue convention",
+            "[species]\nisotopologues = [\"5/2\"]\nintensity_per = \"isotopologue\"\nabundance = { \"CO/2\" = 0.02 }",
+            "species.abundance.\"CO/2\": is given with species.intensity_per"},
+        {"unknown molecule", "[species]\nvmr = { Kr = 0.5 }", "species.vmr.Kr: unknown molecule"},
+        {"zero mixing ratio", "[species]\nvmr = { CO = 0.0 }", "species.vmr.CO: is 0.0"},
+        {"mixing ratio text", "[species]\nvmr = { CO = \"much\" }", "species.vmr.CO: is the string \"much\""},
+        {"empty mixture", "[species]\nvmr = {}", "species.vmr: is empty"},
+        {"molecule twice", "[species]\nvmr = { CO = 0.5, 5 = 0.5 }", "species.vmr.5: names CO a second time"},
+        {"mixture with a selection", "[species]\nmolecules = [5]\nvmr = { CO = 1.0 }",
+            "species.vmr: is given with species.molecules"},
     };
 
     static java.util.stream.Stream<org.junit.jupiter.params.provider.Arguments> badPlans() {
@@ -152,6 +169,29 @@ class PlanReaderTest {
         assertTrue(plan.partitionTables().get(0).file().isAbsolute());
         assertTrue(plan.widths().forbidDefaults());
         assertEquals(500, plan.blockPoints());
+    }
+
+    @Test
+    void intensityConventionAbundancesAndMixingRatiosAreRead() throws IOException {
+        TablePlan plan = read(GOOD + """
+                [species]
+                abundance = { "CO/2" = 0.02, "2/1" = 0.9 }
+                vmr = { CO = 1e-3, co2 = 4e-4 }
+                """);
+        // names as the registry spells them: CO = molecule 5, CO2 = molecule 2 (HITRAN numbering, common practice)
+        assertEquals(java.util.Map.of("5/2", 0.02, "2/1", 0.9), plan.species().intensityScaling().userAbundances());
+        assertEquals(java.util.List.of(new TablePlan.Vmr(5, "CO", 1e-3), new TablePlan.Vmr(2, "CO2", 4e-4)),
+                plan.species().vmr());
+        assertEquals("5/2=0.02;2/1=0.9", plan.describe().get("abundance"));
+        assertEquals("CO=0.001;CO2=4.0E-4", plan.describe().get("vmr"));
+        assertEquals("natural-abundance", plan.describe().get("intensity_per"));
+        TablePlan iso = read(GOOD + """
+                [species]
+                isotopologues = ["5/2"]
+                intensity_per = "isotopologue"
+                """);
+        assertEquals("isotopologue", iso.describe().get("intensity_per"));
+        assertEquals("none", iso.describe().get("vmr"));
     }
 
     /** Replaces or adds the sections of {@code patch} in {@code base} (a key of the patch replaces the same key). */
