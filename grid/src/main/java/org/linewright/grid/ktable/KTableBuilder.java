@@ -220,7 +220,7 @@ public final class KTableBuilder {
                 m.put("molar_mass_source", request.massSource() == null ? "given" : request.massSource());
             }
             if (transmissionEquivalent != null) {
-                m.put("transmission_column_cm2", Double.toString(request.transmissionColumnCm2()));
+                m.put("transmission_column_per_cm2", Double.toString(request.transmissionColumnCm2()));
             }
             for (int i = 0; i < warnings.size(); i++) {
                 m.put("ktable_warning." + (i + 1), warnings.get(i));
