@@ -79,6 +79,17 @@ public final class GQuadrature {
         }
     }
 
+    /**
+     * The quadrature of a k-table read back: its nodes and weights as stored (the kind is taken to be
+     * Gauss–Legendre for the record; only the nodes, weights and interval edges are used).
+     */
+    public static GQuadrature fromNodes(double[] nodes, double[] weights) {
+        if (nodes.length != weights.length || nodes.length < 1) {
+            throw new InputException("g quadrature: " + nodes.length + " nodes and " + weights.length + " weights");
+        }
+        return new GQuadrature(QuadratureKind.GAUSS_LEGENDRE, nodes.clone(), weights.clone());
+    }
+
     public QuadratureKind kind() {
         return kind;
     }
