@@ -116,4 +116,40 @@ class KTableCommandTest {
             assertEquals(km[i] * PhysicalConstants.AVOGADRO_PER_MOL / mass, kg[i], 1e-14 * kg[i]);
         }
     }
+
+    @Test
+    void aPlanWithAKTableSectionBuildsTheKTableAfterTheTable(@TempDir Path planDir) throws Exception {
+        Path plan = planDir.resolve("plan.toml");
+        Files.writeString(plan, """
+                # SYNTHETIC lines (the demo's invented CO list)
+                [lines]
+                sources = ["%s"]
+                [grid]
+                wavenumber = { from = 2100.0, to = 2110.0, step = 0.01 }
+                pressures_bar = [1.0]
+                temperatures_K = [500.0]
+                [background]
+                H2 = 0.85
+                He = 0.15
+                [output]
+                table = "t.h5"
+                [ktable]
+                out = "k.arrow"
+                bin_width_cm1 = 1.0
+                g_points = 8
+                band_mean = true
+                """.formatted(SYNTHETIC_CO.toAbsolutePath().normalize().toString().replace("\\", "/")));
+        Run r = run("build", plan.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("ktable " + planDir.resolve("k.arrow") + " (10 bins x 8 g points"), r.out());
+        Run cmd = run("ktable", planDir.resolve("t.h5").toString(), "--bin-width", "1", "--g-points", "8",
+                "--band-mean", "--out", planDir.resolve("k2.arrow").toString(), "--quiet");
+        assertEquals(0, cmd.code(), cmd.err());
+        assertTrue(Arrays.equals(KTable.open(planDir.resolve("k2.arrow")).content().k(),
+                KTable.open(planDir.resolve("k.arrow")).content().k()));
+        Files.writeString(plan, Files.readString(plan).replace("g_points = 8", "g_points = 8\nbin_edges_file = \"e.txt\""));
+        Run bad = run("build", plan.toString());
+        assertEquals(2, bad.code(), bad.out());
+        assertTrue(bad.err().contains("ktable: 2 of resolving_power, bin_width_cm1, bin_edges_file given"), bad.err());
+    }
 }
