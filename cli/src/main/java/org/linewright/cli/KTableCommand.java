@@ -141,6 +141,7 @@ public final class KTableCommand implements Callable<Integer> {
                     (System.nanoTime() - start) / 1e9);
             stdout.printf(Locale.ROOT, "k in %s%s%n", c.unit(), request.massGPerMol() > 0
                     ? String.format(Locale.ROOT, " (molar mass %.6g g/mol)", request.massGPerMol()) : "");
+            stdout.println("note: " + KTableBuilder.ACCURACY_NOTE);
             stdout.printf(Locale.ROOT, "ktable %s (sha256 %s)%n", report.written().file(), report.written().fileSha256());
         }
         return ExitCodes.OK;

@@ -82,11 +82,13 @@ class KTableCommandTest {
             assertTrue(r.out().contains("24 bins x 8 g points (split-gauss-legendre) at 2 pressures x 2 temperatures"),
                     r.out());
             assertTrue(r.out().contains("ktable " + out), r.out());
+            assertTrue(r.out().contains("note: homogeneous-path band transmittance"), r.out());
             KTable k = KTable.open(out);
             assertTrue(Arrays.equals(api.k(), k.content().k()), name);
             assertTrue(Arrays.equals(api.bandMean(), k.content().bandMean()), name);
             assertTrue(Arrays.equals(api.transmissionEquivalent(), k.content().transmissionEquivalent()), name);
             assertEquals("split_gauss_legendre", k.metadata().get("g_quadrature_kind"));
+            assertEquals(KTableBuilder.ACCURACY_NOTE, k.metadata().get("transmittance_accuracy_note"));
             // the σ table's provenance travels with the k-table
             CrossSectionTable sigma = CrossSectionTable.open(table);
             assertEquals(sigma.metadata().get("sigma_sha256"), k.metadata().get("sigma_sha256"));
