@@ -4,9 +4,12 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.linewright.cli.progress.Progress;
 import org.linewright.cli.table.TablePlot;
+import org.linewright.grid.ktable.KTableBuilder;
+import org.linewright.grid.ktable.KTablePlanSection;
 import org.linewright.grid.plan.PlanReader;
 import org.linewright.grid.plan.TablePlan;
 import org.linewright.grid.table.BuildListener;
@@ -83,6 +86,7 @@ public final class BuildCommand implements Callable<Integer> {
         boolean quiet = root.globalOptions().quiet();
         PrintWriter out = spec.commandLine().getOut();
         TablePlan plan = PlanReader.read(planFile);
+        Optional<KTablePlanSection.Planned> ktable = KTablePlanSection.read(planFile); // checked before the build
         BuildReport report;
         if (sparkMaster != null && !dryRun) {
             report = SparkRunner.build(spec, plan, sparkMaster, quiet);
@@ -123,6 +127,8 @@ public final class BuildCommand implements Callable<Integer> {
             }
             return ExitCodes.OK;
         }
+        KTableBuilder.Report ktableReport = ktable.isEmpty() ? null
+                : KTableBuilder.build(report.table(), ktable.get().request(), threadCount, ktable.get().out());
         if (plot != null) {
             TablePlot.write(CrossSectionTable.open(report.table()), plot, plan.outputTable().getFileName().toString(),
                     plotWavelength);
@@ -149,6 +155,14 @@ public final class BuildCommand implements Callable<Integer> {
             out.printf(Locale.ROOT, "table %s (sha256 %s)%n", report.table(), report.written().fileSha256());
             if (plot != null) {
                 out.printf(Locale.ROOT, "plot %s%n", plot);
+            }
+            if (ktableReport != null) {
+                for (String w : ktableReport.warnings()) {
+                    out.println("warning: " + w);
+                }
+                out.printf(Locale.ROOT, "ktable %s (%d bins x %d g points; sha256 %s)%n", ktableReport.written().file(),
+                        ktableReport.content().bins(), ktableReport.content().gPoints(),
+                        ktableReport.written().fileSha256());
             }
         }
         return ExitCodes.OK;

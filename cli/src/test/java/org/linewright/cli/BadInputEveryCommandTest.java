@@ -42,6 +42,7 @@ class BadInputEveryCommandTest {
 
     private static Path store;
     private static Path plan;
+    private static Path sigmaTable;
     private static Path garbage;
     private static Path missing;
     private static Path underAFile;
@@ -71,6 +72,9 @@ class BadInputEveryCommandTest {
                 [output]
                 table = "t.arrow"
                 """.formatted(SYNTHETIC_CO.toAbsolutePath().normalize().toString().replace("\\", "/")));
+        Run build = run("build", plan.toString(), "--quiet");
+        assertEquals(ExitCodes.OK, build.code(), build.err());
+        sigmaTable = tmp.resolve("t.arrow");
     }
 
     private record Run(int code, String out, String err) {
@@ -109,6 +113,12 @@ class BadInputEveryCommandTest {
                 m.put("--out", List.of(fresh("sigma") + ".csv"));
             }
             case "build" -> m.put("", List.of(plan.toString()));
+            case "ktable" -> {
+                m.put("", List.of(sigmaTable.toString()));
+                m.put("--bin-width", List.of("0.5"));
+                m.put("--g-points", List.of("4"));
+                m.put("--out", List.of(fresh("ktable") + ".h5"));
+            }
             case "verify" -> m.put("", List.of(store.toString()));
             case "compare" -> m.put("", List.of(store.toString(), store.toString()));
             case "demo" -> {
@@ -243,6 +253,36 @@ class BadInputEveryCommandTest {
                 v.add(new String[] {garbage.toString()});
             }
             case "--demo-dir" -> v.add(new String[] {missing.toString()});
+            case "--bin-width" -> {
+                v.add(new String[] {"-1"});
+                v.add(new String[] {"0"});
+                v.add(new String[] {"wide"});
+                v.add(new String[] {"1e-6"}); // bins narrower than the table's step hold no sigma point
+            }
+            case "--bin-edges" -> {
+                v.add(new String[] {missing.toString()});
+                v.add(new String[] {garbage.toString()});
+            }
+            case "--g-points" -> {
+                v.add(new String[] {"0"});
+                v.add(new String[] {"-3"});
+                v.add(new String[] {"1000"});
+                v.add(new String[] {"many"});
+            }
+            case "--quadrature" -> {
+                v.add(new String[] {"simpson"});
+                v.add(new String[] {text});
+            }
+            case "--band-mean" -> v.add(new String[] {"=maybe"});
+            case "--transmission-column-per-cm2" -> {
+                v.add(new String[] {"-1"});
+                v.add(new String[] {"NaN"});
+                v.add(new String[] {"thick"});
+            }
+            case "--per-unit-mass" -> {
+                v.add(new String[] {"XYZ"});
+                v.add(new String[] {text});
+            }
             default -> {
                 return null;
             }
@@ -257,6 +297,8 @@ class BadInputEveryCommandTest {
             case "lines" -> List.of(new String[] {missing.toString()}, new String[] {garbage.toString()});
             case "sigma" -> List.of(new String[] {missing.toString()}, new String[] {garbage.toString()});
             case "build" -> List.of(new String[] {missing.toString()}, new String[] {garbage.toString()});
+            case "ktable" -> List.of(new String[] {missing.toString()}, new String[] {garbage.toString()},
+                    new String[] {plan.toString()});
             case "verify" -> List.of(new String[] {missing.toString()}, new String[] {garbage.toString()});
             case "compare" -> List.of(new String[] {missing.toString(), store.toString()},
                     new String[] {store.toString(), garbage.toString()});
@@ -291,8 +333,9 @@ class BadInputEveryCommandTest {
                     for (String alias : o.names()) {
                         args.remove(alias);
                     }
-                    if (name.equals("--resolving-power")) {
-                        args.remove("--step"); // the two are exclusive
+                    if (name.equals("--resolving-power") || name.equals("--bin-edges")) {
+                        args.remove("--step"); // the spacing options are exclusive
+                        args.remove("--bin-width");
                     }
                     List<String> argv = flatten(command, args);
                     if (value[0].startsWith("=")) {
@@ -315,7 +358,7 @@ class BadInputEveryCommandTest {
         assertTrue(uncovered.isEmpty(), "options without a bad-value case: " + uncovered);
         assertTrue(failures.isEmpty(), failures.size() + " of " + invocations + " bad invocations misbehaved:\n"
                 + String.join("\n", failures));
-        // 8 commands with 67 options and positionals between them (the count guards against a silently empty loop)
+        // 9 commands with 75 options and positionals between them (the count guards against a silently empty loop)
         assertTrue(invocations >= 150, "bad invocations tried: " + invocations);
         System.out.println("bad-input matrix: " + invocations + " invocations");
     }

@@ -54,7 +54,10 @@ public final class PlanReader {
             "partition_sums", Set.of("tables", "molecule_data"),
             "widths", Set.of("order", "no_default_widths", "forbid_defaults"),
             "build", Set.of("block_points"),
-            "output", Set.of("table", "precision"));
+            "output", Set.of("table", "precision"),
+            // read by org.linewright.grid.ktable.KTablePlanSection after the table is built
+            "ktable", Set.of("out", "resolving_power", "bin_width_cm1", "bin_edges_file", "g_points",
+                    "quadrature_kind", "band_mean", "transmission_column_per_cm2", "per_unit_mass_molecule"));
     /**
      * Keys renamed to the naming convention (DEVELOPERS.md, "Naming"): the old spelling is still read, for one
      * version, with a one-line note on standard error naming the new one.

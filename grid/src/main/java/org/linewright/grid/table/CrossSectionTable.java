@@ -26,15 +26,11 @@ import org.linewright.ingest.InputException;
  * A cross-section table read into memory (either format): the wavenumber, pressure and temperature axes, σ at
  * every (p, T) and the provenance metadata, with σ(ν) at any (p, T) inside the axes by interpolation.
  *
- * <p>Interpolation is bilinear in (ln p, T): with p_i ≤ p ≤ p_{i+1} and T_j ≤ T ≤ T_{j+1},
- * u = (ln p − ln p_i)/(ln p_{i+1} − ln p_i), v = (T − T_j)/(T_{j+1} − T_j) and
- * σ = (1−u)(1−v)σ_{i,j} + u(1−v)σ_{i+1,j} + (1−u)v σ_{i,j+1} + uv σ_{i+1,j+1}, point by point in ν. It is
- * exact for σ linear in ln p and T (and in their product); elsewhere its error is the tabulation's (choose the
- * axes dense enough). An axis of a single value accepts only that value (relative 10⁻⁹).
+ * <p>Interpolation is bilinear in (ln p, T), point by point in ν ({@link PressureTemperatureAxes}, shared with the
+ * k-table reader): exact for σ linear in ln p and T (and in their product); elsewhere its error is the
+ * tabulation's (choose the axes dense enough). An axis of a single value accepts only that value (relative 10⁻⁹).
  */
 public final class CrossSectionTable {
-    private static final double SINGLE_POINT_TOLERANCE = 1e-9;
-
     private final Path file;
     private final double[] wavenumberCm1;
     private final double[] pressureBar;
@@ -255,53 +251,16 @@ public final class CrossSectionTable {
      * @throws InputException when p or T lies outside the table's axes
      */
     public double[] sigmaAt(double pressureBarValue, double temperatureKValue) {
-        int i = cell(pressureBar, pressureBarValue, "pressure", "bar");
-        int j = cell(temperatureK, temperatureKValue, "temperature", "K");
-        double u = pressureBar.length == 1 ? 0.0
-                : (Math.log(pressureBarValue) - Math.log(pressureBar[i]))
-                / (Math.log(pressureBar[i + 1]) - Math.log(pressureBar[i]));
-        double v = temperatureK.length == 1 ? 0.0
-                : (temperatureKValue - temperatureK[j]) / (temperatureK[j + 1] - temperatureK[j]);
-        int i1 = Math.min(i + 1, pressureBar.length - 1);
-        int j1 = Math.min(j + 1, temperatureK.length - 1);
-        double[] a = sigma[i][j];
-        double[] b = sigma[i1][j];
-        double[] c = sigma[i][j1];
-        double[] d = sigma[i1][j1];
-        double w00 = (1 - u) * (1 - v);
-        double w10 = u * (1 - v);
-        double w01 = (1 - u) * v;
-        double w11 = u * v;
+        PressureTemperatureAxes.Corners c = new PressureTemperatureAxes(file, pressureBar, temperatureK)
+                .corners(pressureBarValue, temperatureKValue);
+        double[] a = sigma[c.p0()][c.t0()];
+        double[] b = sigma[c.p1()][c.t0()];
+        double[] d01 = sigma[c.p0()][c.t1()];
+        double[] d11 = sigma[c.p1()][c.t1()];
         double[] out = new double[wavenumberCm1.length];
         for (int k = 0; k < out.length; k++) {
-            out[k] = w00 * a[k] + w10 * b[k] + w01 * c[k] + w11 * d[k];
+            out[k] = c.combine(a[k], b[k], d01[k], d11[k]);
         }
         return out;
-    }
-
-    /** Index of the lower corner of the axis cell holding {@code x}. */
-    private int cell(double[] axis, double x, String what, String unit) {
-        if (axis.length == 1) {
-            if (!(Math.abs(x - axis[0]) <= SINGLE_POINT_TOLERANCE * axis[0])) {
-                throw new InputException(file + ": " + what + " " + x + " " + unit + " is not in the table (its only "
-                        + what + " is " + axis[0] + " " + unit + ")");
-            }
-            return 0;
-        }
-        if (!(x >= axis[0] && x <= axis[axis.length - 1])) {
-            throw new InputException(file + ": " + what + " " + x + " " + unit + " is outside the table's axis ["
-                    + axis[0] + ", " + axis[axis.length - 1] + "] " + unit + " (interpolation only, no extrapolation)");
-        }
-        int lo = 0;
-        int hi = axis.length - 1;
-        while (hi - lo > 1) {
-            int mid = (lo + hi) >>> 1;
-            if (axis[mid] <= x) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return lo;
     }
 }
