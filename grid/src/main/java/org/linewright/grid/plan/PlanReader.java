@@ -51,7 +51,7 @@ public final class PlanReader {
                     "cutoff_per_atm_cm1", "remove_pedestal", "chi_factor",
                     "threshold_cm_per_molecule", "tolerance", "cutoff_hwhm", "threshold"),
             "species", Set.of("molecules", "isotopologues", "intensity_per", "abundance", "vmr"),
-            "partition_sums", Set.of("tables", "molecule_data"),
+            "partition_sums", Set.of("tables", "molecule_data", "catalog_partition"),
             "widths", Set.of("order", "no_default_widths", "forbid_defaults"),
             "build", Set.of("block_points"),
             "output", Set.of("table", "precision"),
@@ -167,6 +167,15 @@ public final class PlanReader {
                 throw new InputException(file + ": partition_sums.molecule_data: " + moleculeData + ": no such file");
             }
         }
+        Path catalogPartition = null;
+        String cp = string("partition_sums.catalog_partition", null);
+        if (cp != null) {
+            catalogPartition = resolve(cp);
+            if (!Files.isRegularFile(catalogPartition)) {
+                throw new InputException(file + ": partition_sums.catalog_partition: " + catalogPartition
+                        + ": no such file");
+            }
+        }
         TablePlan.Species species = species(moleculeData);
         List<String> order = strings("widths.order", false);
         for (String label : order) {
@@ -204,7 +213,7 @@ public final class PlanReader {
             default -> throw error("output.precision", "\"" + precisionText + "\"", "float32 or float64");
         }
         return new TablePlan(file, sources, grid, pressures, temperatures, composition, profile, species, tables,
-                moleculeData, new TablePlan.Widths(order, forbidDefaults), (int) block, output, precision);
+                moleculeData, catalogPartition, new TablePlan.Widths(order, forbidDefaults), (int) block, output, precision);
     }
 
     private WavenumberGrid grid() {

@@ -30,6 +30,7 @@ import org.linewright.ingest.units.PhysicalConstants;
  * @param species             molecule / isotopologue selection (empty: every line)
  * @param partitionTables     user partition-sum tables, {@code MOL/ISO=FILE} (files absolute)
  * @param moleculeDataOrNull  user isotopologue metadata file, or null
+ * @param catalogPartitionOrNull partition functions of an 80-column catalog (its isotopologues' Q(T)), or null
  * @param widths              width source options
  * @param blockPoints         wavenumber points per block of the build (the unit of incremental rebuilds), or
  *                            {@link #ENGINE_BLOCK_POINTS} to let the build choose for the engine
@@ -38,7 +39,7 @@ import org.linewright.ingest.units.PhysicalConstants;
  */
 public record TablePlan(Path planFile, List<Path> sources, WavenumberGrid grid, double[] pressuresBar,
                         double[] temperaturesK, Composition composition, Profile profile, Species species,
-                        List<TableSpec> partitionTables, Path moleculeDataOrNull, Widths widths, int blockPoints,
+                        List<TableSpec> partitionTables, Path moleculeDataOrNull, Path catalogPartitionOrNull, Widths widths, int blockPoints,
                         Path outputTable, Precision precision) {
 
     /** Pascal per bar (definition of the bar). */

@@ -84,13 +84,20 @@ public final class TableBuilder {
         return table.resolveSibling(table.getFileName() + ".work");
     }
 
-    /** The registry a plan asks for: built-in, plus its molecule data and partition-sum tables. */
+    /**
+     * The registry a plan asks for: built-in, plus its molecule data, partition-sum tables and a catalog's
+     * partition functions (user tables and a data set's own {@code .pf} win over the catalog's, as in {@code sigma}).
+     */
     public static MoleculeRegistry registry(TablePlan plan) throws IOException {
         MoleculeRegistry base = MoleculeRegistry.builtIn();
         if (plan.moleculeDataOrNull() != null) {
             base = base.withUserFile(plan.moleculeDataOrNull());
         }
-        return PartitionSums.of(base).withTables(plan.partitionTables()).attachedRegistry();
+        PartitionSums sums = PartitionSums.of(base).withTables(plan.partitionTables());
+        if (plan.catalogPartitionOrNull() != null) {
+            sums = sums.withCatalogFile(plan.catalogPartitionOrNull());
+        }
+        return sums.attachedRegistry();
     }
 
     /**
@@ -475,6 +482,9 @@ public final class TableBuilder {
         }
         if (plan.moleculeDataOrNull() != null) {
             m.put("molecule_data.sha256", SourceMetadata.sha256(plan.moleculeDataOrNull()));
+        }
+        if (plan.catalogPartitionOrNull() != null) {
+            m.put("catalog_partition.sha256", SourceMetadata.sha256(plan.catalogPartitionOrNull()));
         }
         return m;
     }
