@@ -1,5 +1,11 @@
 package org.linewright.grid.engine.fast;
 
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutorService;
+import org.linewright.grid.engine.ParallelTasks;
+
 import org.linewright.broadening.voigt.LineShapeKind;
 import org.linewright.broadening.wings.WingKernel;
 
@@ -17,7 +23,7 @@ import org.linewright.broadening.wings.WingKernel;
  * ({@link WingKernel#addLine} at the point). K is evaluated with the line's own widths; the slices evaluate it at
  * their node widths and interpolate, so what remains is the width interpolation's error at detunings near R
  * (counted in the plan's edge term). Cost: about 13 profile values and up to 12 output points per line,
- * independent of R and of the grid.
+ * independent of R and of the grid, computed on the engine's threads.
  */
 final class EdgeCorrection {
     private static final int P = FastPlanner.P;
@@ -27,12 +33,19 @@ final class EdgeCorrection {
     private EdgeCorrection() {
     }
 
+    /** Lines per task: a fixed split, so the replay order does not depend on the thread count. */
+    static final int CHUNK_LINES = 8192;
+
     /**
-     * Applies the correction of every transformed line to the raw output values.
+     * Applies the correction of every transformed line to the raw output values. The corrections are computed in
+     * parallel over fixed chunks of lines, each chunk recording its additions (output index, value) in line order,
+     * and then replayed chunk after chunk: every output value receives the same additions in the same order as a
+     * single pass over the lines would make, so σ is bitwise the same for any thread count.
      *
      * @param raw σ at the output points as the transform gave it (before clipping)
      */
-    static void apply(FastPlan plan, LineBuffer lines, LineDistribution dist, double[] raw) {
+    static void apply(FastPlan plan, LineBuffer lines, LineDistribution dist, double[] raw, ExecutorService pool,
+                      int threads) {
         double cutoff = plan.edgeCutoffCm1;
         if (Double.isNaN(cutoff)) {
             return;
@@ -52,16 +65,36 @@ final class EdgeCorrection {
         for (int r = 0; r < span; r++) {
             offsets[r] = (lo + r) * h;
         }
+        long finalLast = last;
+        int chunks = (lines.count + CHUNK_LINES - 1) / CHUNK_LINES;
+        // a few chunks per thread at a time bound the recorded additions (≤ 24 per line)
+        int wave = Math.max(1, 2 * threads);
+        for (int first = 0; first < chunks; first += wave) {
+            List<Callable<Additions>> tasks = new ArrayList<>();
+            for (int c = first; c < Math.min(chunks, first + wave); c++) {
+                int from = c * CHUNK_LINES;
+                int to = Math.min(lines.count, from + CHUNK_LINES);
+                tasks.add(() -> corrections(plan, lines, dist, from, to, offsets, lo, finalLast, raw.length));
+            }
+            for (Additions a : ParallelTasks.invokeAll(pool, tasks, "correcting cutoff edges")) {
+                a.replay(raw);
+            }
+        }
+    }
+
+    /** The corrections of lines [from, to), in line order. */
+    private static Additions corrections(FastPlan plan, LineBuffer lines, LineDistribution dist, int from, int to,
+                                         double[] offsets, int kernelLo, long last, int n) {
+        int span = offsets.length;
         double[] kernel = new double[span];
         double[] lambda = new double[P];
-        double[] points = plan.pointsCm1;
-        int n = points.length;
-        for (int i = 0; i < lines.count; i++) {
+        Additions out = new Additions(24 * (to - from));
+        Window window = new Window();
+        for (int i = from; i < to; i++) {
             if (dist.key[i] < 0) {
                 continue;
             }
             WingKernel wings = plan.families[plan.lineFamily[i]].kernel;
-            double c = lines.centerCm1[i];
             double a = lines.dopplerCm1[i];
             double g = lines.lorentzCm1[i];
             java.util.Arrays.fill(kernel, 0.0);
@@ -73,18 +106,22 @@ final class EdgeCorrection {
             long rightLo = f + last + 1;
             long rightHi = f + last + P - 1;
             if (leftHi >= rightLo - 1) {
-                correct(plan, lines, dist, i, leftLo, rightHi, kernel, lo, last, wings, lambda, raw, n);
+                correct(plan, lines, dist, i, leftLo, rightHi, kernel, kernelLo, last, wings, lambda, n, window, out);
             } else {
-                correct(plan, lines, dist, i, leftLo, leftHi, kernel, lo, last, wings, lambda, raw, n);
-                correct(plan, lines, dist, i, rightLo, rightHi, kernel, lo, last, wings, lambda, raw, n);
+                correct(plan, lines, dist, i, leftLo, leftHi, kernel, kernelLo, last, wings, lambda, n, window, out);
+                correct(plan, lines, dist, i, rightLo, rightHi, kernel, kernelLo, last, wings, lambda, n, window, out);
             }
         }
+        return out;
     }
 
-    /** Replaces line i's transform value by the exact value at the output points fed by internal points [qLo, qHi]. */
+    /**
+     * Records the replacement of line i's transform value by the exact value at the output points fed by internal
+     * points [qLo, qHi]: first −(transform value) at each point, then the exact line's addition at each point.
+     */
     private static void correct(FastPlan plan, LineBuffer lines, LineDistribution dist, int i, long qLo, long qHi,
                                 double[] kernel, int kernelLo, long last, WingKernel wings, double[] lambda,
-                                double[] raw, int n) {
+                                int n, Window window, Additions out) {
         double[] points = plan.pointsCm1;
         int from;
         int to;
@@ -96,7 +133,7 @@ final class EdgeCorrection {
                 return;
             }
             for (int k = from; k < to; k++) {
-                raw[k] -= transformValue(dist, i, (long) k * m, kernel, kernelLo, last);
+                out.add(k, -transformValue(dist, i, (long) k * m, kernel, kernelLo, last));
             }
         } else {
             double origin = plan.originCm1;
@@ -115,14 +152,65 @@ final class EdgeCorrection {
                 for (int t = 0; t < P; t++) {
                     value += lambda[t] * transformValue(dist, i, k0 - FastPlanner.SHIFT + t, kernel, kernelLo, last);
                 }
-                raw[k] -= value;
+                out.add(k, -value);
             }
             if (from >= to) {
                 return;
             }
         }
-        wings.addLine(LineShapeKind.VOIGT, points, from, to, lines.centerCm1[i], lines.dopplerCm1[i],
-                lines.lorentzCm1[i], lines.strength[i], raw);
+        // the exact line on the window's points alone (the same wavenumbers, so the same values), then recorded
+        double[] exact = window.exact(points, from, to);
+        wings.addLine(LineShapeKind.VOIGT, window.points, 0, to - from, lines.centerCm1[i], lines.dopplerCm1[i],
+                lines.lorentzCm1[i], lines.strength[i], exact);
+        for (int k = from; k < to; k++) {
+            out.add(k, exact[k - from]);
+        }
+    }
+
+    /** A few consecutive output wavenumbers and a zeroed accumulator for them, reused line after line. */
+    private static final class Window {
+        double[] points = new double[16];
+        private double[] exact = new double[16];
+
+        double[] exact(double[] all, int from, int to) {
+            int len = to - from;
+            if (len > points.length) {
+                points = new double[len];
+                exact = new double[len];
+            }
+            System.arraycopy(all, from, points, 0, len);
+            java.util.Arrays.fill(exact, 0, len, 0.0);
+            return exact;
+        }
+    }
+
+    /** Additions to output values in the order they are to be made. */
+    private static final class Additions {
+        private int[] index;
+        private double[] value;
+        private int count;
+
+        Additions(int capacity) {
+            index = new int[Math.max(16, capacity)];
+            value = new double[index.length];
+        }
+
+        void add(int k, double v) {
+            if (count == index.length) {
+                index = java.util.Arrays.copyOf(index, 2 * count);
+                value = java.util.Arrays.copyOf(value, 2 * count);
+            }
+            index[count] = k;
+            value[count] = v;
+            count++;
+        }
+
+        /** raw[k] −= t is raw[k] + (−t) exactly; an added 0 changes no value that matters (clipped at 0 later). */
+        void replay(double[] raw) {
+            for (int j = 0; j < count; j++) {
+                raw[index[j]] += value[j];
+            }
+        }
     }
 
     /** Σ_j w_j·K(|q − f − j|) of line i at internal point q, K zero beyond the last offset inside the cutoff. */

@@ -242,7 +242,7 @@ public final class FastEngine implements CrossSectionEngine {
                 double[] ring = convolver.convolve(dist, counts);
                 sampler.sample(seg, ring, raw);
             }
-            EdgeCorrection.apply(p, lines, dist, raw);
+            EdgeCorrection.apply(p, lines, dist, raw, pool, threads);
             // values below zero can only be round-off: a cross section is never negative, so they are added as zero
             for (int k = 0; k < raw.length; k++) {
                 sigmaCm2PerMolecule[k] += Math.max(0.0, raw[k]);
