@@ -64,6 +64,11 @@ def main():
                 fail(where + f"sigma is not chunked (1, 1, {block}) with shuffle and deflate: {enc}")
             if "sigma_sha256" not in ds.attrs or "table_format" not in ds.attrs:
                 fail(where + f"root attributes sigma_sha256 / table_format missing: {sorted(ds.attrs)}")
+            if importlib.util.find_spec("h5py") is not None:
+                import h5py
+                with h5py.File(table, "r") as f:
+                    if len(f.attrs) != len(ds.attrs):  # the count HDF5 itself reports (H5Oget_info)
+                        fail(where + f"HDF5 counts {len(f.attrs)} root attributes, xarray lists {len(ds.attrs)}")
             values = s.values.astype(np.float64)
             if rows is not None:
                 grid = rows.reshape(len(expect_p), len(expect_t), len(nu), 4)

@@ -15,6 +15,7 @@ final class ObjectHeader {
     static final int GROUP_INFO = 0x0A;
     static final int FILTER_PIPELINE = 0x0B;
     static final int ATTRIBUTE = 0x0C;
+    static final int ATTRIBUTE_INFO = 0x15;
     /** Message flag: the message's data never change. */
     static final int FLAG_CONSTANT = 0x01;
     private static final int MAX_MESSAGE_BYTES = 0xffff;
@@ -41,7 +42,12 @@ final class ObjectHeader {
         LittleEndianBuffer b = new LittleEndianBuffer().bytes(new byte[] {'O', 'H', 'D', 'R'}).u8(2).u8(0x12);
         int maxCompact = Math.max(8, attributes);
         b.u16(maxCompact).u16(Math.min(6, maxCompact));
-        b.u32(messages.size()).bytes(messages.toArray());
+        // a version-2 header counts its attributes through an attribute info message (without one, the library
+        // reports 0 attributes although it lists them): compact storage, no heap or index, order not tracked
+        byte[] info = attributes == 0 ? new byte[0] : new LittleEndianBuffer().u8(ATTRIBUTE_INFO).u16(18).u8(0)
+                .u8(0).u8(0).u64(LittleEndianBuffer.UNDEFINED_ADDRESS).u64(LittleEndianBuffer.UNDEFINED_ADDRESS)
+                .toArray();
+        b.u32(info.length + messages.size()).bytes(info).bytes(messages.toArray());
         byte[] body = b.toArray();
         return b.u32(Lookup3.hash(body, 0, body.length)).toArray();
     }
