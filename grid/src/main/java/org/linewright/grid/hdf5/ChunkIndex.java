@@ -27,17 +27,6 @@ final class ChunkIndex {
         return NODE_PREFIX_BYTES + (MAX_CHILDREN + 1) * keyBytes + MAX_CHILDREN * 8;
     }
 
-    /** Number of nodes the index of {@code chunks} chunks takes. */
-    int nodeCount(int chunks) {
-        int total = 0;
-        int level = chunks;
-        do {
-            level = (level + MAX_CHILDREN - 1) / MAX_CHILDREN;
-            total += level;
-        } while (level > 1);
-        return total;
-    }
-
     /**
      * Encodes the index, nodes laid out from {@code base}; the root is the last node.
      *

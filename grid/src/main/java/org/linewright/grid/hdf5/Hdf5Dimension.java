@@ -18,8 +18,12 @@ public final class Hdf5Dimension {
     private final double[] values;
     private final Map<String, String> attributes;
     private final long dataAddress;
-    /** (variable, dimension index) of each variable using this dimension, in declaration order. */
-    final List<Object[]> users = new ArrayList<>();
+    /** Each variable using this dimension and at which of its axes, in declaration order. */
+    final List<Use> users = new ArrayList<>();
+
+    /** A variable's use of this dimension as its axis number {@code axis}. */
+    record Use(Hdf5Variable variable, int axis) {
+    }
 
     Hdf5Dimension(String name, int length, double[] values, Map<String, String> attributes, long dataAddress) {
         this.name = name;

@@ -50,7 +50,10 @@ public final class Hdf5Variable {
         long elements = 1;
         for (int d = 0; d < rank; d++) {
             shape[d] = dimensions.get(d).length();
-            if (chunkShape[d] < 1 || chunkShape[d] > Math.max(1, shape[d])) {
+            if (shape[d] < 1) {
+                throw new IllegalArgumentException(name + ": dimension " + dimensions.get(d).name() + " is empty");
+            }
+            if (chunkShape[d] < 1 || chunkShape[d] > shape[d]) {
                 throw new IllegalArgumentException(name + ": chunk shape " + Arrays.toString(chunkShape)
                         + " does not fit dimension " + dimensions.get(d).name() + " of length " + shape[d]);
             }

@@ -104,7 +104,7 @@ public final class Hdf5Writer implements Closeable {
         claim(name);
         Hdf5Variable v = new Hdf5Variable(this, name, type, dims, chunkShape, compression, copy(attributes));
         for (int i = 0; i < dims.size(); i++) {
-            dims.get(i).users.add(new Object[] {v, i});
+            dims.get(i).users.add(new Hdf5Dimension.Use(v, i));
         }
         variables.add(v);
         return v;
@@ -228,8 +228,8 @@ public final class Hdf5Writer implements Closeable {
             Datatype entry = Datatype.compound(16, "dataset", Datatype.objectReference(), "dimension", 8,
                     Datatype.int32());
             LittleEndianBuffer data = new LittleEndianBuffer();
-            for (Object[] use : d.users) {
-                data.u64(headers[dimensions.size() + variables.indexOf((Hdf5Variable) use[0])]).u32((int) use[1]).zeros(4);
+            for (Hdf5Dimension.Use use : d.users) {
+                data.u64(headers[dimensions.size() + variables.indexOf(use.variable())]).u32(use.axis()).zeros(4);
             }
             h.message(ObjectHeader.ATTRIBUTE, 0, Messages.attribute("REFERENCE_LIST", entry,
                     Dataspace.simple(d.users.size()), data.toArray()));
