@@ -2,6 +2,8 @@
 # Reads linewright tables with readers that share no code with linewright, and checks them against each other:
 #   - an Arrow table with Arrow JS (npm package apache-arrow, installed into a temporary folder, run with node),
 #   - an HDF5 table of the same build with h5dump (Debian hdf5-tools) or, failing that, h5py,
+#   - the HDF5 table as netCDF-4 with xarray (python3-xarray, default back end netCDF4 and h5netcdf): dimensions,
+#     coordinates, units, chunking and compression, every value against the Arrow table (check-table-xarray.py),
 #   - both files' sidecar checksums with sha256sum -c, and sigma_sha256 recomputed from the values read.
 # The two tables come from `linewright build` on a small plan over the SYNTHETIC demo lines; the Arrow and HDF5
 # values must agree bit for bit (printed with 17 significant digits). A reader that is missing is skipped with a
@@ -115,5 +117,14 @@ if not any(r[3] > 0 for r in a):
     sys.exit("readers: every sigma is zero")
 print(f"readers: Arrow JS and HDF5 agree on all {len(a)} values")
 PY
+fi
+# xarray reads the HDF5 table as netCDF-4; axes as in the plan above, values as Arrow JS printed them
+if "$PY" -c "import xarray" >/dev/null 2>&1; then
+    rows=-
+    [[ -s "$work/arrow.txt" ]] && rows="$work/arrow.txt"
+    "$PY" "$root/tools/check-table-xarray.py" "$work/table.h5" "$rows" 0.01,1.0 500.0,1000.0 2100.0,2200.0,2001
+    checked=$((checked + 1))
+else
+    echo "readers: SKIPPED the xarray check (python3-xarray is not installed for $PY)"
 fi
 echo "readers: $checked independent reader(s) checked"

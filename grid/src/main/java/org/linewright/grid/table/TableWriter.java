@@ -1,8 +1,5 @@
 package org.linewright.grid.table;
 
-import io.jhdf.HdfFile;
-import io.jhdf.WritableHdfFile;
-import io.jhdf.api.WritableDataset;
 import java.io.IOException;
 import java.io.BufferedOutputStream;
 import java.security.DigestOutputStream;
@@ -13,7 +10,6 @@ import java.nio.channels.Channels;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -29,6 +25,11 @@ import org.apache.arrow.vector.types.pojo.ArrowType;
 import org.apache.arrow.vector.types.pojo.Field;
 import org.apache.arrow.vector.types.pojo.FieldType;
 import org.apache.arrow.vector.types.pojo.Schema;
+import org.linewright.grid.hdf5.Compression;
+import org.linewright.grid.hdf5.ElementType;
+import org.linewright.grid.hdf5.Hdf5Dimension;
+import org.linewright.grid.hdf5.Hdf5Variable;
+import org.linewright.grid.hdf5.Hdf5Writer;
 import org.linewright.grid.plan.TablePlan;
 import org.linewright.ingest.store.SourceMetadata;
 import org.linewright.ingest.atomic.AtomicFile;
@@ -44,6 +45,8 @@ public final class TableWriter {
     public static final String ARROW_KEY_PREFIX = "linewright.";
     /** Tables up to this many bytes of σ (as float64) are held in memory between the checksum and write passes. */
     public static final long CACHE_BYTES = 256L << 20;
+    /** σ's HDF5 chunks span this many wavenumber points of one (p, T) (128 KiB of float64 before compression). */
+    public static final int HDF5_CHUNK_POINTS = 16384;
     /** Metadata key of σ's checksum. */
     public static final String KEY_SIGMA_SHA256 = "sigma_sha256";
 
@@ -97,7 +100,6 @@ public final class TableWriter {
             if (format == TableFormat.ARROW) {
                 fileSha256 = writeArrow(tmp, content, metadata);
             } else {
-                Files.delete(tmp); // jHDF creates its file itself
                 writeHdf5(tmp, content, metadata);
                 fileSha256 = SourceMetadata.sha256(tmp);
             }
@@ -197,47 +199,34 @@ public final class TableWriter {
         }
     }
 
+    /**
+     * Writes the HDF5 file: the axes as dimension coordinates and σ chunked by (1, 1, {@link #HDF5_CHUNK_POINTS})
+     * points of (p, T, ν), shuffled and deflated, one (p, T) row at a time as the source hands them over.
+     */
     private static void writeHdf5(Path tmp, TableContent content, Map<String, String> metadata) throws IOException {
-        int np = content.pressureBar().length;
-        int nt = content.temperatureK().length;
-        Object sigma;
-        if (content.precision() == TablePlan.Precision.FLOAT32) {
-            float[][][] s = new float[np][nt][];
-            for (int p = 0; p < np; p++) {
-                for (int t = 0; t < nt; t++) {
-                    double[] row = content.sigma().sigma(p, t);
-                    s[p][t] = new float[row.length];
-                    for (int i = 0; i < row.length; i++) {
-                        s[p][t][i] = (float) row[i];
+        double[] nu = content.wavenumberCm1();
+        try (Hdf5Writer h5 = Hdf5Writer.create(tmp)) {
+            Hdf5Dimension p = h5.coordinate(TableFormat.PRESSURE, content.pressureBar(),
+                    Map.of(Hdf5Writer.UNITS, TableFormat.UNIT_PRESSURE));
+            Hdf5Dimension t = h5.coordinate(TableFormat.TEMPERATURE, content.temperatureK(),
+                    Map.of(Hdf5Writer.UNITS, TableFormat.UNIT_TEMPERATURE));
+            Hdf5Dimension w = h5.coordinate(TableFormat.WAVENUMBER, nu,
+                    Map.of(Hdf5Writer.UNITS, TableFormat.UNIT_WAVENUMBER));
+            ElementType type = content.precision() == TablePlan.Precision.FLOAT32 ? ElementType.FLOAT32
+                    : ElementType.FLOAT64;
+            int block = Math.max(1, Math.min(nu.length, HDF5_CHUNK_POINTS));
+            Hdf5Variable sigma = h5.variable(TableFormat.SIGMA, type, List.of(p, t, w), new int[] {1, 1, block},
+                    Compression.DEFAULT, Map.of(Hdf5Writer.UNITS, TableFormat.UNIT_SIGMA));
+            metadata.forEach(h5::attribute);
+            for (int i = 0; i < content.pressureBar().length; i++) {
+                for (int j = 0; j < content.temperatureK().length; j++) {
+                    double[] s = content.sigma().sigma(i, j);
+                    check(content, s);
+                    for (int b = 0; b < sigma.chunksAlong(2); b++) {
+                        sigma.writeChunk(new long[] {i, j, b}, s, b * block);
                     }
                 }
             }
-            sigma = s;
-        } else {
-            double[][][] s = new double[np][nt][];
-            for (int p = 0; p < np; p++) {
-                for (int t = 0; t < nt; t++) {
-                    s[p][t] = content.sigma().sigma(p, t).clone();
-                }
-            }
-            sigma = s;
         }
-        List<String[]> attributes = new ArrayList<>();
-        metadata.forEach((k, v) -> attributes.add(new String[] {k, v}));
-        try (WritableHdfFile h5 = HdfFile.write(tmp)) {
-            unit(h5.putDataset(TableFormat.WAVENUMBER, content.wavenumberCm1().clone()), TableFormat.UNIT_WAVENUMBER);
-            unit(h5.putDataset(TableFormat.PRESSURE, content.pressureBar().clone()), TableFormat.UNIT_PRESSURE);
-            unit(h5.putDataset(TableFormat.TEMPERATURE, content.temperatureK().clone()), TableFormat.UNIT_TEMPERATURE);
-            WritableDataset s = h5.putDataset(TableFormat.SIGMA, sigma);
-            unit(s, TableFormat.UNIT_SIGMA);
-            s.putAttribute("dimensions", TableFormat.PRESSURE + "," + TableFormat.TEMPERATURE + "," + TableFormat.WAVENUMBER);
-            for (String[] a : attributes) {
-                h5.putAttribute(a[0], a[1]);
-            }
-        }
-    }
-
-    private static void unit(WritableDataset dataset, String unit) {
-        dataset.putAttribute("unit", unit);
     }
 }

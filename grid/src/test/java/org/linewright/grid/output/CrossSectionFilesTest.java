@@ -93,8 +93,8 @@ class CrossSectionFilesTest {
             Dataset xs = hdf.getDatasetByPath("/cross_section_cm2_per_molecule");
             assertArrayEquals(grid.pointsCm1(), (double[]) nu.getData());
             assertArrayEquals(sigma, (double[]) xs.getData());
-            assertEquals("cm-1", nu.getAttribute("unit").getData());
-            assertEquals("cm2/molecule", xs.getAttribute("unit").getData());
+            assertEquals("cm-1", nu.getAttribute("units").getData());
+            assertEquals("cm2/molecule", xs.getAttribute("units").getData());
             assertEquals("exact", hdf.getAttribute("engine").getData());
             assertEquals("296.0", hdf.getAttribute("temperature_K").getData());
         }

@@ -109,6 +109,37 @@ class TableRoundTripTest {
     }
 
     @Test
+    void hdf5RowsLongerThanOneChunkReadBackAndAreCompressed() throws IOException {
+        // 2.5 chunks of TableWriter.HDF5_CHUNK_POINTS per (p, T): full chunks and a shorter edge chunk per row;
+        // a smooth σ (Lorentzian-like), which shuffle + deflate must store in fewer bytes than raw float64
+        int n = 2 * TableWriter.HDF5_CHUNK_POINTS + TableWriter.HDF5_CHUNK_POINTS / 2;
+        double[] nu = new double[n];
+        for (int k = 0; k < n; k++) {
+            nu[k] = 1000.0 + 0.01 * k;
+        }
+        double[] p = {0.1, 1.0};
+        double[] t = {300.0};
+        SigmaSource sigma = (i, j) -> {
+            double[] s = new double[n];
+            for (int k = 0; k < n; k++) {
+                double x = (nu[k] - 1200.0) / (0.1 + i);
+                s[k] = 1e-20 / (1 + x * x);
+            }
+            return s;
+        };
+        Path file = dir.resolve("long.h5");
+        TableWriter.write(file, new TableContent(nu, p, t, sigma, TablePlan.Precision.FLOAT64, Map.of()));
+        CrossSectionTable table = CrossSectionTable.open(file);
+        assertArrayEquals(nu, table.wavenumberCm1());
+        for (int i = 0; i < p.length; i++) {
+            assertArrayEquals(sigma.sigma(i, 0), table.sigma(i, 0), "p index " + i);
+        }
+        // the file also holds the (uncompressed) axes: compare with σ and ν as raw float64
+        long raw = (long) n * (p.length + 1) * Double.BYTES;
+        assertTrue(Files.size(file) < raw, Files.size(file) + " bytes for " + raw + " bytes of σ and ν");
+    }
+
+    @Test
     void openingSomethingElseIsAClearError() throws IOException {
         Path junk = dir.resolve("junk.arrow");
         Files.writeString(junk, "not arrow");
