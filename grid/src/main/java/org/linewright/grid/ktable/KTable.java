@@ -247,7 +247,11 @@ public final class KTable {
             double[] w = doubles(file, h5, KTableLayout.G_WEIGHT);
             double[] lower = doubles(file, h5, KTableLayout.BIN_LOWER);
             double[] upper = doubles(file, h5, KTableLayout.BIN_UPPER);
-            int[] points = (int[]) dataset(file, h5, KTableLayout.POINTS_PER_BIN).getData();
+            double[] pointsStored = doubles(file, h5, KTableLayout.POINTS_PER_BIN);
+            int[] points = new int[pointsStored.length];
+            for (int b = 0; b < points.length; b++) {
+                points[b] = (int) pointsStored[b];
+            }
             Object kData = dataset(file, h5, perGram ? KTableLayout.K_PER_GRAM : KTableLayout.K_PER_MOLECULE).getData();
             if (!(kData instanceof double[][][][] k4)) {
                 throw new InputException(file + ": k is not a 4-D float64 dataset [p][T][bin][g]");
