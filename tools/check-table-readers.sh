@@ -4,6 +4,7 @@
 #   - an HDF5 table of the same build with h5dump (Debian hdf5-tools) or, failing that, h5py,
 #   - the HDF5 table as netCDF-4 with xarray (python3-xarray, default back end netCDF4 and h5netcdf): dimensions,
 #     coordinates, units, chunking and compression, every value against the Arrow table (check-table-xarray.py),
+#   - a k-table made from that HDF5 table, with xarray, every k against NumPy (check-ktable-xarray.py),
 #   - both files' sidecar checksums with sha256sum -c, and sigma_sha256 recomputed from the values read.
 # The two tables come from `linewright build` on a small plan over the SYNTHETIC demo lines; the Arrow and HDF5
 # values must agree bit for bit (printed with 17 significant digits). A reader that is missing is skipped with a
@@ -124,7 +125,11 @@ if "$PY" -c "import xarray" >/dev/null 2>&1; then
     [[ -s "$work/arrow.txt" ]] && rows="$work/arrow.txt"
     "$PY" "$root/tools/check-table-xarray.py" "$work/table.h5" "$rows" 0.01,1.0 500.0,1000.0 2100.0,2200.0,2001
     checked=$((checked + 1))
+    # the k-table made from the HDF5 table, checked against NumPy from the same sigma values
+    "$root/linewright" -q ktable "$work/table.h5" --bin-width 10 --g-points 8 --out "$work/ktable.h5"
+    "$PY" "$root/tools/check-ktable-xarray.py" "$work/ktable.h5" "$work/table.h5" 8
+    checked=$((checked + 1))
 else
-    echo "readers: SKIPPED the xarray check (python3-xarray is not installed for $PY)"
+    echo "readers: SKIPPED the xarray checks (python3-xarray is not installed for $PY)"
 fi
 echo "readers: $checked independent reader(s) checked"
