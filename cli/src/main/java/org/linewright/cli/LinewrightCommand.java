@@ -13,7 +13,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "linewright",
         mixinStandardHelpOptions = true,
         versionProvider = LinewrightCommand.Version.class,
-        subcommands = {IngestCommand.class, LinesCommand.class, SigmaCommand.class, BuildCommand.class, KTableCommand.class,
+        subcommands = {IngestCommand.class, LinesCommand.class, SigmaCommand.class, BuildCommand.class, KTableCommand.class, KTableMixCommand.class,
             VerifyCommand.class, CompareCommand.class, DemoCommand.class,
             CompletionCommand.class},
         description = {

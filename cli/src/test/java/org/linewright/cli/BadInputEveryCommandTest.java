@@ -43,6 +43,7 @@ class BadInputEveryCommandTest {
     private static Path store;
     private static Path plan;
     private static Path sigmaTable;
+    private static Path ktable;
     private static Path garbage;
     private static Path missing;
     private static Path underAFile;
@@ -75,6 +76,10 @@ class BadInputEveryCommandTest {
         Run build = run("build", plan.toString(), "--quiet");
         assertEquals(ExitCodes.OK, build.code(), build.err());
         sigmaTable = tmp.resolve("t.arrow");
+        ktable = tmp.resolve("k.h5");
+        Run k = run("ktable", sigmaTable.toString(), "--bin-width", "0.5", "--g-points", "4", "--out",
+                ktable.toString(), "--quiet");
+        assertEquals(ExitCodes.OK, k.code(), k.err());
     }
 
     private record Run(int code, String out, String err) {
@@ -118,6 +123,10 @@ class BadInputEveryCommandTest {
                 m.put("--bin-width", List.of("0.5"));
                 m.put("--g-points", List.of("4"));
                 m.put("--out", List.of(fresh("ktable") + ".h5"));
+            }
+            case "ktable-mix" -> {
+                m.put("", List.of(ktable + "=0.7", ktable + "=0.3"));
+                m.put("--out", List.of(fresh("ktable-mix") + ".h5"));
             }
             case "verify" -> m.put("", List.of(store.toString()));
             case "compare" -> m.put("", List.of(store.toString(), store.toString()));
@@ -299,6 +308,10 @@ class BadInputEveryCommandTest {
             case "build" -> List.of(new String[] {missing.toString()}, new String[] {garbage.toString()});
             case "ktable" -> List.of(new String[] {missing.toString()}, new String[] {garbage.toString()},
                     new String[] {plan.toString()});
+            case "ktable-mix" -> List.of(new String[] {missing + "=0.5", ktable + "=0.5"},
+                    new String[] {garbage + "=0.5", ktable + "=0.5"}, new String[] {ktable + "=abc", ktable + "=0.5"},
+                    new String[] {ktable.toString(), ktable + "=0.5"}, new String[] {ktable + "=-1", ktable + "=0.5"},
+                    new String[] {sigmaTable + "=0.5", ktable + "=0.5"});
             case "verify" -> List.of(new String[] {missing.toString()}, new String[] {garbage.toString()});
             case "compare" -> List.of(new String[] {missing.toString(), store.toString()},
                     new String[] {store.toString(), garbage.toString()});
