@@ -1,6 +1,7 @@
 package org.linewright.ingest.store;
 
 import java.io.IOException;
+import java.io.InterruptedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -16,6 +17,10 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.TreeMap;
 import java.util.UUID;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.line.TextColumn;
@@ -27,7 +32,9 @@ import org.linewright.ingest.atomic.AtomicFile;
  *
  * <p>Lines arriving in ascending order (the usual case) stream straight into the file. From the first line
  * out of order on, lines are collected in runs of at most {@code runLines} lines, each sorted in memory and
- * spilled to a temporary Arrow file; {@link #commit} then merges the runs (k-way, ties in input order).
+ * spilled to a temporary Arrow file; {@link #commit} then merges the runs (k-way, ties in input order). A full
+ * run is sorted and written on a spill thread while the caller fills the next run (two run buffers, each
+ * holding only the stored columns, packed by row: {@link RunBuffer}).
  *
  * <p>Atomicity: everything is written under temporary names ({@code .partial-...}) in the store directory;
  * {@link #commit} forces the finished file to disk, renames it over the source's file (replacing an earlier
@@ -40,11 +47,14 @@ import org.linewright.ingest.atomic.AtomicFile;
  * not stored read back as NaN (numbers) or empty (text). Without a column set, every column is stored.
  *
  * <p>Use: {@code create}, {@code write} batches, {@code commit(counts)}; {@code close()} without commit
- * aborts. Not thread-safe.
+ * aborts. Not thread-safe (its spill thread is its own business).
  */
 public final class LineStoreWriter implements AutoCloseable {
-    /** Default maximum lines per sorted run (≈ 90 MB of heap for the run buffer). */
-    public static final int DEFAULT_RUN_LINES = 262_144;
+    /**
+     * Default maximum lines per sorted run. Two run buffers take turns (one fills while the other is sorted and
+     * written), each holding the stored columns only: ≈ 2 × 30 MB of heap for a 160-character source.
+     */
+    public static final int DEFAULT_RUN_LINES = 131_072;
     /** Lines per record batch written by the merge. */
     static final int OUTPUT_BATCH_LINES = 65_536;
     /** Lines per record batch of the temporary runs (small, so that the merge reads them in small steps). */
@@ -56,6 +66,8 @@ public final class LineStoreWriter implements AutoCloseable {
     private static final long BYTES_PER_LINE_ESTIMATE = 360;
     /** Default most runs merged at once (bounds open files and the merge's heap). */
     static final int DEFAULT_MERGE_FAN_IN = 128;
+    /** Rows the merge copies into a packed block before spreading them into the output columns (fits L2 cache). */
+    private static final int MERGE_BLOCK_ROWS = 1024;
     /** Smallest slice per run, whatever the number of runs (keeps reads efficient). */
     private static final int MIN_MERGE_SLICE_ROWS = 1024;
     private static final Set<LineColumn> ALL_COLUMNS = Set.of(LineColumn.values());
@@ -73,10 +85,16 @@ public final class LineStoreWriter implements AutoCloseable {
     /** The file being streamed (final when no line came out of order, else the first run). */
     private ArrowLineFileWriter stream;
     private final List<Path> runs = new ArrayList<>();
-    private LineBatch runBuffer;
-    private int[] orderA;
-    private int[] orderB;
+    /** The run being filled. */
+    private RunBuffer runBuffer;
+    /** The other run buffer (allocated with the second run): free, or being written by {@link #spiller}. */
+    private RunBuffer spare;
+    /** Batch the spill gathers sorted lines into; used by one spill at a time. */
     private LineBatch gather;
+    /** Sorts and writes full runs while the caller fills the next one. */
+    private ExecutorService spiller;
+    /** The spill in progress, if any. */
+    private Future<?> pendingSpill;
     private long linesWritten;
     private boolean done;
 
@@ -190,45 +208,96 @@ public final class LineStoreWriter implements AutoCloseable {
             stream.write(batch);
         } else {
             if (runBuffer == null) {
-                runBuffer = new LineBatch(runLines);
-                orderA = new int[runLines];
-                orderB = new int[runLines];
+                runBuffer = new RunBuffer(runLines, columns);
                 gather = new LineBatch(Math.min(runLines, SPILL_BATCH_LINES));
             }
             int from = 0;
             while (from < n) {
-                int take = Math.min(n - from, runLines - runBuffer.size);
-                runBuffer.copyRows(batch, from, runBuffer.size, take);
-                runBuffer.size += take;
-                from += take;
+                from += runBuffer.append(batch, from, n - from);
                 if (runBuffer.isFull()) {
-                    spillRun();
+                    spillInBackground();
                 }
             }
         }
         linesWritten += n;
     }
 
-    /** Sorts the run buffer (stable) and writes it as a temporary run file. */
-    private void spillRun() throws IOException {
-        int n = runBuffer.size;
-        if (n == 0) {
-            return;
-        }
-        int[] order = StableOrder.permutation(runBuffer.wavenumberCm1, n, orderA, orderB);
+    /**
+     * Hands the full run buffer to the spill thread and continues with the other buffer. At most one spill is in
+     * progress: this waits for the previous one (and reports its failure). Runs are listed in input order when
+     * handed over, so ties keep their input order in the merge.
+     */
+    private void spillInBackground() throws IOException {
+        awaitSpill();
+        RunBuffer full = runBuffer;
         Path path = partialPath("run");
         runs.add(path);
+        if (spare == null) {
+            spare = new RunBuffer(runLines, columns);
+        }
+        runBuffer = spare;
+        spare = full;
+        if (spiller == null) {
+            spiller = Executors.newSingleThreadExecutor(r -> {
+                Thread t = new Thread(r, "linewright-spill");
+                t.setDaemon(true);
+                return t;
+            });
+        }
+        pendingSpill = spiller.submit(() -> {
+            writeRun(full, path);
+            return null;
+        });
+    }
+
+    /** Sorts {@code buffer} (stable) and writes it as the temporary run file {@code path}; empties the buffer. */
+    private void writeRun(RunBuffer buffer, Path path) throws IOException {
         try (ArrowLineFileWriter run = new ArrowLineFileWriter(path, schemaMetadata, columns)) {
-            for (int from = 0; from < n; from += gather.capacity()) {
-                int m = Math.min(gather.capacity(), n - from);
-                gather.clear();
-                gatherRows(columns, new LineBatch[] {runBuffer}, null, order, from, m, gather, 0);
-                gather.size = m;
-                run.write(gather);
-            }
+            buffer.writeSorted(run, gather);
             run.finishTemporary();
         }
-        runBuffer.clear();
+    }
+
+    /** Waits for the spill in progress, if any, rethrowing its failure. */
+    private void awaitSpill() throws IOException {
+        Future<?> f = pendingSpill;
+        if (f == null) {
+            return;
+        }
+        pendingSpill = null;
+        try {
+            f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new InterruptedIOException("interrupted while writing a sorted run");
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof IOException io) {
+                throw io;
+            }
+            if (cause instanceof RuntimeException re) {
+                throw re;
+            }
+            if (cause instanceof Error err) {
+                throw err;
+            }
+            throw new IOException("writing a sorted run failed", cause);
+        }
+    }
+
+    /** Waits for the spill in progress and stops the spill thread; failures are left to the caller's own path. */
+    private void stopSpiller() {
+        if (pendingSpill != null) {
+            try {
+                awaitSpill();
+            } catch (IOException | RuntimeException ignored) {
+                // aborting anyway; the run files are deleted
+            }
+        }
+        if (spiller != null) {
+            spiller.shutdown();
+            spiller = null;
+        }
     }
 
     /**
@@ -295,11 +364,16 @@ public final class LineStoreWriter implements AutoCloseable {
             runs.add(0, stream.path());
             stream = null;
         }
-        spillRun();
+        awaitSpill();
+        stopSpiller();
+        if (runBuffer.size() > 0) {
+            Path last = partialPath("run");
+            runs.add(last);
+            writeRun(runBuffer, last);
+        }
         runBuffer = null;
+        spare = null;
         gather = null;
-        orderA = null;
-        orderB = null;
         // Intermediate passes while there are too many runs for one merge: each group of consecutive runs
         // becomes one run, in place, so the runs stay in input order and ties stay stable.
         LineBatch spillBatch = new LineBatch(SPILL_BATCH_LINES);
@@ -335,9 +409,10 @@ public final class LineStoreWriter implements AutoCloseable {
 
     /**
      * k-way merges the sorted run files into {@code out} (ties in run order). The merge order is found on the
-     * wavenumbers alone; the columns are then gathered column by column for a stretch of output rows (a stretch
-     * ends when the output batch is full or a run's slice must be refilled), so a line costs one pass per column
-     * rather than one copy call per column and per line.
+     * wavenumbers alone. Each run's slice of lines is packed by row as it is loaded ({@link RunBuffer#pack}), so
+     * taking a line copies the one or two cache lines of its packed row; blocks of taken rows are then spread into
+     * the output batch column by column. Text columns are gathered for a stretch of output rows (a stretch ends
+     * when the output batch is full or a run's slice must be refilled).
      */
     private static void mergeInto(List<Path> runFiles, ArrowLineFileWriter out, LineBatch batch, LineColumn[] columns)
             throws IOException {
@@ -345,34 +420,47 @@ public final class LineStoreWriter implements AutoCloseable {
         for (Path run : runFiles) {
             files.add(ArrowLineFile.open(run));
         }
-        List<LineColumn> numeric = new ArrayList<>();
-        List<LineColumn> text = new ArrayList<>();
+        List<LineColumn> numericList = new ArrayList<>();
+        List<LineColumn> textList = new ArrayList<>();
         for (LineColumn c : columns) {
-            (c.kind() == LineColumn.Kind.TEXT ? text : numeric).add(c);
+            (c.kind() == LineColumn.Kind.TEXT ? textList : numericList).add(c);
         }
+        LineColumn[] numeric = numericList.toArray(new LineColumn[0]);
+        LineColumn[] text = textList.toArray(new LineColumn[0]);
+        int w = numeric.length;
         LineQuery query = LineQuery.all().withColumns(List.of(columns));
-        // Each run's scanner holds a slice of its lines: the slices together stay within MERGE_HEAP_BYTES.
-        int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS, MERGE_HEAP_BYTES / (files.size() * BYTES_PER_LINE_ESTIMATE));
+        // Each run's scanner holds a slice of its lines (and its packed copy): together within MERGE_HEAP_BYTES.
+        int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS,
+                MERGE_HEAP_BYTES / (files.size() * (BYTES_PER_LINE_ESTIMATE + (long) w * Long.BYTES)));
         int k = files.size();
         FileScanner[] scanners = new FileScanner[k];
         try {
             for (int i = 0; i < k; i++) {
-                scanners[i] = new FileScanner(files.get(i), query, numeric.toArray(new LineColumn[0]),
-                        text.toArray(new LineColumn[0]), sliceRows);
+                scanners[i] = new FileScanner(files.get(i), query, numeric, text, sliceRows);
             }
             LineBatch[] slices = new LineBatch[k];
+            long[][] packed = new long[k][];
             for (int i = 0; i < k; i++) {
                 slices[i] = scanners[i].buf;
+                packed[i] = new long[scanners[i].buf.capacity() * w];
             }
             int capacity = batch.capacity();
             int[] fromRun = new int[capacity];
             int[] fromRow = new int[capacity];
+            long[] block = new long[MERGE_BLOCK_ROWS * w];
+            int blockRows = 0;
             // Current key of each run; +infinity once the run is exhausted.
             double[] keys = new double[k];
             for (int i = 0; i < k; i++) {
-                keys[i] = scanners[i].ensure() ? scanners[i].key() : Double.POSITIVE_INFINITY;
+                if (scanners[i].ensure()) {
+                    keys[i] = scanners[i].key();
+                    RunBuffer.pack(numeric, slices[i], packed[i]);
+                } else {
+                    keys[i] = Double.POSITIVE_INFINITY;
+                }
             }
             batch.clear();
+            // Output rows [batch.size, batch.size + stretch) are taken; the first blockRows of them wait in block.
             int stretch = 0;
             while (true) {
                 int best = -1;
@@ -388,14 +476,22 @@ public final class LineStoreWriter implements AutoCloseable {
                     break;
                 }
                 FileScanner s = scanners[best];
+                System.arraycopy(packed[best], s.pos * w, block, blockRows * w, w);
+                blockRows++;
                 fromRun[stretch] = best;
                 fromRow[stretch] = s.pos;
                 stretch++;
                 s.pos++;
+                if (blockRows == MERGE_BLOCK_ROWS) {
+                    RunBuffer.spread(numeric, block, blockRows, batch, batch.size + stretch - blockRows);
+                    blockRows = 0;
+                }
                 boolean refill = s.pos >= s.buf.size;
                 if (refill || batch.size + stretch == capacity) {
-                    // Gather before a slice is overwritten or when the output batch is full.
-                    gatherRows(columns, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
+                    // Texts gathered before a slice is overwritten or when the output batch is full.
+                    RunBuffer.spread(numeric, block, blockRows, batch, batch.size + stretch - blockRows);
+                    blockRows = 0;
+                    gatherRows(text, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
                     batch.size += stretch;
                     stretch = 0;
                     if (batch.size == capacity) {
@@ -404,13 +500,19 @@ public final class LineStoreWriter implements AutoCloseable {
                     }
                 }
                 if (refill) {
-                    keys[best] = s.ensure() ? s.key() : Double.POSITIVE_INFINITY;
+                    if (s.ensure()) {
+                        keys[best] = s.key();
+                        RunBuffer.pack(numeric, s.buf, packed[best]);
+                    } else {
+                        keys[best] = Double.POSITIVE_INFINITY;
+                    }
                 } else {
                     keys[best] = s.buf.wavenumberCm1[s.pos];
                 }
             }
             if (stretch > 0) {
-                gatherRows(columns, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
+                RunBuffer.spread(numeric, block, blockRows, batch, batch.size + stretch - blockRows);
+                gatherRows(text, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
                 batch.size += stretch;
             }
             if (batch.size > 0) {
@@ -497,12 +599,15 @@ public final class LineStoreWriter implements AutoCloseable {
             return;
         }
         done = true;
+        // A run being written must be closed before the run files are deleted.
+        stopSpiller();
         if (stream != null) {
             stream.discard();
             stream = null;
         }
         deleteRuns();
         runBuffer = null;
+        spare = null;
     }
 
     /** Aborts unless committed. */
