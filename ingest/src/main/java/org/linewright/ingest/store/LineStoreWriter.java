@@ -408,18 +408,13 @@ public final class LineStoreWriter implements AutoCloseable {
     }
 
     /**
-     * k-way merges the sorted run files into {@code out} (ties in run order). The merge order is found on the
-     * wavenumbers alone. Each run's slice of lines is packed by row as it is loaded ({@link RunBuffer#pack}), so
-     * taking a line copies the one or two cache lines of its packed row; blocks of taken rows are then spread into
-     * the output batch column by column. Text columns are gathered for a stretch of output rows (a stretch ends
-     * when the output batch is full or a run's slice must be refilled).
+     * k-way merges the sorted run files into {@code out} (ties in run order), on two threads: one lane fills the
+     * numeric columns of each output batch, the other its text columns ({@link MergeLane}). Each lane reads the
+     * runs' wavenumbers and its own columns and finds the same merge order from the wavenumbers alone, so the
+     * lanes need to meet only once per output batch, and the result does not depend on timing.
      */
     private static void mergeInto(List<Path> runFiles, ArrowLineFileWriter out, LineBatch batch, LineColumn[] columns)
             throws IOException {
-        List<ArrowLineFile> files = new ArrayList<>();
-        for (Path run : runFiles) {
-            files.add(ArrowLineFile.open(run));
-        }
         List<LineColumn> numericList = new ArrayList<>();
         List<LineColumn> textList = new ArrayList<>();
         for (LineColumn c : columns) {
@@ -427,42 +422,139 @@ public final class LineStoreWriter implements AutoCloseable {
         }
         LineColumn[] numeric = numericList.toArray(new LineColumn[0]);
         LineColumn[] text = textList.toArray(new LineColumn[0]);
-        int w = numeric.length;
+        int lanes = text.length > 0 ? 2 : 1;
+        // Each lane's scanner per run holds a slice of its lines (and its packed copy): together within MERGE_HEAP_BYTES.
+        int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS, MERGE_HEAP_BYTES
+                / ((long) lanes * runFiles.size() * (BYTES_PER_LINE_ESTIMATE + (long) numeric.length * Long.BYTES)));
         LineQuery query = LineQuery.all().withColumns(List.of(columns));
-        // Each run's scanner holds a slice of its lines (and its packed copy): together within MERGE_HEAP_BYTES.
-        int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS,
-                MERGE_HEAP_BYTES / (files.size() * (BYTES_PER_LINE_ESTIMATE + (long) w * Long.BYTES)));
-        int k = files.size();
-        FileScanner[] scanners = new FileScanner[k];
-        try {
-            for (int i = 0; i < k; i++) {
-                scanners[i] = new FileScanner(files.get(i), query, numeric, text, sliceRows);
+        ExecutorService helper = null;
+        try (MergeLane numbers = new MergeLane(runFiles, query, numeric, new LineColumn[0], sliceRows, batch.capacity());
+             MergeLane texts = lanes == 2 ? new MergeLane(runFiles, query, new LineColumn[0], text, sliceRows,
+                     batch.capacity()) : null) {
+            if (texts != null) {
+                helper = Executors.newSingleThreadExecutor(r -> {
+                    Thread t = new Thread(r, "linewright-merge");
+                    t.setDaemon(true);
+                    return t;
+                });
             }
-            LineBatch[] slices = new LineBatch[k];
-            long[][] packed = new long[k][];
-            for (int i = 0; i < k; i++) {
-                slices[i] = scanners[i].buf;
-                packed[i] = new long[scanners[i].buf.capacity() * w];
-            }
-            int capacity = batch.capacity();
-            int[] fromRun = new int[capacity];
-            int[] fromRow = new int[capacity];
-            long[] block = new long[MERGE_BLOCK_ROWS * w];
-            int blockRows = 0;
-            // Current key of each run; +infinity once the run is exhausted.
-            double[] keys = new double[k];
-            for (int i = 0; i < k; i++) {
-                if (scanners[i].ensure()) {
-                    keys[i] = scanners[i].key();
-                    RunBuffer.pack(numeric, slices[i], packed[i]);
-                } else {
-                    keys[i] = Double.POSITIVE_INFINITY;
+            while (true) {
+                batch.clear();
+                Future<Integer> textRows = texts == null ? null : helper.submit(() -> texts.fill(batch));
+                int rows = numbers.fill(batch);
+                if (textRows != null && await(textRows) != rows) {
+                    throw new IllegalStateException("merge lanes disagree on the number of lines");
+                }
+                batch.size = rows;
+                if (rows > 0) {
+                    out.write(batch);
+                }
+                if (rows < batch.capacity()) {
+                    break;
                 }
             }
             batch.clear();
-            // Output rows [batch.size, batch.size + stretch) are taken; the first blockRows of them wait in block.
+        } finally {
+            if (helper != null) {
+                helper.shutdownNow();
+            }
+        }
+    }
+
+    private static int await(Future<Integer> f) throws IOException {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new InterruptedIOException("interrupted while merging sorted runs");
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof IOException io) {
+                throw io;
+            }
+            if (cause instanceof RuntimeException re) {
+                throw re;
+            }
+            if (cause instanceof Error err) {
+                throw err;
+            }
+            throw new IOException("merging sorted runs failed", cause);
+        }
+    }
+
+    /**
+     * One lane of the k-way merge: walks every run in merge order (found on the wavenumbers, ties to the older
+     * run) and fills its own columns of the output batches. Numeric columns: each run's slice is packed by row as
+     * it is loaded ({@link RunBuffer#pack}), taking a line copies its packed row (one or two cache lines), and
+     * blocks of taken rows are spread into the output columns. Text columns are gathered for a stretch of output
+     * rows (a stretch ends when the batch is full or a run's slice must be refilled).
+     */
+    private static final class MergeLane implements AutoCloseable {
+        private final LineColumn[] numeric;
+        private final LineColumn[] text;
+        private final int w;
+        private final FileScanner[] scanners;
+        private final LineBatch[] slices;
+        private final long[][] packed;
+        /** Current key of each run; +infinity once the run is exhausted. */
+        private final double[] keys;
+        private final int[] fromRun;
+        private final int[] fromRow;
+        private final long[] block;
+
+        MergeLane(List<Path> runFiles, LineQuery query, LineColumn[] numeric, LineColumn[] text, int sliceRows,
+                  int capacity) throws IOException {
+            this.numeric = numeric;
+            this.text = text;
+            this.w = numeric.length;
+            int k = runFiles.size();
+            scanners = new FileScanner[k];
+            slices = new LineBatch[k];
+            packed = new long[k][];
+            keys = new double[k];
+            try {
+                for (int i = 0; i < k; i++) {
+                    scanners[i] = new FileScanner(ArrowLineFile.open(runFiles.get(i)), query, numeric, text, sliceRows);
+                    slices[i] = scanners[i].buf;
+                    packed[i] = new long[scanners[i].buf.capacity() * w];
+                    keys[i] = load(i) ? scanners[i].key() : Double.POSITIVE_INFINITY;
+                }
+            } catch (IOException | RuntimeException e) {
+                close();
+                throw e;
+            }
+            fromRun = new int[capacity];
+            fromRow = new int[capacity];
+            block = new long[MERGE_BLOCK_ROWS * w];
+        }
+
+        /** Makes sure run {@code i} has a line at its position, packing a newly loaded slice; false when exhausted. */
+        private boolean load(int i) throws IOException {
+            FileScanner s = scanners[i];
+            if (s.pos < s.buf.size) {
+                return true;
+            }
+            if (!s.ensure()) {
+                return false;
+            }
+            if (w > 0) {
+                RunBuffer.pack(numeric, s.buf, packed[i]);
+            }
+            return true;
+        }
+
+        /**
+         * Fills rows {@code [0, n)} of this lane's columns of {@code batch} (text columns empty on entry) with the
+         * next merged lines; returns n, less than the batch's capacity only when the runs are exhausted.
+         */
+        int fill(LineBatch batch) throws IOException {
+            int capacity = batch.capacity();
+            int k = keys.length;
+            int filled = 0;
+            // Rows [filled, filled + stretch) are taken; the last blockRows of them wait in block.
             int stretch = 0;
-            while (true) {
+            int blockRows = 0;
+            while (filled + stretch < capacity) {
                 int best = -1;
                 double bestKey = Double.POSITIVE_INFINITY;
                 for (int i = 0; i < k; i++) {
@@ -476,50 +568,43 @@ public final class LineStoreWriter implements AutoCloseable {
                     break;
                 }
                 FileScanner s = scanners[best];
-                System.arraycopy(packed[best], s.pos * w, block, blockRows * w, w);
+                if (w > 0) {
+                    System.arraycopy(packed[best], s.pos * w, block, blockRows * w, w);
+                }
                 blockRows++;
                 fromRun[stretch] = best;
                 fromRow[stretch] = s.pos;
                 stretch++;
                 s.pos++;
                 if (blockRows == MERGE_BLOCK_ROWS) {
-                    RunBuffer.spread(numeric, block, blockRows, batch, batch.size + stretch - blockRows);
+                    RunBuffer.spread(numeric, block, blockRows, batch, filled + stretch - blockRows);
                     blockRows = 0;
                 }
                 boolean refill = s.pos >= s.buf.size;
-                if (refill || batch.size + stretch == capacity) {
+                if (refill || filled + stretch == capacity) {
                     // Texts gathered before a slice is overwritten or when the output batch is full.
-                    RunBuffer.spread(numeric, block, blockRows, batch, batch.size + stretch - blockRows);
+                    RunBuffer.spread(numeric, block, blockRows, batch, filled + stretch - blockRows);
                     blockRows = 0;
-                    gatherRows(text, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
-                    batch.size += stretch;
+                    gatherRows(text, slices, fromRun, fromRow, 0, stretch, batch, filled);
+                    filled += stretch;
                     stretch = 0;
-                    if (batch.size == capacity) {
-                        out.write(batch);
-                        batch.clear();
-                    }
                 }
                 if (refill) {
-                    if (s.ensure()) {
-                        keys[best] = s.key();
-                        RunBuffer.pack(numeric, s.buf, packed[best]);
-                    } else {
-                        keys[best] = Double.POSITIVE_INFINITY;
-                    }
+                    keys[best] = load(best) ? s.key() : Double.POSITIVE_INFINITY;
                 } else {
                     keys[best] = s.buf.wavenumberCm1[s.pos];
                 }
             }
             if (stretch > 0) {
-                RunBuffer.spread(numeric, block, blockRows, batch, batch.size + stretch - blockRows);
-                gatherRows(text, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
-                batch.size += stretch;
+                RunBuffer.spread(numeric, block, blockRows, batch, filled + stretch - blockRows);
+                gatherRows(text, slices, fromRun, fromRow, 0, stretch, batch, filled);
+                filled += stretch;
             }
-            if (batch.size > 0) {
-                out.write(batch);
-                batch.clear();
-            }
-        } finally {
+            return filled;
+        }
+
+        @Override
+        public void close() throws IOException {
             IOException first = null;
             for (FileScanner s : scanners) {
                 if (s != null) {
