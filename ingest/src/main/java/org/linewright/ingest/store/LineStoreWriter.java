@@ -678,6 +678,27 @@ public final class LineStoreWriter implements AutoCloseable {
         }
     }
 
+    /**
+     * Moves every source of the finished store {@code stagedStoreDir} (written by {@link #commit} there, e.g. by a
+     * task of a file-parallel ingest) into {@code storeDir}, replacing sources of the same names, and updates the
+     * index as a commit does: each file is renamed into place (same file system), then the index is replaced
+     * atomically under the store's lock. The files' bytes are not touched.
+     */
+    public static void adopt(Path storeDir, Path stagedStoreDir) throws IOException {
+        Files.createDirectories(storeDir);
+        TreeMap<String, StoreIndex.Entry> staged = StoreIndex.read(stagedStoreDir);
+        for (StoreIndex.Entry e : staged.values()) {
+            AtomicFile.rename(stagedStoreDir.resolve(e.fileName()), storeDir.resolve(e.fileName()));
+        }
+        StoreIndex.syncDirectory(storeDir);
+        StoreIndex.locked(storeDir, () -> {
+            TreeMap<String, StoreIndex.Entry> entries = StoreIndex.read(storeDir);
+            entries.putAll(staged);
+            StoreIndex.write(storeDir, entries);
+            return null;
+        });
+    }
+
     /** Discards everything written so far; the store is left as it was. Idempotent. */
     public void abort() {
         if (done) {
