@@ -37,8 +37,9 @@ import org.linewright.ingest.store.LineStoreWriter;
  * the files before it). A task that fails otherwise (an executor lost, a disk error) is tried again by Spark.
  *
  * <p>Storage: executors read the sources and write the staging store through the same paths as the driver, so
- * the sources and the store must be on storage all of them see under the same name (see docs/spark.md). One small
- * job checks this before any file is read.
+ * the sources and the store must be on storage all of them see under the same name (see docs/spark.md); the
+ * sources are opened by the paths as given (and recorded so, as in a local ingest), so on a cluster give them as
+ * absolute paths. One small job checks that every source is readable on an executor before any file is read.
  */
 public final class SparkIngest implements AutoCloseable {
     private static final String STAGING_PREFIX = AtomicFile.PARTIAL + "spark-";
@@ -101,7 +102,9 @@ public final class SparkIngest implements AutoCloseable {
         IngestPipeline.checkNames(sources);
         List<String> files = new ArrayList<>();
         for (Path s : sources) {
-            files.add(s.toAbsolutePath().toString());
+            // As given, as a local ingest records it: a relative path resolves in each executor's working directory
+            // (the driver's in local mode); the check below finds one that does not resolve there.
+            files.add(s.toString());
         }
         checkReadableOnExecutors(files, speciesData.files());
         Path store = storeDir.toAbsolutePath();
