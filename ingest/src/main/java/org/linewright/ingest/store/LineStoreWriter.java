@@ -441,7 +441,20 @@ public final class LineStoreWriter implements AutoCloseable {
             while (true) {
                 batch.clear();
                 Future<Integer> textRows = texts == null ? null : helper.submit(() -> texts.fill(batch));
-                int rows = numbers.fill(batch);
+                int rows;
+                try {
+                    rows = numbers.fill(batch);
+                } catch (IOException | RuntimeException | Error e) {
+                    // The text lane must be done with its files before they are closed.
+                    if (textRows != null) {
+                        try {
+                            await(textRows);
+                        } catch (IOException | RuntimeException ignored) {
+                            // the first failure is the one reported
+                        }
+                    }
+                    throw e;
+                }
                 if (textRows != null && await(textRows) != rows) {
                     throw new IllegalStateException("merge lanes disagree on the number of lines");
                 }
