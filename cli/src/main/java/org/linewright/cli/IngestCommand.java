@@ -74,6 +74,11 @@ public final class IngestCommand implements Callable<Integer> {
     @Mixin
     private SpeciesDataOptions speciesData;
 
+    @Option(names = "--spark", paramLabel = "MASTER",
+            description = "Read the files in parallel as Spark tasks, one task per file: local[N], spark://HOST:PORT, "
+                    + "yarn or k8s://URL (see docs/spark.md). The same store as without it; strict only.")
+    private String sparkMaster;
+
     @Override
     public Integer call() throws Exception {
         boolean quiet = root.globalOptions().quiet();
@@ -88,26 +93,35 @@ public final class IngestCommand implements Callable<Integer> {
         parameters.put("command", "ingest");
         IngestOptions options = new IngestOptions(lineFormat, lenient, rejects, speciesData.registry(), parameters);
         IngestReport report;
-        try (Progress progress = Progress.start("ingest", -1, "records", 1, quiet)) {
-            report = IngestPipeline.run(sources, store, options, new IngestListener() {
-                private long before;
+        if (sparkMaster != null) {
+            if (lenient) {
+                throw new ParameterException(spec.commandLine(), "--lenient: not available with --spark yet "
+                        + "(a file-parallel ingest is strict); ingest without --spark");
+            }
+            report = SparkRunner.ingest(spec, sources, store, lineFormat == null ? null : lineFormat.id(), parameters,
+                    speciesData.files(), sparkMaster, quiet);
+        } else {
+            try (Progress progress = Progress.start("ingest", -1, "records", 1, quiet)) {
+                report = IngestPipeline.run(sources, store, options, new IngestListener() {
+                    private long before;
 
-                @Override
-                public void sourceStarted(Path source, long fileBytes) {
-                    progress.message(source.getFileName().toString());
-                }
+                    @Override
+                    public void sourceStarted(Path source, long fileBytes) {
+                        progress.message(source.getFileName().toString());
+                    }
 
-                @Override
-                public void recordsRead(Path source, long records) {
-                    progress.stepBy(records - before);
-                    before = records;
-                }
+                    @Override
+                    public void recordsRead(Path source, long records) {
+                        progress.stepBy(records - before);
+                        before = records;
+                    }
 
-                @Override
-                public void sourceFinished(IngestReport.Source s) {
-                    before = 0;
-                }
-            });
+                    @Override
+                    public void sourceFinished(IngestReport.Source s) {
+                        before = 0;
+                    }
+                });
+            }
         }
         if (!quiet) {
             for (IngestReport.Source s : report.sources()) {

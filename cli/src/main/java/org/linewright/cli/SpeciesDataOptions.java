@@ -32,6 +32,13 @@ public final class SpeciesDataOptions {
     private Path catalogPartition;
 
     /** The registry with the user's metadata and partition-sum tables attached. */
+    /** The same data as file names, for a registry built in another process (a Spark executor). */
+    public org.linewright.ingest.partition.SpeciesDataFiles files() {
+        return new org.linewright.ingest.partition.SpeciesDataFiles(
+                moleculeData == null ? null : moleculeData.toAbsolutePath().toString(), partitionSumSpecs,
+                catalogPartition == null ? null : catalogPartition.toAbsolutePath().toString());
+    }
+
     public MoleculeRegistry registry() throws IOException {
         return partitionSums().attachedRegistry();
     }

@@ -97,7 +97,7 @@ public final class SparkTableBuild implements AutoCloseable {
         return master;
     }
 
-    private static void checkReachable(String master) throws InputException {
+    static void checkReachable(String master) throws InputException {
         List<String> hostPorts = new ArrayList<>();
         if (master.startsWith("spark://")) {
             for (String hp : master.substring("spark://".length()).split(",")) {

@@ -44,17 +44,12 @@ public final class IngestPipeline {
         if (sources.isEmpty()) {
             throw new InputException("no line-list source given");
         }
-        Set<String> names = new HashSet<>();
         for (Path source : sources) {
             if (!Files.isRegularFile(source)) {
                 throw new InputException(source + ": no such file");
             }
-            String name = storeName(source);
-            if (!names.add(name)) {
-                throw new InputException(source + ": another source has the same file name '" + name
-                        + "'; the store names sources by file name, so ingest them into separate stores or rename one");
-            }
         }
+        checkNames(sources);
         Path rejectsPath = options.rejectsFileOrNull() != null ? options.rejectsFileOrNull()
                 : storeDir.resolve("rejects.tsv");
         List<IngestReport.Source> reports = new ArrayList<>();
@@ -132,6 +127,18 @@ public final class IngestPipeline {
             return LineSources.open(source, options.formatOrNull(), readOptions);
         } catch (NoSuchFileException e) {
             throw new InputException(source + ": no such file", e);
+        }
+    }
+
+    /** Refuses two sources with the same store name (file name): one would replace the other in the store. */
+    public static void checkNames(List<Path> sources) throws InputException {
+        Set<String> names = new HashSet<>();
+        for (Path source : sources) {
+            String name = storeName(source);
+            if (!names.add(name)) {
+                throw new InputException(source + ": another source has the same file name '" + name
+                        + "'; the store names sources by file name, so ingest them into separate stores or rename one");
+            }
         }
     }
 

@@ -1,6 +1,7 @@
 package org.linewright.ingest.store;
 
 import java.io.IOException;
+import java.io.InterruptedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -16,6 +17,10 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.TreeMap;
 import java.util.UUID;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.line.TextColumn;
@@ -27,7 +32,9 @@ import org.linewright.ingest.atomic.AtomicFile;
  *
  * <p>Lines arriving in ascending order (the usual case) stream straight into the file. From the first line
  * out of order on, lines are collected in runs of at most {@code runLines} lines, each sorted in memory and
- * spilled to a temporary Arrow file; {@link #commit} then merges the runs (k-way, ties in input order).
+ * spilled to a temporary Arrow file; {@link #commit} then merges the runs (k-way, ties in input order). A full
+ * run is sorted and written on a spill thread while the caller fills the next run (two run buffers, each
+ * holding only the stored columns, packed by row: {@link RunBuffer}).
  *
  * <p>Atomicity: everything is written under temporary names ({@code .partial-...}) in the store directory;
  * {@link #commit} forces the finished file to disk, renames it over the source's file (replacing an earlier
@@ -40,11 +47,14 @@ import org.linewright.ingest.atomic.AtomicFile;
  * not stored read back as NaN (numbers) or empty (text). Without a column set, every column is stored.
  *
  * <p>Use: {@code create}, {@code write} batches, {@code commit(counts)}; {@code close()} without commit
- * aborts. Not thread-safe.
+ * aborts. Not thread-safe (its spill thread is its own business).
  */
 public final class LineStoreWriter implements AutoCloseable {
-    /** Default maximum lines per sorted run (≈ 90 MB of heap for the run buffer). */
-    public static final int DEFAULT_RUN_LINES = 262_144;
+    /**
+     * Default maximum lines per sorted run. Two run buffers take turns (one fills while the other is sorted and
+     * written), each holding the stored columns only: ≈ 2 × 30 MB of heap for a 160-character source.
+     */
+    public static final int DEFAULT_RUN_LINES = 131_072;
     /** Lines per record batch written by the merge. */
     static final int OUTPUT_BATCH_LINES = 65_536;
     /** Lines per record batch of the temporary runs (small, so that the merge reads them in small steps). */
@@ -56,6 +66,8 @@ public final class LineStoreWriter implements AutoCloseable {
     private static final long BYTES_PER_LINE_ESTIMATE = 360;
     /** Default most runs merged at once (bounds open files and the merge's heap). */
     static final int DEFAULT_MERGE_FAN_IN = 128;
+    /** Rows the merge copies into a packed block before spreading them into the output columns (fits L2 cache). */
+    private static final int MERGE_BLOCK_ROWS = 1024;
     /** Smallest slice per run, whatever the number of runs (keeps reads efficient). */
     private static final int MIN_MERGE_SLICE_ROWS = 1024;
     private static final Set<LineColumn> ALL_COLUMNS = Set.of(LineColumn.values());
@@ -73,10 +85,16 @@ public final class LineStoreWriter implements AutoCloseable {
     /** The file being streamed (final when no line came out of order, else the first run). */
     private ArrowLineFileWriter stream;
     private final List<Path> runs = new ArrayList<>();
-    private LineBatch runBuffer;
-    private int[] orderA;
-    private int[] orderB;
+    /** The run being filled. */
+    private RunBuffer runBuffer;
+    /** The other run buffer (allocated with the second run): free, or being written by {@link #spiller}. */
+    private RunBuffer spare;
+    /** Batch the spill gathers sorted lines into; used by one spill at a time. */
     private LineBatch gather;
+    /** Sorts and writes full runs while the caller fills the next one. */
+    private ExecutorService spiller;
+    /** The spill in progress, if any. */
+    private Future<?> pendingSpill;
     private long linesWritten;
     private boolean done;
 
@@ -190,45 +208,96 @@ public final class LineStoreWriter implements AutoCloseable {
             stream.write(batch);
         } else {
             if (runBuffer == null) {
-                runBuffer = new LineBatch(runLines);
-                orderA = new int[runLines];
-                orderB = new int[runLines];
+                runBuffer = new RunBuffer(runLines, columns);
                 gather = new LineBatch(Math.min(runLines, SPILL_BATCH_LINES));
             }
             int from = 0;
             while (from < n) {
-                int take = Math.min(n - from, runLines - runBuffer.size);
-                runBuffer.copyRows(batch, from, runBuffer.size, take);
-                runBuffer.size += take;
-                from += take;
+                from += runBuffer.append(batch, from, n - from);
                 if (runBuffer.isFull()) {
-                    spillRun();
+                    spillInBackground();
                 }
             }
         }
         linesWritten += n;
     }
 
-    /** Sorts the run buffer (stable) and writes it as a temporary run file. */
-    private void spillRun() throws IOException {
-        int n = runBuffer.size;
-        if (n == 0) {
-            return;
-        }
-        int[] order = StableOrder.permutation(runBuffer.wavenumberCm1, n, orderA, orderB);
+    /**
+     * Hands the full run buffer to the spill thread and continues with the other buffer. At most one spill is in
+     * progress: this waits for the previous one (and reports its failure). Runs are listed in input order when
+     * handed over, so ties keep their input order in the merge.
+     */
+    private void spillInBackground() throws IOException {
+        awaitSpill();
+        RunBuffer full = runBuffer;
         Path path = partialPath("run");
         runs.add(path);
+        if (spare == null) {
+            spare = new RunBuffer(runLines, columns);
+        }
+        runBuffer = spare;
+        spare = full;
+        if (spiller == null) {
+            spiller = Executors.newSingleThreadExecutor(r -> {
+                Thread t = new Thread(r, "linewright-spill");
+                t.setDaemon(true);
+                return t;
+            });
+        }
+        pendingSpill = spiller.submit(() -> {
+            writeRun(full, path);
+            return null;
+        });
+    }
+
+    /** Sorts {@code buffer} (stable) and writes it as the temporary run file {@code path}; empties the buffer. */
+    private void writeRun(RunBuffer buffer, Path path) throws IOException {
         try (ArrowLineFileWriter run = new ArrowLineFileWriter(path, schemaMetadata, columns)) {
-            for (int from = 0; from < n; from += gather.capacity()) {
-                int m = Math.min(gather.capacity(), n - from);
-                gather.clear();
-                gatherRows(columns, new LineBatch[] {runBuffer}, null, order, from, m, gather, 0);
-                gather.size = m;
-                run.write(gather);
-            }
+            buffer.writeSorted(run, gather);
             run.finishTemporary();
         }
-        runBuffer.clear();
+    }
+
+    /** Waits for the spill in progress, if any, rethrowing its failure. */
+    private void awaitSpill() throws IOException {
+        Future<?> f = pendingSpill;
+        if (f == null) {
+            return;
+        }
+        pendingSpill = null;
+        try {
+            f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new InterruptedIOException("interrupted while writing a sorted run");
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof IOException io) {
+                throw io;
+            }
+            if (cause instanceof RuntimeException re) {
+                throw re;
+            }
+            if (cause instanceof Error err) {
+                throw err;
+            }
+            throw new IOException("writing a sorted run failed", cause);
+        }
+    }
+
+    /** Waits for the spill in progress and stops the spill thread; failures are left to the caller's own path. */
+    private void stopSpiller() {
+        if (pendingSpill != null) {
+            try {
+                awaitSpill();
+            } catch (IOException | RuntimeException ignored) {
+                // aborting anyway; the run files are deleted
+            }
+        }
+        if (spiller != null) {
+            spiller.shutdown();
+            spiller = null;
+        }
     }
 
     /**
@@ -295,11 +364,16 @@ public final class LineStoreWriter implements AutoCloseable {
             runs.add(0, stream.path());
             stream = null;
         }
-        spillRun();
+        awaitSpill();
+        stopSpiller();
+        if (runBuffer.size() > 0) {
+            Path last = partialPath("run");
+            runs.add(last);
+            writeRun(runBuffer, last);
+        }
         runBuffer = null;
+        spare = null;
         gather = null;
-        orderA = null;
-        orderB = null;
         // Intermediate passes while there are too many runs for one merge: each group of consecutive runs
         // becomes one run, in place, so the runs stay in input order and ties stay stable.
         LineBatch spillBatch = new LineBatch(SPILL_BATCH_LINES);
@@ -334,47 +408,166 @@ public final class LineStoreWriter implements AutoCloseable {
     }
 
     /**
-     * k-way merges the sorted run files into {@code out} (ties in run order). The merge order is found on the
-     * wavenumbers alone; the columns are then gathered column by column for a stretch of output rows (a stretch
-     * ends when the output batch is full or a run's slice must be refilled), so a line costs one pass per column
-     * rather than one copy call per column and per line.
+     * k-way merges the sorted run files into {@code out} (ties in run order), on two threads: one lane fills the
+     * numeric columns of each output batch, the other its text columns ({@link MergeLane}). Each lane reads the
+     * runs' wavenumbers and its own columns and finds the same merge order from the wavenumbers alone, so the
+     * lanes need to meet only once per output batch, and the result does not depend on timing.
      */
     private static void mergeInto(List<Path> runFiles, ArrowLineFileWriter out, LineBatch batch, LineColumn[] columns)
             throws IOException {
-        List<ArrowLineFile> files = new ArrayList<>();
-        for (Path run : runFiles) {
-            files.add(ArrowLineFile.open(run));
-        }
-        List<LineColumn> numeric = new ArrayList<>();
-        List<LineColumn> text = new ArrayList<>();
+        List<LineColumn> numericList = new ArrayList<>();
+        List<LineColumn> textList = new ArrayList<>();
         for (LineColumn c : columns) {
-            (c.kind() == LineColumn.Kind.TEXT ? text : numeric).add(c);
+            (c.kind() == LineColumn.Kind.TEXT ? textList : numericList).add(c);
         }
+        LineColumn[] numeric = numericList.toArray(new LineColumn[0]);
+        LineColumn[] text = textList.toArray(new LineColumn[0]);
+        int lanes = text.length > 0 ? 2 : 1;
+        // Each lane's scanner per run holds a slice of its lines (and its packed copy): together within MERGE_HEAP_BYTES.
+        int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS, MERGE_HEAP_BYTES
+                / ((long) lanes * runFiles.size() * (BYTES_PER_LINE_ESTIMATE + (long) numeric.length * Long.BYTES)));
         LineQuery query = LineQuery.all().withColumns(List.of(columns));
-        // Each run's scanner holds a slice of its lines: the slices together stay within MERGE_HEAP_BYTES.
-        int sliceRows = (int) Math.max(MIN_MERGE_SLICE_ROWS, MERGE_HEAP_BYTES / (files.size() * BYTES_PER_LINE_ESTIMATE));
-        int k = files.size();
-        FileScanner[] scanners = new FileScanner[k];
-        try {
-            for (int i = 0; i < k; i++) {
-                scanners[i] = new FileScanner(files.get(i), query, numeric.toArray(new LineColumn[0]),
-                        text.toArray(new LineColumn[0]), sliceRows);
+        ExecutorService helper = null;
+        try (MergeLane numbers = new MergeLane(runFiles, query, numeric, new LineColumn[0], sliceRows, batch.capacity());
+             MergeLane texts = lanes == 2 ? new MergeLane(runFiles, query, new LineColumn[0], text, sliceRows,
+                     batch.capacity()) : null) {
+            if (texts != null) {
+                helper = Executors.newSingleThreadExecutor(r -> {
+                    Thread t = new Thread(r, "linewright-merge");
+                    t.setDaemon(true);
+                    return t;
+                });
             }
-            LineBatch[] slices = new LineBatch[k];
-            for (int i = 0; i < k; i++) {
-                slices[i] = scanners[i].buf;
-            }
-            int capacity = batch.capacity();
-            int[] fromRun = new int[capacity];
-            int[] fromRow = new int[capacity];
-            // Current key of each run; +infinity once the run is exhausted.
-            double[] keys = new double[k];
-            for (int i = 0; i < k; i++) {
-                keys[i] = scanners[i].ensure() ? scanners[i].key() : Double.POSITIVE_INFINITY;
+            while (true) {
+                batch.clear();
+                Future<Integer> textRows = texts == null ? null : helper.submit(() -> texts.fill(batch));
+                int rows;
+                try {
+                    rows = numbers.fill(batch);
+                } catch (IOException | RuntimeException | Error e) {
+                    // The text lane must be done with its files before they are closed.
+                    if (textRows != null) {
+                        try {
+                            await(textRows);
+                        } catch (IOException | RuntimeException ignored) {
+                            // the first failure is the one reported
+                        }
+                    }
+                    throw e;
+                }
+                if (textRows != null && await(textRows) != rows) {
+                    throw new IllegalStateException("merge lanes disagree on the number of lines");
+                }
+                batch.size = rows;
+                if (rows > 0) {
+                    out.write(batch);
+                }
+                if (rows < batch.capacity()) {
+                    break;
+                }
             }
             batch.clear();
+        } finally {
+            if (helper != null) {
+                helper.shutdownNow();
+            }
+        }
+    }
+
+    private static int await(Future<Integer> f) throws IOException {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new InterruptedIOException("interrupted while merging sorted runs");
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof IOException io) {
+                throw io;
+            }
+            if (cause instanceof RuntimeException re) {
+                throw re;
+            }
+            if (cause instanceof Error err) {
+                throw err;
+            }
+            throw new IOException("merging sorted runs failed", cause);
+        }
+    }
+
+    /**
+     * One lane of the k-way merge: walks every run in merge order (found on the wavenumbers, ties to the older
+     * run) and fills its own columns of the output batches. Numeric columns: each run's slice is packed by row as
+     * it is loaded ({@link RunBuffer#pack}), taking a line copies its packed row (one or two cache lines), and
+     * blocks of taken rows are spread into the output columns. Text columns are gathered for a stretch of output
+     * rows (a stretch ends when the batch is full or a run's slice must be refilled).
+     */
+    private static final class MergeLane implements AutoCloseable {
+        private final LineColumn[] numeric;
+        private final LineColumn[] text;
+        private final int w;
+        private final FileScanner[] scanners;
+        private final LineBatch[] slices;
+        private final long[][] packed;
+        /** Current key of each run; +infinity once the run is exhausted. */
+        private final double[] keys;
+        private final int[] fromRun;
+        private final int[] fromRow;
+        private final long[] block;
+
+        MergeLane(List<Path> runFiles, LineQuery query, LineColumn[] numeric, LineColumn[] text, int sliceRows,
+                  int capacity) throws IOException {
+            this.numeric = numeric;
+            this.text = text;
+            this.w = numeric.length;
+            int k = runFiles.size();
+            scanners = new FileScanner[k];
+            slices = new LineBatch[k];
+            packed = new long[k][];
+            keys = new double[k];
+            try {
+                for (int i = 0; i < k; i++) {
+                    scanners[i] = new FileScanner(ArrowLineFile.open(runFiles.get(i)), query, numeric, text, sliceRows);
+                    slices[i] = scanners[i].buf;
+                    packed[i] = new long[scanners[i].buf.capacity() * w];
+                    keys[i] = load(i) ? scanners[i].key() : Double.POSITIVE_INFINITY;
+                }
+            } catch (IOException | RuntimeException e) {
+                close();
+                throw e;
+            }
+            fromRun = new int[capacity];
+            fromRow = new int[capacity];
+            block = new long[MERGE_BLOCK_ROWS * w];
+        }
+
+        /** Makes sure run {@code i} has a line at its position, packing a newly loaded slice; false when exhausted. */
+        private boolean load(int i) throws IOException {
+            FileScanner s = scanners[i];
+            if (s.pos < s.buf.size) {
+                return true;
+            }
+            if (!s.ensure()) {
+                return false;
+            }
+            if (w > 0) {
+                RunBuffer.pack(numeric, s.buf, packed[i]);
+            }
+            return true;
+        }
+
+        /**
+         * Fills rows {@code [0, n)} of this lane's columns of {@code batch} (text columns empty on entry) with the
+         * next merged lines; returns n, less than the batch's capacity only when the runs are exhausted.
+         */
+        int fill(LineBatch batch) throws IOException {
+            int capacity = batch.capacity();
+            int k = keys.length;
+            int filled = 0;
+            // Rows [filled, filled + stretch) are taken; the last blockRows of them wait in block.
             int stretch = 0;
-            while (true) {
+            int blockRows = 0;
+            while (filled + stretch < capacity) {
                 int best = -1;
                 double bestKey = Double.POSITIVE_INFINITY;
                 for (int i = 0; i < k; i++) {
@@ -388,36 +581,43 @@ public final class LineStoreWriter implements AutoCloseable {
                     break;
                 }
                 FileScanner s = scanners[best];
+                if (w > 0) {
+                    System.arraycopy(packed[best], s.pos * w, block, blockRows * w, w);
+                }
+                blockRows++;
                 fromRun[stretch] = best;
                 fromRow[stretch] = s.pos;
                 stretch++;
                 s.pos++;
+                if (blockRows == MERGE_BLOCK_ROWS) {
+                    RunBuffer.spread(numeric, block, blockRows, batch, filled + stretch - blockRows);
+                    blockRows = 0;
+                }
                 boolean refill = s.pos >= s.buf.size;
-                if (refill || batch.size + stretch == capacity) {
-                    // Gather before a slice is overwritten or when the output batch is full.
-                    gatherRows(columns, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
-                    batch.size += stretch;
+                if (refill || filled + stretch == capacity) {
+                    // Texts gathered before a slice is overwritten or when the output batch is full.
+                    RunBuffer.spread(numeric, block, blockRows, batch, filled + stretch - blockRows);
+                    blockRows = 0;
+                    gatherRows(text, slices, fromRun, fromRow, 0, stretch, batch, filled);
+                    filled += stretch;
                     stretch = 0;
-                    if (batch.size == capacity) {
-                        out.write(batch);
-                        batch.clear();
-                    }
                 }
                 if (refill) {
-                    keys[best] = s.ensure() ? s.key() : Double.POSITIVE_INFINITY;
+                    keys[best] = load(best) ? s.key() : Double.POSITIVE_INFINITY;
                 } else {
                     keys[best] = s.buf.wavenumberCm1[s.pos];
                 }
             }
             if (stretch > 0) {
-                gatherRows(columns, slices, fromRun, fromRow, 0, stretch, batch, batch.size);
-                batch.size += stretch;
+                RunBuffer.spread(numeric, block, blockRows, batch, filled + stretch - blockRows);
+                gatherRows(text, slices, fromRun, fromRow, 0, stretch, batch, filled);
+                filled += stretch;
             }
-            if (batch.size > 0) {
-                out.write(batch);
-                batch.clear();
-            }
-        } finally {
+            return filled;
+        }
+
+        @Override
+        public void close() throws IOException {
             IOException first = null;
             for (FileScanner s : scanners) {
                 if (s != null) {
@@ -491,18 +691,42 @@ public final class LineStoreWriter implements AutoCloseable {
         }
     }
 
+    /**
+     * Moves every source of the finished store {@code stagedStoreDir} (written by {@link #commit} there, e.g. by a
+     * task of a file-parallel ingest) into {@code storeDir}, replacing sources of the same names, and updates the
+     * index as a commit does: each file is renamed into place (same file system), then the index is replaced
+     * atomically under the store's lock. The files' bytes are not touched.
+     */
+    public static void adopt(Path storeDir, Path stagedStoreDir) throws IOException {
+        Files.createDirectories(storeDir);
+        TreeMap<String, StoreIndex.Entry> staged = StoreIndex.read(stagedStoreDir);
+        for (StoreIndex.Entry e : staged.values()) {
+            AtomicFile.rename(stagedStoreDir.resolve(e.fileName()), storeDir.resolve(e.fileName()));
+        }
+        StoreIndex.syncDirectory(storeDir);
+        StoreIndex.locked(storeDir, () -> {
+            TreeMap<String, StoreIndex.Entry> entries = StoreIndex.read(storeDir);
+            entries.putAll(staged);
+            StoreIndex.write(storeDir, entries);
+            return null;
+        });
+    }
+
     /** Discards everything written so far; the store is left as it was. Idempotent. */
     public void abort() {
         if (done) {
             return;
         }
         done = true;
+        // A run being written must be closed before the run files are deleted.
+        stopSpiller();
         if (stream != null) {
             stream.discard();
             stream = null;
         }
         deleteRuns();
         runBuffer = null;
+        spare = null;
     }
 
     /** Aborts unless committed. */
