@@ -617,6 +617,22 @@ final class FastPlanner {
                 lorentzError = lorentz.stencilSize() == 1 ? 0
                         : FastErrorModel.Planner.lorentzError(lorentz.logStep(), ratio, perGamma);
             }
+            if (dopplerError + lorentzError > budget && lorentzError < budget && doppler.stencilSize() > 1
+                    && kind != Family.LORENTZ_ONLY && kind != Family.LORENTZ_DOMINATED) {
+                // each axis was chosen for half the budget; where the Lorentz axis (a floored stencil measured at
+                // the family's own smallest αD) takes more than its half, the Doppler axis gets what it left
+                FastErrorModel.Form perAlpha = form.rescaled(f.alphaMax);
+                double gaussian = f.gammaMin / f.alphaMax;
+                double lorentzian = f.gammaMax / f.alphaMax;
+                double rest = budget - lorentzError;
+                double step = Math.min(
+                        FastErrorModel.Planner.dopplerStep(gaussian, rest, MIN_LOG_STEP, MAX_LOG_STEP, perAlpha),
+                        FastErrorModel.Planner.dopplerStep(lorentzian, rest, MIN_LOG_STEP, MAX_LOG_STEP, perAlpha));
+                doppler = WidthAxis.geometric(f.alphaMin, f.alphaMax, step, 2);
+                dopplerError = doppler.stencilSize() == 1 ? 0
+                        : Math.max(FastErrorModel.Planner.dopplerError(doppler.logStep(), gaussian, perAlpha),
+                        FastErrorModel.Planner.dopplerError(doppler.logStep(), lorentzian, perAlpha));
+            }
             if (dopplerError + lorentzError > budget) {
                 return index;
             }
