@@ -347,16 +347,30 @@ public final class GridTargets {
         }
     }
 
+    /**
+     * Block length of the 10×10 table: a third of the grid (three blocks per (p, T), 2¹⁹-point transforms), which a
+     * plan sets with {@code [build] block_points}. The engine's own choice (0: seven blocks of 2¹⁸-point transforms,
+     * each spending 50 of its ≈ 131 cm⁻¹ on the ±25 cm⁻¹ padding) keeps incremental rebuilds finer and is measured
+     * too ({@code -Dlinewright.benchmark.blockPoints=0}; docs/performance.md gives both figures).
+     */
+    static final int TABLE_BLOCK_POINTS = 333_334;
+
     private static Path writePlan(Path dir, long lines, double[] pressuresBar, double[] temperaturesK)
             throws IOException {
         return writePlan(dir, SyntheticLines.FIRST_CM1 + lines * SyntheticLines.SPACING_CM1,
-                SyntheticLines.SPACING_CM1, pressuresBar, temperaturesK);
+                SyntheticLines.SPACING_CM1, pressuresBar, temperaturesK,
+                Integer.getInteger("linewright.benchmark.blockPoints", TABLE_BLOCK_POINTS));
     }
 
     private static Path writePlan(Path dir, double toCm1, double stepCm1, double[] pressuresBar,
                                   double[] temperaturesK) throws IOException {
+        return writePlan(dir, toCm1, stepCm1, pressuresBar, temperaturesK,
+                Integer.getInteger("linewright.benchmark.blockPoints", 0));
+    }
+
+    private static Path writePlan(Path dir, double toCm1, double stepCm1, double[] pressuresBar,
+                                  double[] temperaturesK, int blockPoints) throws IOException {
         Path plan = dir.resolve("plan.toml");
-        int blockPoints = Integer.getInteger("linewright.benchmark.blockPoints", 0);
         Files.writeString(plan, String.format(Locale.ROOT, """
                 [lines]
                 sources = ["synthetic-co.par"]
