@@ -11,6 +11,7 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import org.linewright.grid.engine.ParallelTasks;
+import org.linewright.grid.table.SigmaTableCells;
 import org.linewright.ingest.InputException;
 import org.linewright.ingest.ToolVersion;
 import org.linewright.ingest.store.SourceMetadata;

@@ -1,4 +1,4 @@
-package org.linewright.grid.ktable;
+package org.linewright.grid.table;
 
 import io.jhdf.HdfFile;
 import io.jhdf.api.Attribute;
@@ -18,13 +18,13 @@ import org.apache.arrow.vector.Float4Vector;
 import org.apache.arrow.vector.Float8Vector;
 import org.apache.arrow.vector.VectorSchemaRoot;
 import org.apache.arrow.vector.ipc.ArrowFileReader;
-import org.linewright.grid.table.TableFormat;
-import org.linewright.grid.table.TableWriter;
+import org.linewright.grid.plan.TablePlan;
 import org.linewright.ingest.InputException;
 
 /**
  * Reads a σ table (either format of {@link TableWriter}) one (p, T) cell at a time, so memory holds one σ row and
- * not the table: Arrow record batches in file order, HDF5 hyperslabs [p][T][:] of the σ dataset.
+ * not the table: Arrow record batches in file order, HDF5 hyperslabs [p][T][:] of the σ dataset. The one reader of
+ * table files: {@link CrossSectionTable} keeps the rows it hands over.
  */
 public final class SigmaTableCells {
     /** Receives the cells in the order p-major, T-minor, each σ row for as long as the call lasts. */
@@ -40,9 +40,10 @@ public final class SigmaTableCells {
      * @param pressureBar   the pressure axis, in the order of the cells
      * @param temperatureK  the temperature axis, in the order of the cells
      * @param metadata      provenance metadata (keys without prefix)
+     * @param precision     σ's element type in the file
      */
     public record Header(double[] wavenumberCm1, double[] pressureBar, double[] temperatureK,
-                         Map<String, String> metadata) {
+                         Map<String, String> metadata, TablePlan.Precision precision) {
     }
 
     private SigmaTableCells() {
@@ -121,7 +122,8 @@ public final class SigmaTableCells {
                 throw new InputException(file + ": " + batches + " record batches for " + np + " pressures and "
                         + nt + " temperatures (expected one batch per (p, T))");
             }
-            headerSeen.accept(new Header(nu, toArray(pressures), toArray(temperatures), metadata));
+            headerSeen.accept(new Header(nu, toArray(pressures), toArray(temperatures), metadata,
+                    sv instanceof Float4Vector ? TablePlan.Precision.FLOAT32 : TablePlan.Precision.FLOAT64));
             double[] row = new double[nu.length];
             for (int b = 0; b < batches; b++) {
                 reader.loadRecordBatch(reader.getRecordBlocks().get(b));
@@ -173,7 +175,8 @@ public final class SigmaTableCells {
                 Object v = e.getValue().getData();
                 metadata.put(e.getKey(), v instanceof String s ? s : String.valueOf(v));
             }
-            headerSeen.accept(new Header(nu, p, t, metadata));
+            headerSeen.accept(new Header(nu, p, t, metadata, sigma.getJavaType() == float.class
+                    ? TablePlan.Precision.FLOAT32 : TablePlan.Precision.FLOAT64));
             double[] row = new double[nu.length];
             for (int i = 0; i < p.length; i++) {
                 for (int j = 0; j < t.length; j++) {
