@@ -265,24 +265,7 @@ public final class LineStoreWriter implements AutoCloseable {
             return;
         }
         pendingSpill = null;
-        try {
-            f.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new InterruptedIOException("interrupted while writing a sorted run");
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof IOException io) {
-                throw io;
-            }
-            if (cause instanceof RuntimeException re) {
-                throw re;
-            }
-            if (cause instanceof Error err) {
-                throw err;
-            }
-            throw new IOException("writing a sorted run failed", cause);
-        }
+        await(f, "writing a sorted run");
     }
 
     /** Waits for the spill in progress and stops the spill thread; failures are left to the caller's own path. */
@@ -475,11 +458,16 @@ public final class LineStoreWriter implements AutoCloseable {
     }
 
     private static int await(Future<Integer> f) throws IOException {
+        return await(f, "merging sorted runs");
+    }
+
+    /** The result of a task of this writer's threads, its failure rethrown as itself (IOException, unchecked). */
+    private static <T> T await(Future<T> f, String what) throws IOException {
         try {
             return f.get();
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-            throw new InterruptedIOException("interrupted while merging sorted runs");
+            throw new InterruptedIOException("interrupted while " + what);
         } catch (ExecutionException e) {
             Throwable cause = e.getCause();
             if (cause instanceof IOException io) {
@@ -491,7 +479,7 @@ public final class LineStoreWriter implements AutoCloseable {
             if (cause instanceof Error err) {
                 throw err;
             }
-            throw new IOException("merging sorted runs failed", cause);
+            throw new IOException(what + " failed", cause);
         }
     }
 
