@@ -52,6 +52,11 @@ final class FastPlanner {
     static final int MIN_DOPPLER_NODES_SHARING = 3;
     /** Round-off allowance 64·2⁻⁵²·log₂L/10⁻⁶ at the largest L accepted. */
     static final double ROUND_OFF_ALLOWANCE = 64 * 0x1.0p-52 * 29 / FastErrorModel.DEPTH;
+    /**
+     * Largest ratio, per unit of tolerance, of a transformed line's peak to max σ on the grid: at it the round-off
+     * allowance times the ratio is a quarter of the tolerance (≈ 610 at ε = 10⁻³).
+     */
+    static final double MAX_PEAK_RATIO_PER_TOLERANCE = 0.25 / ROUND_OFF_ALLOWANCE;
     /** Points of the position stencil, and how many of them lie below the line's lower neighbour. */
     static final int P = FastErrorModel.POSITION_POINTS;
     static final int SHIFT = P / 2 - 1;
@@ -132,7 +137,14 @@ final class FastPlanner {
 
         cutoffCm1 = Double.isNaN(b.edgeCutoffCm1) ? Double.POSITIVE_INFINITY : b.edgeCutoffCm1;
         removePedestal = wings.removePedestal() && Double.isFinite(cutoffCm1);
-        depth = FastErrorModel.DEPTH / peakRatio();
+        double lowerSigma = lowerBoundOfMaxSigma();
+        int strong = markRoundOffDominant(b.lineFamily, lowerSigma);
+        if (strong > 0) {
+            b.directLines += strong;
+            b.directReason = strong + " lines whose peaks exceed " + Math.round(MAX_PEAK_RATIO_PER_TOLERANCE * tolerance)
+                    + " times max sigma on the grid (the transform's round-off would not keep the tolerance)";
+        }
+        depth = FastErrorModel.DEPTH / peakRatio(lowerSigma, b.lineFamily);
         b.effectiveDepth = depth;
 
         // first all lines with αD > 0 in one family, to choose the internal step and the split
@@ -147,7 +159,8 @@ final class FastPlanner {
         if (worstPositionError(stats, h) > tolerance / 4) {
             int unresolved = markUnresolved(b.lineFamily, h, tolerance / 4);
             b.directLines += unresolved;
-            b.directReason = unresolved + " lines narrower than the finest internal grid (step " + h + " cm-1)";
+            b.directReason = (b.directReason.isEmpty() ? "" : b.directReason + "; ") + unresolved
+                    + " lines narrower than the finest internal grid (step " + h + " cm-1)";
             stats = gather(b.lineFamily);
         }
         b.oversampling = m;
@@ -389,30 +402,25 @@ final class FastPlanner {
     }
 
     /**
-     * max S·V(0) over the transformed lines divided by a lower bound of max σ on the grid — the largest
-     * S·(V(d) − pedestal) of any line, d the distance from its centre to the nearest grid point — at least 1. When
-     * the grid samples line peaks coarsely, 10⁻⁶·max σ is below 10⁻⁶ of the strongest peak by this factor, and
-     * the measures' depth is lowered by it.
+     * A lower bound of max σ on the grid: the larger of the largest S·(V(d) − pedestal) of any line (d the distance
+     * from its centre to the nearest grid point) and σ itself at three probe points — both ends of the grid and the
+     * grid point nearest that line — summed over every line without the χ factor that reaches them (terms are never
+     * negative, so leaving the χ lines out keeps it a lower bound). The probes matter where the strongest lines lie
+     * outside the grid (a block beside a band): there many lines' wings add up to max σ, and a single line's wing
+     * would make the bound far too low.
      */
-    private double peakRatio() {
+    private double lowerBoundOfMaxSigma() {
         double[] points = grid.pointsCm1();
         int n = points.length;
-        double upper = 0;
         double lower = 0;
+        int lowerPoint = 0;
         for (int i = 0; i < lines.count; i++) {
             double a = lines.dopplerCm1[i];
             double g = lines.lorentzCm1[i];
             double s = lines.strength[i];
             // V(0) ≤ min(1/(πγL), √(ln2/π)/αD) (the peaks of the pure shapes, common practice): the profile is
-            // evaluated only for lines whose bound could raise either figure
-            double bound = s * Math.min(g > 0 ? 1 / (Math.PI * g) : Double.POSITIVE_INFINITY,
-                    a > 0 ? PEAK_GAUSSIAN / a : Double.POSITIVE_INFINITY);
-            if (bound <= upper && bound <= lower) {
-                continue;
-            }
-            double peak = s * org.linewright.broadening.voigt.VoigtProfile.value(0, a, g);
-            upper = Math.max(upper, peak);
-            if (peak <= lower) {
+            // evaluated only for lines whose bound could raise the figure
+            if (peakBound(i) <= lower) {
                 continue;
             }
             double c = lines.centerCm1[i];
@@ -428,9 +436,84 @@ final class FastPlanner {
                 continue;
             }
             double pedestal = removePedestal ? org.linewright.broadening.voigt.VoigtProfile.value(cutoffCm1, a, g) : 0;
-            lower = Math.max(lower, s * (org.linewright.broadening.voigt.VoigtProfile.value(d, a, g) - pedestal));
+            double v = s * (org.linewright.broadening.voigt.VoigtProfile.value(d, a, g) - pedestal);
+            if (v > lower) {
+                lower = v;
+                lowerPoint = k < n && (k == 0 || points[k] - c <= c - points[k - 1]) ? k : k - 1;
+            }
         }
-        return lower > 0 ? Math.max(1, upper / lower) : 1;
+        lower = Math.max(lower, Math.max(sigmaLowerBound(points[0]), sigmaLowerBound(points[n - 1])));
+        return Math.max(lower, sigmaLowerBound(points[lowerPoint]));
+    }
+
+    /** min(1/(πγL), √(ln2/π)/αD)·S ≥ S·V(0) of line i (the peaks of the pure shapes, common practice). */
+    private double peakBound(int i) {
+        double a = lines.dopplerCm1[i];
+        double g = lines.lorentzCm1[i];
+        return lines.strength[i] * Math.min(g > 0 ? 1 / (Math.PI * g) : Double.POSITIVE_INFINITY,
+                a > 0 ? PEAK_GAUSSIAN / a : Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * Marks as summed directly the lines whose peak S·V(0) exceeds {@link #MAX_PEAK_RATIO_PER_TOLERANCE}·ε times
+     * {@code lowerSigma}: the transforms' round-off, 64·2⁻⁵²·log₂L of the largest peak on a ring, would exceed ε/4
+     * at the criterion's depth (10⁻⁶·max σ) for such a peak even at the largest L. They are lines whose peaks the
+     * grid does not hold (beside the grid, or far narrower than its step); their count.
+     */
+    private int markRoundOffDominant(byte[] lineFamily, double lowerSigma) {
+        if (!(lowerSigma > 0)) {
+            return 0;
+        }
+        double limit = MAX_PEAK_RATIO_PER_TOLERANCE * tolerance * lowerSigma;
+        int marked = 0;
+        for (int i = 0; i < lines.count; i++) {
+            if (lineFamily[i] == FastPlan.DIRECT || peakBound(i) <= limit) {
+                continue;
+            }
+            double peak = lines.strength[i]
+                    * org.linewright.broadening.voigt.VoigtProfile.value(0, lines.dopplerCm1[i], lines.lorentzCm1[i]);
+            if (peak > limit) {
+                lineFamily[i] = FastPlan.DIRECT;
+                marked++;
+            }
+        }
+        return marked;
+    }
+
+    /**
+     * max S·V(0) over the lines not summed directly, divided by {@code lowerSigma} (a lower bound of max σ on the
+     * grid), at least 1. When the grid samples line peaks coarsely or sees only wings, 10⁻⁶·max σ is below 10⁻⁶ of
+     * the strongest transformed peak by this factor, and the measures' depth is lowered by it.
+     */
+    private double peakRatio(double lowerSigma, byte[] lineFamily) {
+        double upper = 0;
+        for (int i = 0; i < lines.count; i++) {
+            if (lineFamily[i] == FastPlan.DIRECT || peakBound(i) <= upper) {
+                continue;
+            }
+            upper = Math.max(upper, lines.strength[i]
+                    * org.linewright.broadening.voigt.VoigtProfile.value(0, lines.dopplerCm1[i], lines.lorentzCm1[i]));
+        }
+        return lowerSigma > 0 ? Math.max(1, upper / lowerSigma) : 1;
+    }
+
+    /**
+     * σ at {@code xCm1} from the lines without the χ factor within the cutoff of it (each S·(V(d) − pedestal), never
+     * negative): a lower bound of σ there.
+     */
+    private double sigmaLowerBound(double xCm1) {
+        double sum = 0;
+        for (int i = 0; i < lines.count; i++) {
+            double d = Math.abs(xCm1 - lines.centerCm1[i]);
+            if (d > cutoffCm1 || lines.chi[i]) {
+                continue;
+            }
+            double a = lines.dopplerCm1[i];
+            double g = lines.lorentzCm1[i];
+            double pedestal = removePedestal ? org.linewright.broadening.voigt.VoigtProfile.value(cutoffCm1, a, g) : 0;
+            sum += lines.strength[i] * Math.max(0, org.linewright.broadening.voigt.VoigtProfile.value(d, a, g) - pedestal);
+        }
+        return sum;
     }
 
     /** Marks the lines whose own position error at step h exceeds the share as summed directly; their count. */
