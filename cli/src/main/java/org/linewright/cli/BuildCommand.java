@@ -125,6 +125,7 @@ public final class BuildCommand implements Callable<Integer> {
                 }
                 out.println("  compute " + cell);
             }
+            printIncremental(out, report.incremental(), "would be");
             return ExitCodes.OK;
         }
         KTableBuilder.Report ktableReport = ktable.isEmpty() ? null
@@ -136,6 +137,7 @@ public final class BuildCommand implements Callable<Integer> {
         if (!quiet) {
             out.printf(Locale.ROOT, "blocks: %d computed, %d reused (of %d); %d raw line list(s) ingested%n",
                     report.computed(), report.reused(), report.cells(), report.ingested());
+            printIncremental(out, report.incremental(), "were");
             out.printf(Locale.ROOT, "lines: %d in the stores, %d used (summed over blocks)%n", report.linesInStores(),
                     report.linesUsed());
             for (Map.Entry<String, Long> e : report.counts().entrySet()) {
@@ -166,5 +168,21 @@ public final class BuildCommand implements Callable<Integer> {
             }
         }
         return ExitCodes.OK;
+    }
+
+    /** The rebuild's line changes and how the computed blocks were (or would be) obtained. */
+    private static void printIncremental(java.io.PrintWriter out, BuildReport.Incremental inc, String verb) {
+        if (inc.mode().isEmpty()) {
+            return;
+        }
+        if (inc.cellsUpdated() > 0) {
+            out.printf(Locale.ROOT, "changed lines: %d removed, %d added; %d block(s) %s updated from them, %d "
+                    + "computed afresh; estimated cost %.3g of a full build (profile evaluations)%n",
+                    inc.linesRemoved(), inc.linesAdded(), inc.cellsUpdated(), verb, inc.cellsRecomputed(),
+                    inc.relativeCost());
+        } else if (inc.cellsRecomputed() > 0) {
+            out.printf(Locale.ROOT, "%d block(s) %s computed afresh (%s); estimated cost %.3g of a full build%n",
+                    inc.cellsRecomputed(), verb, inc.mode(), inc.relativeCost());
+        }
     }
 }

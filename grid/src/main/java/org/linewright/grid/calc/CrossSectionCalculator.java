@@ -183,6 +183,15 @@ public final class CrossSectionCalculator {
      */
     public CrossSectionResult compute(CrossSectionRequest request, CrossSectionEngine engine, double lowCm1,
                                       double highCm1, ProgressListener l) {
+        return compute(request, engine, lowCm1, highCm1, l, null);
+    }
+
+    /**
+     * As {@link #compute(CrossSectionRequest, CrossSectionEngine, double, double, ProgressListener)}, summing only
+     * the lines {@code filter} takes (null: every line); the statistics then count only those.
+     */
+    public CrossSectionResult compute(CrossSectionRequest request, CrossSectionEngine engine, double lowCm1,
+                                      double highCm1, ProgressListener l, LineFilter filter) {
         if (!(lowCm1 < highCm1)) {
             throw new IllegalArgumentException("line range [" + lowCm1 + ", " + highCm1 + ") cm-1 is empty or NaN");
         }
@@ -199,10 +208,19 @@ public final class CrossSectionCalculator {
             try {
                 if (!preparation.readsNothing()) {
                     LineQuery query = preparation.query();
+                    LineFilter.Selection selection = null;
+                    if (filter != null) {
+                        // the filter knows lines by all their numeric columns
+                        java.util.LinkedHashSet<org.linewright.ingest.line.LineColumn> columns =
+                                new java.util.LinkedHashSet<>(query.columns());
+                        columns.addAll(org.linewright.ingest.line.NumericRowBytes.COLUMNS);
+                        query = query.withColumns(List.copyOf(columns));
+                        selection = filter.start();
+                    }
                     int depth = threads == 1 ? 1 : BATCHES_AHEAD_PER_THREAD * threads;
-                    for (LineStore store : stores) {
-                        open.add(new StoreFeed(store.cursor(query), preparation, statistics, workers, depth,
-                                freeBatches, chunkLines));
+                    for (int s = 0; s < stores.size(); s++) {
+                        open.add(new StoreFeed(stores.get(s).cursor(query), preparation, statistics, workers, depth,
+                                freeBatches, chunkLines, selection, s));
                     }
                 }
                 StoreMerge.merge(open.toArray(new StoreFeed[0]), chunkLines, router, sigma, preparation, statistics,

@@ -6,6 +6,7 @@ import java.util.Queue;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.Executor;
 import java.util.concurrent.atomic.AtomicBoolean;
+import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.store.LineCursor;
 
 /**
@@ -30,6 +31,10 @@ final class StoreFeed {
     private PreparedBatch current;
     private int pos;
     private boolean exhausted;
+    /** The lines to keep (null: every line) and this store's index for it. */
+    private final LineFilter.Selection selection;
+    private final int storeIndex;
+    private final LineBatch filterScratch;
 
     /**
      * @param workers     worker threads, or null for none
@@ -39,6 +44,16 @@ final class StoreFeed {
      */
     StoreFeed(LineCursor cursor, LinePreparation preparation, CrossSectionStatistics statistics, Executor workers,
               int depth, Queue<PreparedBatch> freeBatches, int chunkLines) {
+        this(cursor, preparation, statistics, workers, depth, freeBatches, chunkLines, null, 0);
+    }
+
+    /** As above, keeping only the lines {@code selection} takes of store {@code storeIndex} (null: every line). */
+    StoreFeed(LineCursor cursor, LinePreparation preparation, CrossSectionStatistics statistics, Executor workers,
+              int depth, Queue<PreparedBatch> freeBatches, int chunkLines, LineFilter.Selection selection,
+              int storeIndex) {
+        this.selection = selection;
+        this.storeIndex = storeIndex;
+        this.filterScratch = selection == null ? null : new LineBatch(chunkLines);
         this.cursor = cursor;
         this.preparation = preparation;
         this.statistics = statistics;
@@ -125,7 +140,11 @@ final class StoreFeed {
             }
             b.reset();
             try {
-                if (!cursor.read(b.lines)) {
+                boolean read = cursor.read(b.lines);
+                while (read && selection != null && selection.keep(storeIndex, b.lines, filterScratch) == 0) {
+                    read = cursor.read(b.lines);
+                }
+                if (!read) {
                     exhausted = true;
                     freeBatches.add(b);
                     return;

@@ -1,5 +1,10 @@
 package org.linewright.grid.manifest;
 
+import java.util.zip.Deflater;
+import java.util.zip.DeflaterOutputStream;
+import java.util.zip.InflaterInputStream;
+import org.linewright.grid.engine.exact.FixedPointSums;
+
 import java.io.BufferedInputStream;
 import java.io.BufferedOutputStream;
 import java.io.DataInputStream;
@@ -31,6 +36,9 @@ import org.linewright.ingest.InputException;
 public final class BlockStore {
     private static final long MAGIC = 0x4C57424C4B303032L; // "LWBLK002"
     private static final String SUFFIX = ".blk";
+    /** Exact sums of a block, beside its file: magic {@code LWSUM001}, then {@link FixedPointSums#write}, deflated. */
+    private static final String SUMS_SUFFIX = ".sum";
+    private static final long SUMS_MAGIC = 0x4C5753554D303031L; // "LWSUM001"
 
     private final Path dir;
 
@@ -47,6 +55,10 @@ public final class BlockStore {
 
     /** Saves a block atomically. */
     public void save(String hash, BlockResult result) throws IOException {
+        if (result.exactSumsOrNull() != null) {
+            // first: a block file under its final name then always has its sums beside it
+            saveSums(hash, result.exactSumsOrNull());
+        }
         Path tmp = AtomicFile.temporaryFor(file(hash));
         try {
             try (OutputStream os = Files.newOutputStream(tmp);
@@ -73,6 +85,46 @@ public final class BlockStore {
             // No fsync per block (it would cost more than computing a small block): a stopped build keeps every
             // renamed block; after an operating-system crash a damaged block is reported by load().
             AtomicFile.commitWithoutSync(tmp, file(hash));
+        } finally {
+            Files.deleteIfExists(tmp);
+        }
+    }
+
+    /**
+     * The exact sums saved with a block, or null when there are none (an engine without them, or the file was
+     * deleted: then a rebuild recomputes the block instead of updating it).
+     */
+    public FixedPointSums loadSums(String hash) throws IOException {
+        Path f = sumsFile(hash);
+        if (!Files.isRegularFile(f)) {
+            return null;
+        }
+        try (InputStream is = Files.newInputStream(f);
+             DataInputStream in = new DataInputStream(new BufferedInputStream(new InflaterInputStream(is), 1 << 16))) {
+            if (in.readLong() != SUMS_MAGIC) {
+                throw new InputException(f + ": not a sums file of this version (delete it to recompute the block)");
+            }
+            return FixedPointSums.read(in);
+        } catch (java.io.EOFException | java.util.zip.ZipException e) {
+            throw new InputException(f + ": damaged sums file (delete it to recompute the block)");
+        }
+    }
+
+    /** True when the block of this hash has exact sums on disk. */
+    public boolean hasSums(String hash) {
+        return Files.isRegularFile(sumsFile(hash));
+    }
+
+    private void saveSums(String hash, FixedPointSums sums) throws IOException {
+        Path tmp = AtomicFile.temporaryFor(sumsFile(hash));
+        try {
+            try (OutputStream os = Files.newOutputStream(tmp);
+                 DataOutputStream out = new DataOutputStream(new BufferedOutputStream(
+                         new DeflaterOutputStream(os, new Deflater(Deflater.BEST_SPEED), 1 << 16), 1 << 16))) {
+                out.writeLong(SUMS_MAGIC);
+                sums.write(out);
+            }
+            AtomicFile.commitWithoutSync(tmp, sumsFile(hash));
         } finally {
             Files.deleteIfExists(tmp);
         }
@@ -127,7 +179,8 @@ public final class BlockStore {
         try (DirectoryStream<Path> files = Files.newDirectoryStream(dir)) {
             for (Path f : files) {
                 String name = f.getFileName().toString();
-                String hash = name.endsWith(SUFFIX) ? name.substring(0, name.length() - SUFFIX.length()) : null;
+                String hash = name.endsWith(SUFFIX) ? name.substring(0, name.length() - SUFFIX.length())
+                        : name.endsWith(SUMS_SUFFIX) ? name.substring(0, name.length() - SUMS_SUFFIX.length()) : null;
                 if (name.startsWith(AtomicFile.PARTIAL) || hash != null && !keep.contains(hash)) {
                     Files.deleteIfExists(f);
                     removed++;
@@ -135,6 +188,10 @@ public final class BlockStore {
             }
         }
         return removed;
+    }
+
+    private Path sumsFile(String hash) {
+        return dir.resolve(hash + SUMS_SUFFIX);
     }
 
     private Path file(String hash) {

@@ -11,23 +11,23 @@ import java.util.List;
 import org.linewright.ingest.line.Broadener;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.LineColumn;
+import org.linewright.ingest.line.NumericRowBytes;
 import org.linewright.ingest.store.LineCursor;
 import org.linewright.ingest.store.LineQuery;
 import org.linewright.ingest.store.LineStore;
 
 /**
  * The content hash of the lines within reach of each block: SHA-256 over, for every store in order and every
- * line of it in the store's order whose centre lies in the block's reach, all numeric columns of the line model
- * ({@link LineColumn} kinds INT, LONG and DOUBLE, in declaration order, little-endian; text columns such as
- * quantum labels do not affect σ and are left out), preceded by the store's position. Computed in one pass over
+ * line of it in the store's order whose centre lies in the block's reach, its {@link NumericRowBytes} (what σ
+ * depends on), preceded by the store's position. Computed in one pass over
  * each store: lines arrive in wavenumber order, so the blocks a line reaches are a window that only moves
  * forward.
  */
 public final class LineReachHasher {
-    private static final List<LineColumn> NUMERIC = numericColumns();
+    private static final List<LineColumn> NUMERIC = NumericRowBytes.COLUMNS;
     private static final int BATCH_ROWS = 8192;
     /** Bytes of one line's numeric columns (INT 4, LONG and DOUBLE 8). */
-    private static final int ROW_BYTES = rowBytes();
+    private static final int ROW_BYTES = NumericRowBytes.ROW_BYTES;
 
     private LineReachHasher() {
     }
@@ -73,7 +73,7 @@ public final class LineReachHasher {
                     if (rows.length < n * rowBytes) {
                         rows = new byte[n * rowBytes];
                     }
-                    serialize(batch, n, ByteBuffer.wrap(rows).order(ByteOrder.LITTLE_ENDIAN), rowBytes);
+                    NumericRowBytes.serialize(batch, n, ByteBuffer.wrap(rows).order(ByteOrder.LITTLE_ENDIAN));
                     double[] nu = batch.wavenumberCm1;
                     while (first < blocks && layout.lineMaxCm1(first) < nu[0]) {
                         first++;
@@ -132,39 +132,6 @@ public final class LineReachHasher {
         return max;
     }
 
-    /**
-     * Writes rows 0..n−1 of {@code batch} one after the other, each the numeric columns in declaration order,
-     * little-endian, column by column (one pass over each column array).
-     */
-    private static void serialize(LineBatch batch, int n, ByteBuffer out, int rowBytes) {
-        int offset = 0;
-        for (LineColumn c : NUMERIC) {
-            switch (c.kind()) {
-                case INT -> {
-                    int[] a = c.ints(batch);
-                    for (int i = 0, at = offset; i < n; i++, at += rowBytes) {
-                        out.putInt(at, a[i]);
-                    }
-                    offset += Integer.BYTES;
-                }
-                case LONG -> {
-                    long[] a = c.longs(batch);
-                    for (int i = 0, at = offset; i < n; i++, at += rowBytes) {
-                        out.putLong(at, a[i]);
-                    }
-                    offset += Long.BYTES;
-                }
-                default -> {
-                    double[] a = c.doubles(batch);
-                    for (int i = 0, at = offset; i < n; i++, at += rowBytes) {
-                        out.putDouble(at, a[i]);
-                    }
-                    offset += Double.BYTES;
-                }
-            }
-        }
-    }
-
     /** First index in [from, to) of ascending {@code x} with x ≥ v ({@code to} if none). */
     private static int firstAtOrAbove(double[] x, int from, int to, double v) {
         int lo = from;
@@ -193,26 +160,6 @@ public final class LineReachHasher {
             }
         }
         return lo;
-    }
-
-    private static int rowBytes() {
-        int n = 0;
-        for (LineColumn c : NUMERIC) {
-            n += c.kind() == LineColumn.Kind.INT ? Integer.BYTES : Long.BYTES;
-        }
-        return n;
-    }
-
-    private static List<LineColumn> numericColumns() {
-        List<LineColumn> out = new ArrayList<>();
-        for (LineColumn c : LineColumn.values()) {
-            // The source line number says where a line was in its file, not what it is: an edit that inserts
-            // a line must not change the hash of every line after it.
-            if (c.kind() != LineColumn.Kind.TEXT && c != LineColumn.SOURCE_LINE) {
-                out.add(c);
-            }
-        }
-        return List.copyOf(out);
     }
 
     static MessageDigest sha256() {

@@ -25,6 +25,30 @@ public interface BlockCalculator extends AutoCloseable {
                         double lineMaxCm1) throws IOException;
 
     /**
+     * Whether {@link #compute} gives exact sums ({@link BlockResult#exactSumsOrNull}), so that a block can be
+     * updated from changed lines alone ({@link #computeSelected}, {@link #statistics}).
+     */
+    default boolean keepsExactSums() {
+        return false;
+    }
+
+    /**
+     * As {@link #compute}, over only the lines {@code filter} takes, with exact sums (for {@link #keepsExactSums}
+     * calculators).
+     */
+    default BlockResult computeSelected(WavenumberGrid blockGrid, double pressureAtm, double temperatureK,
+                                        double lineMinCm1, double lineMaxCm1,
+                                        org.linewright.grid.calc.LineFilter filter) throws IOException {
+        throw new UnsupportedOperationException("this calculator keeps no exact sums");
+    }
+
+    /** The counts and warnings {@link #compute} would give, without σ (an empty array), for {@link #keepsExactSums}. */
+    default BlockResult statistics(WavenumberGrid blockGrid, double pressureAtm, double temperatureK,
+                                   double lineMinCm1, double lineMaxCm1) throws IOException {
+        throw new UnsupportedOperationException("this calculator keeps no exact sums");
+    }
+
+    /**
      * Grid points per block when the plan sets none (see {@link
      * org.linewright.grid.engine.CrossSectionEngine#preferredBlockPoints}); by default that of direct summation.
      *

@@ -12,11 +12,20 @@ import java.util.TreeMap;
  * @param counts                  further counts by name (e.g. width sources per gas: {@code width.H2.line})
  * @param estimatedRelativeError  the engine's error estimate for this block
  * @param warnings                things the user should know (default widths, under-resolved lines ...)
+ * @param exactSumsOrNull         the exact per-point sums σ was rounded from (exact engine), from which changed
+ *                                lines can be taken out and added; null when the engine keeps none
  */
 public record BlockResult(double[] sigmaCm2PerMolecule, long linesUsed, long linesBelowThreshold,
-                          Map<String, Long> counts, double estimatedRelativeError, java.util.List<String> warnings) {
+                          Map<String, Long> counts, double estimatedRelativeError, java.util.List<String> warnings,
+                          org.linewright.grid.engine.exact.FixedPointSums exactSumsOrNull) {
     public BlockResult {
         counts = java.util.Collections.unmodifiableMap(new TreeMap<>(counts));
         warnings = java.util.List.copyOf(warnings);
+    }
+
+    /** A result without exact sums. */
+    public BlockResult(double[] sigmaCm2PerMolecule, long linesUsed, long linesBelowThreshold,
+                       Map<String, Long> counts, double estimatedRelativeError, java.util.List<String> warnings) {
+        this(sigmaCm2PerMolecule, linesUsed, linesBelowThreshold, counts, estimatedRelativeError, warnings, null);
     }
 }

@@ -24,10 +24,36 @@ import java.util.Map;
  */
 public record BuildReport(Path table, boolean dryRun, int cells, int computed, int reused, List<String> pending,
                           long linesInStores, long linesUsed, Map<String, Long> counts,
-                          double estimatedRelativeError, List<String> warnings, TableWriter.Written written, int ingested, double seconds) {
+                          double estimatedRelativeError, List<String> warnings, TableWriter.Written written, int ingested,
+                          double seconds, Incremental incremental) {
     public BuildReport {
         pending = List.copyOf(pending);
         counts = Map.copyOf(counts);
         warnings = List.copyOf(warnings);
+    }
+
+    /** A report without an incremental part. */
+    public BuildReport(Path table, boolean dryRun, int cells, int computed, int reused, List<String> pending,
+                       long linesInStores, long linesUsed, Map<String, Long> counts, double estimatedRelativeError,
+                       List<String> warnings, TableWriter.Written written, int ingested, double seconds) {
+        this(table, dryRun, cells, computed, reused, pending, linesInStores, linesUsed, counts, estimatedRelativeError,
+                warnings, written, ingested, seconds, Incremental.NONE);
+    }
+
+    /**
+     * How the computed cells were (or, in a dry run, would be) obtained against the previous build.
+     *
+     * @param mode               why cells are or are not updated from changed lines (one line, for the summary)
+     * @param linesRemoved       lines of the previous version not in the current one (0 when not compared)
+     * @param linesAdded         lines of the current version not in the previous one
+     * @param cellsUpdated       computed cells updated from the changed lines alone
+     * @param cellsRecomputed    computed cells summed afresh over all their lines
+     * @param relativeCost       the computed cells' profile evaluations (line × reached point) relative to a
+     *                           build from scratch, counted as lines within reach (changed lines for updated cells)
+     */
+    public record Incremental(String mode, long linesRemoved, long linesAdded, int cellsUpdated, int cellsRecomputed,
+                              double relativeCost) {
+        /** No comparison with a previous build. */
+        public static final Incremental NONE = new Incremental("", 0, 0, 0, 0, Double.NaN);
     }
 }

@@ -14,11 +14,15 @@ import org.linewright.broadening.wings.WingTreatment;
 import org.linewright.grid.calc.CrossSectionCalculator;
 import org.linewright.grid.calc.CrossSectionRequest;
 import org.linewright.grid.calc.CrossSectionResult;
+import org.linewright.grid.calc.LineFilter;
 import org.linewright.grid.calc.LineSelection;
 import org.linewright.grid.calc.ProgressListener;
 import org.linewright.broadening.sources.WidthOptions;
+import org.linewright.grid.engine.CountOnlyEngine;
 import org.linewright.grid.engine.CrossSectionEngine;
 import org.linewright.grid.engine.EngineFactory;
+import org.linewright.grid.engine.exact.ExactEngine;
+import org.linewright.grid.engine.exact.FixedPointSums;
 import org.linewright.grid.plan.TablePlan;
 import org.linewright.grid.wavenumber.WavenumberGrid;
 import org.linewright.ingest.registry.MoleculeRegistry;
@@ -46,7 +50,10 @@ public final class CalculatorBlocks implements BlockCalculator {
         this.plan = plan;
         this.calculator = new CrossSectionCalculator(stores, registry, threads);
         this.wings = plan.profile().wings();
-        this.engine = EngineFactory.create(plan.profile().engine(), threads, wings, plan.profile().tolerance());
+        // the exact engine keeps exact sums in a table build: a block can then be updated from changed lines alone
+        this.engine = ExactEngine.ID.equalsIgnoreCase(plan.profile().engine().trim())
+                ? new ExactEngine(threads, wings, true)
+                : EngineFactory.create(plan.profile().engine(), threads, wings, plan.profile().tolerance());
         int[] molecules = plan.species().molecules().stream().mapToInt(Integer::intValue).toArray();
         TablePlan.Species species = plan.species();
         if (species.mixture()) {
@@ -78,17 +85,51 @@ public final class CalculatorBlocks implements BlockCalculator {
     @Override
     public BlockResult compute(WavenumberGrid blockGrid, double pressureAtm, double temperatureK, double lineMinCm1,
                                double lineMaxCm1) {
-        CrossSectionRequest request = new CrossSectionRequest(temperatureK, pressureAtm, plan.composition(), blockGrid,
-                wings, plan.profile().shape(), plan.profile().thresholdCmPerMolecule(), selection, widths, scaling);
-        return block(compute(request, lineMinCm1, lineMaxCm1));
+        return block(compute(request(blockGrid, pressureAtm, temperatureK), engine, lineMinCm1, lineMaxCm1, null),
+                sums());
     }
 
-    private CrossSectionResult compute(CrossSectionRequest request, double lineMinCm1, double lineMaxCm1) {
+    @Override
+    public boolean keepsExactSums() {
+        return engine instanceof ExactEngine;
+    }
+
+    @Override
+    public BlockResult computeSelected(WavenumberGrid blockGrid, double pressureAtm, double temperatureK,
+                                       double lineMinCm1, double lineMaxCm1, LineFilter filter) {
+        if (!keepsExactSums()) {
+            throw new UnsupportedOperationException("engine " + engine.id() + " keeps no exact sums");
+        }
+        return block(compute(request(blockGrid, pressureAtm, temperatureK), engine, lineMinCm1, lineMaxCm1, filter),
+                sums());
+    }
+
+    @Override
+    public BlockResult statistics(WavenumberGrid blockGrid, double pressureAtm, double temperatureK,
+                                  double lineMinCm1, double lineMaxCm1) {
+        try (CountOnlyEngine none = new CountOnlyEngine()) {
+            CrossSectionResult r = compute(request(blockGrid, pressureAtm, temperatureK), none, lineMinCm1,
+                    lineMaxCm1, null);
+            return block(r, null);
+        }
+    }
+
+    private CrossSectionRequest request(WavenumberGrid blockGrid, double pressureAtm, double temperatureK) {
+        return new CrossSectionRequest(temperatureK, pressureAtm, plan.composition(), blockGrid, wings,
+                plan.profile().shape(), plan.profile().thresholdCmPerMolecule(), selection, widths, scaling);
+    }
+
+    private FixedPointSums sums() {
+        return engine instanceof ExactEngine exact ? exact.sums().copy() : null;
+    }
+
+    private CrossSectionResult compute(CrossSectionRequest request, CrossSectionEngine e, double lineMinCm1,
+                                       double lineMaxCm1, LineFilter filter) {
         // the calculator's range is half-open [low, high); the block's reach is closed
-        return calculator.compute(request, engine, lineMinCm1, Math.nextUp(lineMaxCm1), ProgressListener.NONE);
+        return calculator.compute(request, e, lineMinCm1, Math.nextUp(lineMaxCm1), ProgressListener.NONE, filter);
     }
 
-    private static BlockResult block(CrossSectionResult r) {
+    private static BlockResult block(CrossSectionResult r, FixedPointSums sums) {
         Map<String, Long> counts = new LinkedHashMap<>();
         WidthSourceTally tally = r.widthSources();
         for (BackgroundGas gas : BackgroundGas.values()) {
@@ -103,7 +144,7 @@ public final class CalculatorBlocks implements BlockCalculator {
         counts.put("lines_van_vleck_weisskopf",
                 Long.parseLong(r.metadata().getOrDefault("lines_van_vleck_weisskopf", "0")));
         return new BlockResult(r.sigmaCm2PerMolecule(), r.linesUsed(), r.linesBelowThreshold(), counts,
-                r.estimatedRelativeError(), r.warnings());
+                r.estimatedRelativeError(), r.warnings(), sums);
     }
 
     /** The engine's preference ({@link CrossSectionEngine#preferredBlockPoints}). */

@@ -174,6 +174,7 @@ public final class TableBuilder {
         }
         refuseUndeclaredMixture(plan, loaded.stores(), registry);
         Path work = workDir(plan.outputTable());
+        BuildManifest previous = previousManifest(work);
         try (BlockCalculator calculator = factory.create(plan, loaded.stores(), registry, threads)) {
             Blocks blocksPlan = blocks(plan, calculator, loaded.stores());
             BlockLayout layout = blocksPlan.layout();
@@ -202,6 +203,11 @@ public final class TableBuilder {
                 manifest.put("block." + b + ".lines", Long.toString(lineHashes.lines()[b]));
                 manifest.put("block." + b + ".lines_sha256", lineHashes.hashes()[b]);
             }
+            for (int s = 0; s < loaded.stores().size(); s++) {
+                manifest.put("store." + s + ".dir", loaded.stores().get(s).directory().toAbsolutePath().toString());
+                manifest.put("store." + s + ".sources_sha256", sourcesId(loaded.stores().get(s)));
+            }
+            manifest.put("incremental.sums", calculator.keepsExactSums() ? "exact" : "none");
             BlockStore blocks = dryRun ? null : new BlockStore(work);
             List<String> pending = new ArrayList<>();
             List<PendingCell> pendingCells = new ArrayList<>();
@@ -225,10 +231,12 @@ public final class TableBuilder {
             }
             int cells = np * nt * nb;
             listener.planned(cells, pending.size(), pendingPoints);
+            Update update = update(previous, manifest, loaded.stores(), calculator, layout, plan, lineHashes,
+                    pendingCells, work);
             if (dryRun) {
                 return new BuildReport(plan.outputTable(), true, cells, pending.size(), cells - pending.size(),
                         pending, linesInStores, 0, Map.of(), 0, List.of(), null, loaded.ingested(),
-                        (System.nanoTime() - t0) * 1e-9);
+                        (System.nanoTime() - t0) * 1e-9, update.summary());
             }
             manifest.write(work);
             if (cellRunner != null && !pendingCells.isEmpty()) {
@@ -264,7 +272,12 @@ public final class TableBuilder {
                         if (blocks.has(h)) {
                             r = inMemory ? blocks.load(h) : blocks.loadSummary(h);
                         } else {
-                            r = computeCell(calculator, plan, layout, p, t, b);
+                            String oldHash = update.oldHash(p, t, b);
+                            r = oldHash != null ? update.cell(calculator, factory, registry, threads, blocks, oldHash,
+                                    plan, layout, p, t, b) : null;
+                            if (r == null) {
+                                r = computeCell(calculator, plan, layout, p, t, b);
+                            }
                             blocks.save(h, r);
                             listener.computed(p, t, b, r.sigmaCm2PerMolecule().length);
                         }
@@ -354,9 +367,201 @@ public final class TableBuilder {
                 }
             }
             blocks.prune(keep);
+            update.close();
             return new BuildReport(plan.outputTable(), false, cells, pending.size(), cells - pending.size(), pending,
                     linesInStores, linesUsed, counts, maxError, List.copyOf(warnings), written, loaded.ingested(),
-                    (System.nanoTime() - t0) * 1e-9);
+                    (System.nanoTime() - t0) * 1e-9, update.summary());
+        }
+    }
+
+    /** Lines that may differ between two versions before a rebuild recomputes blocks instead of updating them. */
+    static final long MAX_CHANGED_LINES = 5_000_000;
+
+    /** The manifest of the previous build, or null (none, or of another format: then every cell is recomputed). */
+    private static BuildManifest previousManifest(Path work) throws IOException {
+        try {
+            return BuildManifest.read(work);
+        } catch (InputException e) {
+            return null;
+        }
+    }
+
+    /** What identifies a store's content: its sources' SHA-256, in order. */
+    private static String sourcesId(LineStore store) {
+        StringBuilder b = new StringBuilder();
+        for (org.linewright.ingest.store.SourceInfo s : store.sources()) {
+            b.append(b.length() == 0 ? "" : " ").append(s.name()).append('=').append(s.metadata().sourceSha256());
+        }
+        return b.toString();
+    }
+
+    /**
+     * How a rebuild obtains its pending cells from the previous build: with exact sums kept (exact engine), the same
+     * parameters and blocks, and the previous line stores still there (the plan's cache keeps every version it
+     * ingested), a cell is its previous exact sums minus the removed lines' and plus the added lines' — the same
+     * bits as summing the current lines afresh, since exact sums do not depend on order. Otherwise the cells are
+     * computed afresh, and {@link BuildReport.Incremental#mode} says why.
+     */
+    private static Update update(BuildManifest previous, BuildManifest current, List<LineStore> stores,
+                                 BlockCalculator calculator, BlockLayout layout, TablePlan plan,
+                                 LineReachHasher.Result lineHashes, List<PendingCell> pending, Path work)
+            throws IOException {
+        long full = 0;
+        for (long n : lineHashes.lines()) {
+            full += n;
+        }
+        full *= (long) plan.pressuresBar().length * plan.temperaturesK().length;
+        long freshCost = 0;
+        for (PendingCell c : pending) {
+            freshCost += lineHashes.lines()[c.block()];
+        }
+        double freshRelative = full > 0 ? (double) freshCost / full : 0;
+        String why = null;
+        if (pending.isEmpty()) {
+            why = "nothing to compute";
+        } else if (previous == null) {
+            why = "first build";
+        } else if (!calculator.keepsExactSums()) {
+            why = "engine " + plan.profile().engine() + " keeps no exact sums: the blocks a change reaches are "
+                    + "computed afresh";
+        } else if (!"exact".equals(previous.get("incremental.sums"))) {
+            why = "the previous build kept no exact sums";
+        } else {
+            for (String key : List.of("parameters_sha256", "blocks", "block_points", "reach_cm1")) {
+                if (!java.util.Objects.equals(previous.get(key), current.get(key))) {
+                    why = "parameters or blocks changed (" + key + "): every cell they reach is computed afresh";
+                    break;
+                }
+            }
+        }
+        List<LineStore> oldStores = new ArrayList<>();
+        if (why == null) {
+            for (int s = 0; s < stores.size() && why == null; s++) {
+                String dir = previous.get("store." + s + ".dir");
+                String id = previous.get("store." + s + ".sources_sha256");
+                if (dir == null || id == null || !java.nio.file.Files.isRegularFile(
+                        Path.of(dir).resolve("linestore.properties"))) {
+                    why = "the previous version of line store " + s + " is gone: the blocks a change reaches are "
+                            + "computed afresh";
+                    break;
+                }
+                LineStore old = LineStore.open(Path.of(dir));
+                if (!id.equals(sourcesId(old))) {
+                    why = "line store " + old.directory() + " was changed in place: the blocks a change reaches are "
+                            + "computed afresh";
+                }
+                oldStores.add(old);
+            }
+            if (why == null && previous.get("store." + stores.size() + ".dir") != null) {
+                why = "the plan has fewer line sources than before";
+            }
+        }
+        LineDelta delta = null;
+        if (why == null) {
+            delta = LineDelta.between(oldStores, stores, speciesQuery(plan), layout.lineMinCm1(0),
+                    layout.lineMaxCm1(layout.blocks() - 1), MAX_CHANGED_LINES);
+            if (delta == null) {
+                why = "more than " + MAX_CHANGED_LINES + " lines changed: the blocks are computed afresh";
+            }
+        }
+        if (why != null) {
+            return new Update(null, List.of(), null, new BuildReport.Incremental(why, 0, 0, 0, pending.size(),
+                    freshRelative));
+        }
+        BlockStore blocks = new BlockStore(work);
+        Map<Long, String> oldHashes = new java.util.HashMap<>();
+        long cost = 0;
+        int updated = 0;
+        for (PendingCell c : pending) {
+            String oldHash = previous.get(BuildManifest.cellKey(c.pressureIndex(), c.temperatureIndex(), c.block()));
+            double lo = layout.lineMinCm1(c.block());
+            double hi = layout.lineMaxCm1(c.block());
+            if (oldHash != null && blocks.has(oldHash) && blocks.hasSums(oldHash)) {
+                oldHashes.put(cellIndex(c.pressureIndex(), c.temperatureIndex(), c.block()), oldHash);
+                cost += delta.removedIn(lo, hi) + delta.addedIn(lo, hi);
+                updated++;
+            } else {
+                cost += lineHashes.lines()[c.block()];
+            }
+        }
+        String mode = "cells updated from the changed lines (exact sums: the same bits as a build from scratch)";
+        return new Update(delta, oldStores, oldHashes, new BuildReport.Incremental(mode, delta.removedLines(),
+                delta.addedLines(), updated, pending.size() - updated, full > 0 ? (double) cost / full : 0));
+    }
+
+    private static long cellIndex(int p, int t, int b) {
+        return ((long) p << 42) | ((long) t << 21) | b;
+    }
+
+    /** The rebuild's way to its cells (see {@link #update}). */
+    private static final class Update {
+        private final LineDelta delta;
+        private final List<LineStore> oldStores;
+        private final Map<Long, String> oldHashes;
+        private final BuildReport.Incremental summary;
+        private BlockCalculator oldCalculator;
+        private org.linewright.grid.calc.LineFilter removed;
+        private org.linewright.grid.calc.LineFilter added;
+
+        Update(LineDelta delta, List<LineStore> oldStores, Map<Long, String> oldHashes,
+               BuildReport.Incremental summary) {
+            this.delta = delta;
+            this.oldStores = oldStores;
+            this.oldHashes = oldHashes;
+            this.summary = summary;
+        }
+
+        BuildReport.Incremental summary() {
+            return summary;
+        }
+
+        /** The previous build's hash of a cell to update from, or null to compute it afresh. */
+        String oldHash(int p, int t, int b) {
+            return oldHashes == null ? null : oldHashes.get(cellIndex(p, t, b));
+        }
+
+        /**
+         * The cell from the previous cell's exact sums, the removed lines' and the added lines' (summed by the
+         * same engine on the same block grid, so each line's values are the bits a full computation adds), with
+         * the statistics of the current lines; null when the previous sums are gone.
+         */
+        BlockResult cell(BlockCalculator calculator, CalculatorFactory factory, MoleculeRegistry registry,
+                         int threads, BlockStore blocks, String oldHash, TablePlan plan, BlockLayout layout, int p,
+                         int t, int b) throws IOException {
+            org.linewright.grid.engine.exact.FixedPointSums sums = blocks.loadSums(oldHash);
+            if (sums == null) {
+                return null;
+            }
+            WavenumberGrid g = layout.slice(b);
+            double pressureAtm = plan.pressuresAtm()[p];
+            double temperatureK = plan.temperaturesK()[t];
+            double lo = layout.lineMinCm1(b);
+            double hi = layout.lineMaxCm1(b);
+            if (delta.removedIn(lo, hi) > 0) {
+                if (oldCalculator == null) {
+                    oldCalculator = factory.create(plan, oldStores, registry, threads);
+                    removed = delta.removed();
+                }
+                sums.subtract(oldCalculator.computeSelected(g, pressureAtm, temperatureK, lo, hi, removed)
+                        .exactSumsOrNull());
+            }
+            if (delta.addedIn(lo, hi) > 0) {
+                if (added == null) {
+                    added = delta.added();
+                }
+                sums.add(calculator.computeSelected(g, pressureAtm, temperatureK, lo, hi, added).exactSumsOrNull());
+            }
+            BlockResult stats = calculator.statistics(g, pressureAtm, temperatureK, lo, hi);
+            double[] sigma = new double[sums.size()];
+            sums.values(sigma);
+            return new BlockResult(sigma, stats.linesUsed(), stats.linesBelowThreshold(), stats.counts(),
+                    stats.estimatedRelativeError(), stats.warnings(), sums);
+        }
+
+        void close() {
+            if (oldCalculator != null) {
+                oldCalculator.close();
+            }
         }
     }
 

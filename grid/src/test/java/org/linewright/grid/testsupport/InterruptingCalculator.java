@@ -29,6 +29,28 @@ public final class InterruptingCalculator implements BlockCalculator {
     }
 
     @Override
+    public boolean keepsExactSums() {
+        return delegate.keepsExactSums();
+    }
+
+    @Override
+    public BlockResult computeSelected(WavenumberGrid blockGrid, double pressureAtm, double temperatureK,
+                                       double lineMinCm1, double lineMaxCm1,
+                                       org.linewright.grid.calc.LineFilter filter) throws IOException {
+        if (computed == failAfter) {
+            throw new IOException("simulated interruption after " + failAfter + " blocks");
+        }
+        computed++;
+        return delegate.computeSelected(blockGrid, pressureAtm, temperatureK, lineMinCm1, lineMaxCm1, filter);
+    }
+
+    @Override
+    public BlockResult statistics(WavenumberGrid blockGrid, double pressureAtm, double temperatureK,
+                                  double lineMinCm1, double lineMaxCm1) throws IOException {
+        return delegate.statistics(blockGrid, pressureAtm, temperatureK, lineMinCm1, lineMaxCm1);
+    }
+
+    @Override
     public int preferredBlockPoints(WavenumberGrid grid, double paddingCm1) {
         return delegate.preferredBlockPoints(grid, paddingCm1);
     }

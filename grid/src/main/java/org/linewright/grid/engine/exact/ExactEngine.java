@@ -48,6 +48,11 @@ public final class ExactEngine implements CrossSectionEngine {
 
     private final int threads;
     private final WingTreatment wings;
+    /** Whether σ is summed exactly ({@link FixedPointSums}) instead of in double precision. */
+    private final boolean exactSums;
+    private FixedPointSums sums;
+    /** Per worker thread, a grid-sized scratch row for one line's profile (exact sums only). */
+    private final ThreadLocal<double[]> scratch = new ThreadLocal<>();
     private final ExecutorService pool;
     private final List<Callable<Void>> workers = new ArrayList<>();
     private final AtomicInteger nextBlock = new AtomicInteger();
@@ -72,6 +77,18 @@ public final class ExactEngine implements CrossSectionEngine {
      * @param wings   the wing treatment applied to every line
      */
     public ExactEngine(int threads, WingTreatment wings) {
+        this(threads, wings, false);
+    }
+
+    /**
+     * @param threads   worker threads, at least 1 (1 computes on the caller's thread)
+     * @param wings     the wing treatment applied to every line
+     * @param exactSums whether each line's profile values are added exactly ({@link FixedPointSums}): σ is then
+     *                  independent of the order and grouping of the lines, and {@link #sums()} gives the exact
+     *                  sums from which lines can later be taken out or added (incremental table builds)
+     */
+    public ExactEngine(int threads, WingTreatment wings, boolean exactSums) {
+        this.exactSums = exactSums;
         if (threads < 1) {
             throw new IllegalArgumentException("threads must be at least 1: " + threads);
         }
@@ -101,6 +118,7 @@ public final class ExactEngine implements CrossSectionEngine {
         this.blocks = (gridCm1.length + BLOCK_POINTS - 1) / BLOCK_POINTS;
         this.kernel = wings.atConditions(pressureAtm, temperatureK);
         this.kernelNoChi = wings.withChiFactor(ChiFactorKind.NONE).atConditions(pressureAtm, temperatureK);
+        this.sums = exactSums ? new FixedPointSums(gridCm1.length) : null;
         if (blockStart.length < blocks + 1) {
             blockStart = new int[blocks + 1];
             blockFill = new int[blocks];
@@ -197,9 +215,16 @@ public final class ExactEngine implements CrossSectionEngine {
     /** Takes blocks until none is left; each block's lines are added in chunk order. */
     private void work() {
         LineChunk c = chunk;
-        double[] out = sigma;
         double[] g = gridCm1;
         int points = g.length;
+        double[] out = sigma;
+        if (exactSums) {
+            out = scratch.get();
+            if (out == null || out.length != points) {
+                out = new double[points];
+                scratch.set(out);
+            }
+        }
         for (int b = nextBlock.getAndIncrement(); b < blocks; b = nextBlock.getAndIncrement()) {
             int blockFrom = b * BLOCK_POINTS;
             int blockTo = Math.min(points, blockFrom + BLOCK_POINTS);
@@ -218,13 +243,33 @@ public final class ExactEngine implements CrossSectionEngine {
                     kernelNoChi.addLine(LineShapeKind.VOIGT, c.vanVleckWeisskopf[i], g, from, to, c.centerCm1[i],
                             c.dopplerHwhmCm1[i], c.lorentzHwhmCm1[i], s * exempt, out);
                 }
+                if (exactSums) {
+                    // the line's own values (a function of the line and the grid alone), each added exactly
+                    for (int k = from; k < to; k++) {
+                        double v = out[k];
+                        if (v != 0.0) {
+                            sums.add(k, v);
+                            out[k] = 0.0;
+                        }
+                    }
+                }
             }
         }
     }
 
     @Override
     public void finish(double[] sigmaCm2PerMolecule) {
-        // direct summation has no deferred work
+        // direct summation has no deferred work, but for turning the exact sums into σ
+        if (exactSums) {
+            for (int k = 0; k < sigmaCm2PerMolecule.length; k++) {
+                sigmaCm2PerMolecule[k] += sums.value(k);
+            }
+        }
+    }
+
+    /** The exact sums of the last computation (engines made with exact sums), or null. */
+    public FixedPointSums sums() {
+        return sums;
     }
 
     @Override
@@ -237,6 +282,10 @@ public final class ExactEngine implements CrossSectionEngine {
         Map<String, String> m = new LinkedHashMap<>();
         m.put("method", "direct summation of Voigt profiles within the cutoff");
         m.put("block_points", Integer.toString(BLOCK_POINTS));
+        if (exactSums) {
+            m.put("summation", "exact: each value rounded to a multiple of 2^-" + FixedPointSums.FRACTION_BITS
+                    + " and summed as a 128-bit integer (independent of line order)");
+        }
         return m;
     }
 
