@@ -16,6 +16,8 @@ import org.linewright.ingest.line.NumericRowBytes;
  */
 public final class LineFilter {
     private final List<Map<ByteBuffer, Integer>> byStore;
+    /** Per store, the distinct wavenumbers of its lines, ascending: rows at other wavenumbers are not looked up. */
+    private final List<double[]> wavenumbersByStore;
     private final long lines;
 
     /**
@@ -23,6 +25,16 @@ public final class LineFilter {
      */
     public LineFilter(List<Map<ByteBuffer, Integer>> byStore) {
         this.byStore = List.copyOf(byStore);
+        List<double[]> nus = new java.util.ArrayList<>();
+        for (Map<ByteBuffer, Integer> m : this.byStore) {
+            java.util.TreeSet<Double> distinct = new java.util.TreeSet<>();
+            for (ByteBuffer k : m.keySet()) {
+                distinct.add(k.duplicate().order(ByteOrder.LITTLE_ENDIAN)
+                        .getDouble(k.position() + NumericRowBytes.WAVENUMBER_OFFSET));
+            }
+            nus.add(distinct.stream().mapToDouble(Double::doubleValue).toArray());
+        }
+        this.wavenumbersByStore = List.copyOf(nus);
         long n = 0;
         for (Map<ByteBuffer, Integer> m : this.byStore) {
             for (int c : m.values()) {
@@ -57,13 +69,25 @@ public final class LineFilter {
             if (wanted.isEmpty() || n == 0) {
                 return 0;
             }
+            double[] nus = wavenumbersByStore.get(store);
+            double[] nu = batch.wavenumberCm1;
             int rowBytes = NumericRowBytes.ROW_BYTES;
-            byte[] rows = new byte[n * rowBytes];
-            NumericRowBytes.serialize(batch, n, ByteBuffer.wrap(rows).order(ByteOrder.LITTLE_ENDIAN));
+            byte[] row = new byte[rowBytes];
+            ByteBuffer rowBuffer = ByteBuffer.wrap(row).order(ByteOrder.LITTLE_ENDIAN);
             int[] kept = new int[n];
             int k = 0;
+            // rows come in wavenumber order: one walk along the filter's wavenumbers finds the candidates
+            int at = java.util.Arrays.binarySearch(nus, nu[0]);
+            at = at < 0 ? -at - 1 : at;
             for (int i = 0; i < n; i++) {
-                ByteBuffer key = ByteBuffer.wrap(rows, i * rowBytes, rowBytes).slice();
+                while (at < nus.length && nus[at] < nu[i]) {
+                    at++;
+                }
+                if (at == nus.length || nus[at] != nu[i]) {
+                    continue;
+                }
+                NumericRowBytes.serializeRow(batch, i, rowBuffer, 0);
+                ByteBuffer key = ByteBuffer.wrap(row); // for the look-up only
                 Integer c = wanted.get(key);
                 if (c != null) {
                     if (c == 1) {

@@ -15,6 +15,8 @@ public final class NumericRowBytes {
     public static final List<LineColumn> COLUMNS = columns();
     /** Bytes per line (INT 4, LONG and DOUBLE 8). */
     public static final int ROW_BYTES = rowBytes();
+    /** Where the wavenumber lies in a line's bytes. */
+    public static final int WAVENUMBER_OFFSET = offsetOf(LineColumn.WAVENUMBER);
 
     private NumericRowBytes() {
     }
@@ -50,6 +52,38 @@ public final class NumericRowBytes {
                 }
             }
         }
+    }
+
+    /** Writes row {@code row} of {@code batch} at {@code at} of {@code out} (little-endian, {@link #ROW_BYTES}). */
+    public static void serializeRow(LineBatch batch, int row, ByteBuffer out, int at) {
+        int offset = at;
+        for (LineColumn c : COLUMNS) {
+            switch (c.kind()) {
+                case INT -> {
+                    out.putInt(offset, c.ints(batch)[row]);
+                    offset += Integer.BYTES;
+                }
+                case LONG -> {
+                    out.putLong(offset, c.longs(batch)[row]);
+                    offset += Long.BYTES;
+                }
+                default -> {
+                    out.putDouble(offset, c.doubles(batch)[row]);
+                    offset += Double.BYTES;
+                }
+            }
+        }
+    }
+
+    private static int offsetOf(LineColumn column) {
+        int n = 0;
+        for (LineColumn c : COLUMNS) {
+            if (c == column) {
+                return n;
+            }
+            n += c.kind() == LineColumn.Kind.INT ? Integer.BYTES : Long.BYTES;
+        }
+        throw new AssertionError(column);
     }
 
     private static List<LineColumn> columns() {
