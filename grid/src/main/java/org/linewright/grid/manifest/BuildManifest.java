@@ -61,6 +61,11 @@ public final class BuildManifest {
         entries.put(key, value);
     }
 
+    /** Removes every key starting with {@code prefix}. */
+    public void removeAll(String prefix) {
+        entries.keySet().removeIf(k -> k.startsWith(prefix));
+    }
+
     /** A key's value or null. */
     public String get(String key) {
         return entries.get(key);

@@ -357,6 +357,8 @@ public final class TableBuilder {
             TableWriter.Written written = TableWriter.write(plan.outputTable(), new TableContent(
                     plan.grid().pointsCm1(), plan.pressuresBar(), plan.temperaturesK(), sigma, plan.precision(),
                     metadata));
+            // a finished build is the next rebuild's base: the interrupted-rebuild keys go
+            manifest.removeAll(BASE);
             manifest.put("table_sha256", written.fileSha256());
             manifest.put("sigma_sha256", written.sigmaSha256());
             manifest.write(work);
@@ -437,8 +439,8 @@ public final class TableBuilder {
         List<LineStore> oldStores = new ArrayList<>();
         if (why == null) {
             for (int s = 0; s < stores.size() && why == null; s++) {
-                String dir = previous.get("store." + s + ".dir");
-                String id = previous.get("store." + s + ".sources_sha256");
+                String dir = base(previous, "store." + s + ".dir");
+                String id = base(previous, "store." + s + ".sources_sha256");
                 if (dir == null || id == null || !java.nio.file.Files.isRegularFile(
                         Path.of(dir).resolve("linestore.properties"))) {
                     why = "the previous version of line store " + s + " is gone: the blocks a change reaches are "
@@ -452,7 +454,7 @@ public final class TableBuilder {
                 }
                 oldStores.add(old);
             }
-            if (why == null && previous.get("store." + stores.size() + ".dir") != null) {
+            if (why == null && base(previous, "store." + stores.size() + ".dir") != null) {
                 why = "the plan has fewer line sources than before";
             }
         }
@@ -473,20 +475,39 @@ public final class TableBuilder {
         long cost = 0;
         int updated = 0;
         for (PendingCell c : pending) {
-            String oldHash = previous.get(BuildManifest.cellKey(c.pressureIndex(), c.temperatureIndex(), c.block()));
+            String key = BuildManifest.cellKey(c.pressureIndex(), c.temperatureIndex(), c.block());
+            String oldHash = base(previous, key);
             double lo = layout.lineMinCm1(c.block());
             double hi = layout.lineMaxCm1(c.block());
             if (oldHash != null && blocks.has(oldHash) && blocks.hasSums(oldHash)) {
                 oldHashes.put(cellIndex(c.pressureIndex(), c.temperatureIndex(), c.block()), oldHash);
+                current.put(BASE + key, oldHash);
                 cost += delta.removedIn(lo, hi) + delta.addedIn(lo, hi);
                 updated++;
             } else {
                 cost += lineHashes.lines()[c.block()];
             }
         }
+        for (int s = 0; s < oldStores.size(); s++) {
+            current.put(BASE + "store." + s + ".dir", oldStores.get(s).directory().toAbsolutePath().toString());
+            current.put(BASE + "store." + s + ".sources_sha256", sourcesId(oldStores.get(s)));
+        }
         String mode = "cells updated from the changed lines (exact sums: the same bits as a build from scratch)";
         return new Update(delta, oldStores, oldHashes, new BuildReport.Incremental(mode, delta.removedLines(),
                 delta.addedLines(), updated, pending.size() - updated, full > 0 ? (double) cost / full : 0));
+    }
+
+    /**
+     * Prefix of the manifest keys a rebuild writes before it computes: the previous build's cells and stores it
+     * updates from, so that a rebuild interrupted after the manifest was written resumes from the same base. Removed
+     * when the build finishes.
+     */
+    private static final String BASE = "base.";
+
+    /** The previous build's value of {@code key}: from an interrupted rebuild's base when there is one. */
+    private static String base(BuildManifest previous, String key) {
+        String b = previous.get(BASE + key);
+        return b != null ? b : previous.get(key);
     }
 
     private static long cellIndex(int p, int t, int b) {

@@ -127,6 +127,25 @@ class LineDeltaRebuildTest {
     }
 
     @Test
+    void aRebuildInterruptedWhileUpdatingResumesFromTheSameBase() throws IOException {
+        int from = firstAbove(2150.0);
+        List<String> edited = withIntensity(r -> r, from, from + original.size() / 100, 2.0);
+        write(incremental, edited);
+        TableBuilder.CalculatorFactory interrupting = (plan, stores, registry, threads) ->
+                new org.linewright.grid.testsupport.InterruptingCalculator(
+                        CalculatorBlocks.factory().create(plan, stores, registry, threads), 3);
+        IOException e = org.junit.jupiter.api.Assertions.assertThrows(IOException.class, () -> TableBuilder.build(
+                PlanReader.read(incremental), interrupting, 1, false, BuildListener.NONE));
+        assertTrue(e.getMessage().contains("simulated interruption"), e.getMessage());
+        BuildReport resumed = build(incremental, 2);
+        assertTrue(resumed.computed() > 0);
+        assertEquals(resumed.computed(), resumed.incremental().cellsUpdated(), resumed.incremental().mode());
+        assertEquals(scratch(edited, 5.0), resumed.written().sigmaSha256());
+        assertEquals(null, org.linewright.grid.manifest.BuildManifest.read(TableBuilder.workDir(resumed.table()))
+                .get("base.store.0.dir"), "a finished build keeps no base keys");
+    }
+
+    @Test
     void threeRevisionsAndTheirReverseGiveBackTheFirstBits() throws IOException {
         String first = sigmaSha(incremental);
         List<String> one = withIntensity(r -> r, 100, 140, 3.0);
