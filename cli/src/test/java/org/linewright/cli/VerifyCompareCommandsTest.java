@@ -262,6 +262,62 @@ class VerifyCompareCommandsTest {
         }
     }
 
+    /**
+     * {@code compare --plan} and the rebuild of the same plan agree on the cells a change reaches: the real CO sample
+     * with the intensities of lines near 2120, 2147 and 2183 cm-1 doubled; the cells the dry run would compute, those
+     * the rebuild updated from the changed lines and those compare reports are the same set.
+     */
+    @Test
+    void compareAndTheRebuildReachTheSameCells() throws IOException {
+        List<String> records = new ArrayList<>(Files.readAllLines(sample("sample_CO.par"), StandardCharsets.US_ASCII));
+        List<String> newer = new ArrayList<>(records);
+        int doubledLines = 0;
+        for (int i = 0; i < records.size(); i++) {
+            double nu = Double.parseDouble(records.get(i).substring(3, 15).trim());
+            if (Math.abs(nu - 2120) < 0.6 || Math.abs(nu - 2147) < 0.6 || Math.abs(nu - 2183) < 0.6) {
+                newer.set(i, doubled(records.get(i)));
+                doubledLines++;
+            }
+        }
+        assertTrue(doubledLines >= 3, "lines near the three positions: " + doubledLines);
+        Path newFile = Files.write(temp.resolve("co-new.par"), newer, StandardCharsets.US_ASCII);
+        Path d = Files.createDirectories(temp.resolve("agree"));
+        Files.copy(sample("sample_CO.par"), d.resolve("co.par"));
+        Path plan = Files.writeString(d.resolve("plan.toml"), String.join("\n",
+                "[lines]", "sources = [\"co.par\"]", "[grid]", "wavenumber = { from = 2100.0, to = 2200.0, step = 0.01 }",
+                "pressures_bar = [1e-3, 1.0]", "temperatures_K = [296.0, 900.0]", "[background]", "air = 1.0",
+                "[profile]", "engine = \"exact\"", "cutoff_cm1 = 1.0", "[build]", "block_points = 1000", "[output]",
+                "table = \"t.arrow\"", ""));
+        assertEquals(ExitCodes.OK, run("build", plan.toString(), "--threads", "1").code());
+        Files.copy(newFile, d.resolve("co.par"), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        Run dry = run("build", plan.toString(), "--dry-run");
+        java.util.Set<String> rebuilt = new java.util.TreeSet<>();
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("compute p=([^ ]+) bar, T=([^ ]+) K, ([0-9.]+)-")
+                .matcher(dry.out());
+        while (m.find()) {
+            rebuilt.add(cellName(m.group(1), m.group(2), m.group(3)));
+        }
+        Path report = temp.resolve("agree.json");
+        run("compare", sample("sample_CO.par").toString(), newFile.toString(), "--plan", plan.toString(),
+                "--threads", "1", "--report-format", "json", "--report", report.toString());
+        java.util.Set<String> compared = new java.util.TreeSet<>();
+        m = java.util.regex.Pattern.compile("\"pressure_bar\": ([^,]+), \"temperature_K\": ([^,]+), \"block\": [0-9]+, "
+                + "\"from_cm1\": ([^,]+),").matcher(Files.readString(report));
+        while (m.find()) {
+            compared.add(cellName(m.group(1), m.group(2), m.group(3)));
+        }
+        assertTrue(rebuilt.size() >= 3 * 4 && rebuilt.size() < 10 * 4, dry.out());
+        assertEquals(rebuilt, compared);
+        Run build = run("build", plan.toString(), "--threads", "2");
+        assertTrue(build.out().contains(rebuilt.size() + " block(s) were updated from them, 0 computed afresh"),
+                build.out());
+    }
+
+    private static String cellName(String pressureBar, String temperatureK, String fromCm1) {
+        return Double.parseDouble(pressureBar) + " bar " + Double.parseDouble(temperatureK) + " K "
+                + String.format(Locale.ROOT, "%.4f", Double.parseDouble(fromCm1));
+    }
+
     @Test
     void compareBadInputIsOneLineAndExitCode2() {
         assertOneErrorLine(run("compare", temp.resolve("a.par").toString(), temp.resolve("b.par").toString()));
