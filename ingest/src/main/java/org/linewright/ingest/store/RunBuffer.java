@@ -30,6 +30,8 @@ final class RunBuffer {
     private final long[] sortedColumn;
     private final WavenumberOrder order;
     private int size;
+    /** Once sorted: the sorting permutation (sorted position to buffered row), else null. */
+    private int[] perm;
 
     RunBuffer(int capacity, LineColumn[] columns) {
         this.capacity = capacity;
@@ -63,6 +65,9 @@ final class RunBuffer {
 
     /** Appends rows {@code [from, from+n)} of {@code src} (stored columns only); returns how many fitted. */
     int append(LineBatch src, int from, int n) {
+        if (perm != null) {
+            throw new IllegalStateException("run buffer already sorted");
+        }
         int take = Math.min(n, capacity - size);
         for (int k = 0; k < numeric.length; k++) {
             LineColumn c = numeric[k];
@@ -94,19 +99,34 @@ final class RunBuffer {
     }
 
     /**
+     * Puts the numeric columns in stable wavenumber order (the text columns are reordered as they are written) and
+     * stops accepting lines until the buffer is written. Called by the thread that fills the buffer, so that the
+     * thread that writes it has less to do; {@link #writeSorted} sorts if this was not called.
+     */
+    void sort() {
+        if (perm != null) {
+            return;
+        }
+        int n = size;
+        int[] p = order.permutation(keys, n);
+        long[] sorted = sortedColumn;
+        for (long[] column : columns) {
+            for (int i = 0; i < n; i++) {
+                sorted[i] = column[p[i]];
+            }
+            System.arraycopy(sorted, 0, column, 0, n);
+        }
+        perm = p;
+    }
+
+    /**
      * Writes the buffered lines in stable wavenumber order to {@code out}, one record batch per
      * {@code gather.capacity()} lines, then empties the buffer.
      */
     void writeSorted(ArrowLineFileWriter out, LineBatch gather) throws IOException {
+        sort();
         int n = size;
-        int[] perm = order.permutation(keys, n);
-        long[] sorted = sortedColumn;
-        for (long[] column : columns) {
-            for (int i = 0; i < n; i++) {
-                sorted[i] = column[perm[i]];
-            }
-            System.arraycopy(sorted, 0, column, 0, n);
-        }
+        int[] perm = this.perm;
         for (int from = 0; from < n; from += gather.capacity()) {
             int m = Math.min(gather.capacity(), n - from);
             gather.clear();
@@ -210,6 +230,7 @@ final class RunBuffer {
 
     void clear() {
         size = 0;
+        perm = null;
         for (TextColumn t : texts) {
             t.clear();
         }
