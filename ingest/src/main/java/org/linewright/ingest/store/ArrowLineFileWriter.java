@@ -137,6 +137,7 @@ final class ArrowLineFileWriter implements AutoCloseable {
         }
         StoreColumns.fill(root, batch, columns);
         writer.writeBatch();
+        requestFlushIfDue();
         if (lines == 0) {
             minWavenumberCm1 = wn[0];
         }

@@ -33,8 +33,9 @@ import org.linewright.ingest.atomic.AtomicFile;
  * <p>Lines arriving in ascending order (the usual case) stream straight into the file. From the first line
  * out of order on, lines are collected in runs of at most {@code runLines} lines, each sorted in memory and
  * spilled to a temporary Arrow file; {@link #commit} then merges the runs (k-way, ties in input order). A full
- * run is sorted and written on a spill thread while the caller fills the next run (two run buffers, each
- * holding only the stored columns, packed by row: {@link RunBuffer}).
+ * run is sorted by the caller (its numeric columns) and written on a spill thread while the caller fills the next
+ * run (two run buffers, each
+ * holding only the stored columns: {@link RunBuffer}).
  *
  * <p>Atomicity: everything is written under temporary names ({@code .partial-...}) in the store directory;
  * {@link #commit} forces the finished file to disk, renames it over the source's file (replacing an earlier
@@ -228,8 +229,10 @@ public final class LineStoreWriter implements AutoCloseable {
      * handed over, so ties keep their input order in the merge.
      */
     private void spillInBackground() throws IOException {
-        awaitSpill();
         RunBuffer full = runBuffer;
+        // Sorted here, while the spill thread still writes the previous run: the writing thread has the most work.
+        full.sort();
+        awaitSpill();
         Path path = partialPath("run");
         runs.add(path);
         if (spare == null) {

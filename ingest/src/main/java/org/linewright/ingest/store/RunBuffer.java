@@ -8,29 +8,30 @@ import org.linewright.ingest.line.LineColumn;
 import org.linewright.ingest.line.TextColumn;
 
 /**
- * One run of the external sort in memory: up to {@code capacity} lines of the stored columns only, the numeric
- * columns packed row by row (one {@code long} slot per column: ints widened, doubles as their raw bits) and the
- * text columns as {@link TextColumn}s. Packing by row is what makes the sorted write cheap: gathering a line in
- * sorted order touches the one or two cache lines of its row instead of one cache line per column.
+ * One run of the external sort in memory: up to {@code capacity} lines of the stored columns only, each numeric
+ * column as one {@code long} array (ints widened, doubles as their raw bits) and the text columns as
+ * {@link TextColumn}s. Filling a run copies each column sequentially. The sorted write moves the numeric columns
+ * into sorted order one whole column at a time: a column of a run (1 MB at 131,072 lines) stays in L2 cache while
+ * it is gathered by the permutation, whereas gathering whole rows, or a column a few thousand rows at a time,
+ * reads the run from main memory once per column and step.
  *
- * <p>Heap: {@code capacity × (8 × numeric columns + 8 + 4 + 4 + text bytes)}, the stored columns only (a
- * 262,144-line run of a 160-character source ≈ 60 MB).
+ * <p>Heap: {@code capacity × (8 × numeric columns + 8 + 4 + 4 + text bytes)} plus one column of scratch, the
+ * stored columns only (a 131,072-line run of a 160-character source ≈ 30 MB).
  */
 final class RunBuffer {
-    /** Rows gathered at once into the scratch before they are spread into columns (scratch stays in L2 cache). */
-    private static final int GATHER_BLOCK_ROWS = 1024;
-
     private final int capacity;
     private final LineColumn[] numeric;
     private final LineColumn[] text;
-    /** Slots per row. */
-    private final int width;
-    private final long[] packed;
+    /** The numeric columns, one array each, in {@link #numeric} order. */
+    private final long[][] columns;
     private final double[] keys;
     private final TextColumn[] texts;
-    private final long[] scratch;
+    /** One column in sorted order, before it is copied back over its column. */
+    private final long[] sortedColumn;
     private final WavenumberOrder order;
     private int size;
+    /** Once sorted: the sorting permutation (sorted position to buffered row), else null. */
+    private int[] perm;
 
     RunBuffer(int capacity, LineColumn[] columns) {
         this.capacity = capacity;
@@ -41,17 +42,16 @@ final class RunBuffer {
         }
         this.numeric = num.toArray(new LineColumn[0]);
         this.text = txt.toArray(new LineColumn[0]);
-        this.width = numeric.length;
         if (!num.contains(LineColumn.WAVENUMBER)) {
             throw new IllegalArgumentException("a run must hold the wavenumber column");
         }
-        this.packed = new long[Math.multiplyExact(capacity, width)];
+        this.columns = new long[numeric.length][capacity];
         this.keys = new double[capacity];
         this.texts = new TextColumn[text.length];
         for (int t = 0; t < text.length; t++) {
             texts[t] = new TextColumn(capacity, 15);
         }
-        this.scratch = new long[GATHER_BLOCK_ROWS * width];
+        this.sortedColumn = new long[capacity];
         this.order = new WavenumberOrder(capacity);
     }
 
@@ -65,28 +65,26 @@ final class RunBuffer {
 
     /** Appends rows {@code [from, from+n)} of {@code src} (stored columns only); returns how many fitted. */
     int append(LineBatch src, int from, int n) {
+        if (perm != null) {
+            throw new IllegalStateException("run buffer already sorted");
+        }
         int take = Math.min(n, capacity - size);
-        int w = width;
-        for (int k = 0; k < w; k++) {
+        for (int k = 0; k < numeric.length; k++) {
             LineColumn c = numeric[k];
-            int at = size * w + k;
+            long[] d = columns[k];
+            int at = size;
             switch (c.kind()) {
                 case INT -> {
                     int[] s = c.ints(src);
-                    for (int i = 0; i < take; i++, at += w) {
-                        packed[at] = s[from + i];
+                    for (int i = 0; i < take; i++) {
+                        d[at + i] = s[from + i];
                     }
                 }
-                case LONG -> {
-                    long[] s = c.longs(src);
-                    for (int i = 0; i < take; i++, at += w) {
-                        packed[at] = s[from + i];
-                    }
-                }
+                case LONG -> System.arraycopy(c.longs(src), from, d, at, take);
                 case DOUBLE -> {
                     double[] s = c.doubles(src);
-                    for (int i = 0; i < take; i++, at += w) {
-                        packed[at] = Double.doubleToRawLongBits(s[from + i]);
+                    for (int i = 0; i < take; i++) {
+                        d[at + i] = Double.doubleToRawLongBits(s[from + i]);
                     }
                 }
                 default -> throw new AssertionError(c);
@@ -101,22 +99,56 @@ final class RunBuffer {
     }
 
     /**
+     * Puts the numeric columns in stable wavenumber order (the text columns are reordered as they are written) and
+     * stops accepting lines until the buffer is written. Called by the thread that fills the buffer, so that the
+     * thread that writes it has less to do; {@link #writeSorted} sorts if this was not called.
+     */
+    void sort() {
+        if (perm != null) {
+            return;
+        }
+        int n = size;
+        int[] p = order.permutation(keys, n);
+        long[] sorted = sortedColumn;
+        for (long[] column : columns) {
+            for (int i = 0; i < n; i++) {
+                sorted[i] = column[p[i]];
+            }
+            System.arraycopy(sorted, 0, column, 0, n);
+        }
+        perm = p;
+    }
+
+    /**
      * Writes the buffered lines in stable wavenumber order to {@code out}, one record batch per
      * {@code gather.capacity()} lines, then empties the buffer.
      */
     void writeSorted(ArrowLineFileWriter out, LineBatch gather) throws IOException {
+        sort();
         int n = size;
-        int[] perm = order.permutation(keys, n);
-        int w = width;
+        int[] perm = this.perm;
         for (int from = 0; from < n; from += gather.capacity()) {
             int m = Math.min(gather.capacity(), n - from);
             gather.clear();
-            for (int b = 0; b < m; b += GATHER_BLOCK_ROWS) {
-                int rows = Math.min(GATHER_BLOCK_ROWS, m - b);
-                for (int i = 0; i < rows; i++) {
-                    System.arraycopy(packed, perm[from + b + i] * w, scratch, i * w, w);
+            for (int k = 0; k < numeric.length; k++) {
+                LineColumn c = numeric[k];
+                long[] s = columns[k];
+                switch (c.kind()) {
+                    case INT -> {
+                        int[] d = c.ints(gather);
+                        for (int i = 0; i < m; i++) {
+                            d[i] = (int) s[from + i];
+                        }
+                    }
+                    case LONG -> System.arraycopy(s, from, c.longs(gather), 0, m);
+                    case DOUBLE -> {
+                        double[] d = c.doubles(gather);
+                        for (int i = 0; i < m; i++) {
+                            d[i] = Double.longBitsToDouble(s[from + i]);
+                        }
+                    }
+                    default -> throw new AssertionError(c);
                 }
-                spread(scratch, rows, gather, b);
             }
             for (int t = 0; t < text.length; t++) {
                 TextColumn s = texts[t];
@@ -132,11 +164,6 @@ final class RunBuffer {
             out.write(gather);
         }
         clear();
-    }
-
-    /** Spreads {@code rows} packed rows of {@code block} into rows {@code [at, at+rows)} of the batch's columns. */
-    private void spread(long[] block, int rows, LineBatch dst, int at) {
-        spread(numeric, block, rows, dst, at);
     }
 
     /**
@@ -203,6 +230,7 @@ final class RunBuffer {
 
     void clear() {
         size = 0;
+        perm = null;
         for (TextColumn t : texts) {
             t.clear();
         }
