@@ -9,6 +9,8 @@ import org.linewright.grid.engine.LineChunk;
  * not kept. Primitive arrays grown by doubling.
  */
 final class LineBuffer {
+    /** Heap per line kept: four doubles and a boolean. */
+    static final int BYTES_PER_LINE = 4 * Double.BYTES + 1;
     double[] centerCm1 = new double[0];
     double[] strength = new double[0];
     double[] dopplerCm1 = new double[0];
@@ -48,6 +50,11 @@ final class LineBuffer {
             chi[count] = chunk.chiFactor[i] && withChi;
             count++;
         }
+    }
+
+    /** Heap the buffer holds: {@value #BYTES_PER_LINE} bytes per line of capacity. */
+    long bytes() {
+        return (long) centerCm1.length * BYTES_PER_LINE;
     }
 
     private void ensureCapacity(int needed) {
