@@ -15,10 +15,9 @@ final class LineDistribution {
     /** {@link #firstPoint} of a line in no ring. */
     static final long NONE = Long.MIN_VALUE;
     /**
-     * Working memory per line of the current segment: its weights (6 + 4 + 4 doubles), first point, line index and
-     * stencil key (3 ints).
+     * Working memory per line of the current segment: its weights (6 + 4 + 4 doubles) and first point (an int).
      */
-    static final int BYTES_PER_SEGMENT_LINE = (P + 8) * Double.BYTES + 3 * Integer.BYTES;
+    static final int BYTES_PER_SEGMENT_LINE = (P + 8) * Double.BYTES + Integer.BYTES;
 
     private final FastPlan plan;
     private final LineBuffer lines;
@@ -34,9 +33,6 @@ final class LineDistribution {
     double[] orderedDopplerWeights = new double[0];
     double[] orderedLorentzWeights = new double[0];
     int[] orderedFirstPoint = new int[0];
-    /** The current segment's lines in line order, and their stencil keys. */
-    private int[] segmentLines = new int[0];
-    private int[] segmentKeys = new int[0];
     private final double[] discard = new double[4];
 
     /**
@@ -131,40 +127,35 @@ final class LineDistribution {
     void bucket(long segmentLo, long segmentHi, int ringShift) {
         int keys = bucketStart.length - 1;
         Arrays.fill(bucketStart, 0);
-        double origin = plan.originCm1;
-        double h = plan.stepCm1;
+        // two passes over the lines (count per key, then place), so that nothing per line is kept between them
         int m = 0;
         for (int i = 0; i < lines.count; i++) {
-            long p = firstPoint(origin, h, lines.centerCm1[i], plan.lineFamily[i], lo, hi);
-            if (p == NONE || p < segmentLo || p > segmentHi) {
-                continue;
+            int key = segmentKey(i, segmentLo, segmentHi);
+            if (key >= 0) {
+                bucketStart[key + 1]++;
+                m++;
             }
-            Family f = plan.families[plan.lineFamily[i]];
-            int jg = f.doppler.stencil(lines.dopplerCm1[i], discard, 0);
-            int jl = f.lorentz.stencil(lines.lorentzCm1[i], discard, 0);
-            int key = f.firstKey + jg * f.lorentz.size() + jl;
-            if (m == segmentLines.length) {
-                segmentLines = Arrays.copyOf(segmentLines, Math.max(1 << 12, 2 * m));
-                segmentKeys = Arrays.copyOf(segmentKeys, segmentLines.length);
-            }
-            segmentLines[m] = i;
-            segmentKeys[m] = key;
-            m++;
-            bucketStart[key + 1]++;
         }
         for (int k = 0; k < keys; k++) {
             bucketStart[k + 1] += bucketStart[k];
         }
         int[] fill = Arrays.copyOf(bucketStart, keys);
         if (orderedFirstPoint.length < m) {
+            // the last segment's arrays go first, so that both are never held at once
+            release();
             orderedPositionWeights = new double[P * m];
             orderedDopplerWeights = new double[4 * m];
             orderedLorentzWeights = new double[4 * m];
             orderedFirstPoint = new int[m];
         }
-        for (int t = 0; t < m; t++) {
-            int i = segmentLines[t];
-            int q = fill[segmentKeys[t]]++;
+        double origin = plan.originCm1;
+        double h = plan.stepCm1;
+        for (int i = 0; i < lines.count; i++) {
+            int key = segmentKey(i, segmentLo, segmentHi);
+            if (key < 0) {
+                continue;
+            }
+            int q = fill[key]++;
             double c = lines.centerCm1[i];
             positionWeights(origin, h, c, lines.strength[i], orderedPositionWeights, P * q);
             Family f = plan.families[plan.lineFamily[i]];
@@ -175,14 +166,24 @@ final class LineDistribution {
         shift = ringShift;
     }
 
+    /** Stencil key of line i when its first node lies in [segmentLo, segmentHi] (and in a ring), else −1. */
+    private int segmentKey(int i, long segmentLo, long segmentHi) {
+        long p = firstPoint(plan.originCm1, plan.stepCm1, lines.centerCm1[i], plan.lineFamily[i], lo, hi);
+        if (p == NONE || p < segmentLo || p > segmentHi) {
+            return -1;
+        }
+        Family f = plan.families[plan.lineFamily[i]];
+        int jg = f.doppler.stencil(lines.dopplerCm1[i], discard, 0);
+        int jl = f.lorentz.stencil(lines.lorentzCm1[i], discard, 0);
+        return f.firstKey + jg * f.lorentz.size() + jl;
+    }
+
     /** Lets go of the last segment's weights (the edge correction needs the heap next). */
     void release() {
         orderedPositionWeights = new double[0];
         orderedDopplerWeights = new double[0];
         orderedLorentzWeights = new double[0];
         orderedFirstPoint = new int[0];
-        segmentLines = new int[0];
-        segmentKeys = new int[0];
     }
 
     /** Number of lines (in the current segment) whose stencil touches slice (ig, il) of a family. */
