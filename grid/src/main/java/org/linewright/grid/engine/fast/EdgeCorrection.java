@@ -88,28 +88,36 @@ final class EdgeCorrection {
         int span = offsets.length;
         double[] kernel = new double[span];
         double[] lambda = new double[P];
+        double[] weights = new double[P];
         Additions out = new Additions(24 * (to - from));
         Window window = new Window();
         for (int i = from; i < to; i++) {
-            if (dist.key[i] < 0) {
+            // the line's first node and position weights, computed as the distribution computes them (same bits)
+            long f = LineDistribution.firstPoint(plan.originCm1, plan.stepCm1, lines.centerCm1[i],
+                    plan.lineFamily[i], dist.lo, dist.hi);
+            if (f == LineDistribution.NONE) {
                 continue;
             }
+            LineDistribution.positionWeights(plan.originCm1, plan.stepCm1, lines.centerCm1[i], lines.strength[i],
+                    weights, 0);
             WingKernel wings = plan.families[plan.lineFamily[i]].kernel;
             double a = lines.dopplerCm1[i];
             double g = lines.lorentzCm1[i];
             java.util.Arrays.fill(kernel, 0.0);
             wings.addLine(LineShapeKind.VOIGT, offsets, 0, span, 0.0, a, g, 1.0, kernel);
-            long f = dist.firstPoint[i];
             // internal points whose six offsets q − f − j straddle an edge: right [f+R+1, f+R+5], left [f−R, f−R+4]
             long leftLo = f - last;
             long leftHi = f - last + P - 2;
             long rightLo = f + last + 1;
             long rightHi = f + last + P - 1;
             if (leftHi >= rightLo - 1) {
-                correct(plan, lines, dist, i, leftLo, rightHi, kernel, kernelLo, last, wings, lambda, n, window, out);
+                correct(plan, lines, i, f, weights, leftLo, rightHi, kernel, kernelLo, last, wings, lambda, n, window,
+                        out);
             } else {
-                correct(plan, lines, dist, i, leftLo, leftHi, kernel, kernelLo, last, wings, lambda, n, window, out);
-                correct(plan, lines, dist, i, rightLo, rightHi, kernel, kernelLo, last, wings, lambda, n, window, out);
+                correct(plan, lines, i, f, weights, leftLo, leftHi, kernel, kernelLo, last, wings, lambda, n, window,
+                        out);
+                correct(plan, lines, i, f, weights, rightLo, rightHi, kernel, kernelLo, last, wings, lambda, n, window,
+                        out);
             }
         }
         return out;
@@ -119,7 +127,8 @@ final class EdgeCorrection {
      * Records the replacement of line i's transform value by the exact value at the output points fed by internal
      * points [qLo, qHi]: first −(transform value) at each point, then the exact line's addition at each point.
      */
-    private static void correct(FastPlan plan, LineBuffer lines, LineDistribution dist, int i, long qLo, long qHi,
+    private static void correct(FastPlan plan, LineBuffer lines, int i, long first, double[] weights, long qLo,
+                                long qHi,
                                 double[] kernel, int kernelLo, long last, WingKernel wings, double[] lambda,
                                 int n, Window window, Additions out) {
         double[] points = plan.pointsCm1;
@@ -133,7 +142,7 @@ final class EdgeCorrection {
                 return;
             }
             for (int k = from; k < to; k++) {
-                out.add(k, -transformValue(dist, i, (long) k * m, kernel, kernelLo, last));
+                out.add(k, -transformValue(first, weights, (long) k * m, kernel, kernelLo, last));
             }
         } else {
             double origin = plan.originCm1;
@@ -150,7 +159,7 @@ final class EdgeCorrection {
                 LagrangeWeights.centred(P, pos - k0, lambda, 0);
                 double value = 0;
                 for (int t = 0; t < P; t++) {
-                    value += lambda[t] * transformValue(dist, i, k0 - FastPlanner.SHIFT + t, kernel, kernelLo, last);
+                    value += lambda[t] * transformValue(first, weights, k0 - FastPlanner.SHIFT + t, kernel, kernelLo, last);
                 }
                 out.add(k, -value);
             }
@@ -213,16 +222,19 @@ final class EdgeCorrection {
         }
     }
 
-    /** Σ_j w_j·K(|q − f − j|) of line i at internal point q, K zero beyond the last offset inside the cutoff. */
-    private static double transformValue(LineDistribution dist, int i, long q, double[] kernel, int kernelLo,
+    /**
+     * Σ_j w_j·K(|q − f − j|) of a line (first node f, position weights w × S) at internal point q, K zero beyond the
+     * last offset inside the cutoff.
+     */
+    private static double transformValue(long first, double[] weights, long q, double[] kernel, int kernelLo,
                                          long last) {
-        long r0 = q - dist.firstPoint[i];
+        long r0 = q - first;
         double value = 0;
         for (int j = 0; j < P; j++) {
             long r = Math.abs(r0 - j);
             if (r <= last) {
                 // offsets below the kept span never occur in a window (it lies within 8 steps of the edge)
-                value += dist.positionWeights[P * i + j] * kernel[(int) (r - kernelLo)];
+                value += weights[j] * kernel[(int) (r - kernelLo)];
             }
         }
         return value;

@@ -30,7 +30,7 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * <ul>
  * <li>{@link FastPlanner} chooses the immutable {@link FastPlan}: internal step, families of lines and their width
  * axes, slices, segments, lines summed directly instead, a-priori error terms;</li>
- * <li>{@link LineDistribution} spreads the lines over the nodes and buckets them per segment;</li>
+ * <li>{@link LineDistribution} buckets each segment's lines and spreads them over the nodes;</li>
  * <li>{@link SliceConvolver} convolves a segment's slices (sampled or analytic kernels) and sums them;</li>
  * <li>{@link OutputSampler} reads σ at the output points from each segment's ring;</li>
  * <li>{@link EdgeCorrection} makes every line's cutoff edge exact;</li>
@@ -52,10 +52,13 @@ import pl.edu.icm.jlargearrays.ConcurrencyUtils;
  * correction runs in line order; directly summed lines go through the exact engine's fixed blocks. σ is bitwise the
  * same for any thread count. The FFT library's own threading is switched off (a process-wide JTransforms setting).
  *
- * <p><b>Memory.</b> The lines are kept (33 bytes each) until {@link #finish}, which needs {@value #BYTES_PER_LINE}
- * bytes per line more for the distribution weights, plus ({@value SliceConvolver#BLOCKS} + 2·threads + 1)·L doubles
- * (on the analytic path 3·threads, plus L/2 for a sin² table), L the segments' ring length, and one double per output
- * point. {@link #finish} refuses with an {@link InputException} naming the figures when this exceeds the heap.
+ * <p><b>Memory.</b> The lines are kept ({@value LineBuffer#BYTES_PER_LINE} bytes each, and their family, one byte)
+ * until {@link #finish}, which computes the distribution weights of one segment's lines at a time
+ * ({@value LineDistribution#BYTES_PER_SEGMENT_LINE} bytes per line of the largest segment) and needs
+ * ({@value SliceConvolver#BLOCKS} + 2·threads + 1)·L doubles (on the analytic path 3·threads, plus L/2 for a sin²
+ * table), L the segments' ring length, and one double per output point. {@link #finish} refuses with an
+ * {@link InputException} naming the figures when this exceeds the heap. The lines themselves are not yet streamed:
+ * the number of lines a heap holds is bounded by the 34 bytes each.
  */
 public final class FastEngine implements CrossSectionEngine {
 
@@ -78,11 +81,6 @@ public final class FastEngine implements CrossSectionEngine {
     static final double BLOCK_TRANSFORM_FACTOR = 2.5;
     /** Largest FFT length accepted. */
     static final int MAX_FFT_LENGTH = 1 << 29;
-    /**
-     * Working memory per line in {@link #finish}: stencil indices and weights (6 + 4 + 4 doubles, 3 ints), and their
-     * copy in stencil order for the segment being convolved (at most every line: 14 doubles, 1 int).
-     */
-    static final int BYTES_PER_LINE = 28 * Double.BYTES + 4 * Integer.BYTES;
 
     private final int threads;
     private final WingTreatment wings;
@@ -227,7 +225,7 @@ public final class FastEngine implements CrossSectionEngine {
             int length = p.layout.ringLength();
             SegmentLayout layout = p.layout;
             int segments = layout.segments();
-            // distribution weights, line by line, once; which lines each segment takes, per segment
+            // which lines each segment takes and their distribution weights, one segment at a time
             LineDistribution dist = new LineDistribution(p, lines, -p.offset - p.margin,
                     layout.start(segments - 1) - p.margin - p.offset + length - FastPlanner.P);
             SliceConvolver convolver = new SliceConvolver(p, pool, wings.removePedestal(),
@@ -242,6 +240,7 @@ public final class FastEngine implements CrossSectionEngine {
                 double[] ring = convolver.convolve(dist, counts);
                 sampler.sample(seg, ring, raw);
             }
+            dist.release();
             EdgeCorrection.apply(p, lines, dist, raw, pool, threads);
             // values below zero can only be round-off: a cross section is never negative, so they are added as zero
             for (int k = 0; k < raw.length; k++) {

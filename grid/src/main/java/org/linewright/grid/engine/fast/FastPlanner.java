@@ -874,17 +874,20 @@ final class FastPlanner {
             }
         }
         // per thread: lines, kernel and, on the analytic path, two half-length node corrections; the sin² table;
-        // the raw output values
+        // the raw output values; the lines kept and their families; the weights of the largest segment's lines
         long perThread = b.anyAnalytic ? 3 : 2;
+        int segmentLines = LineDistribution.maxSegmentLines(b, lines);
         long bytes = ((long) Math.min(SliceConvolver.BLOCKS, slices) + perThread * threads + 1) * fftLength
                 * Double.BYTES
                 + (b.anyAnalytic ? (long) (fftLength / 2 + 1) * Double.BYTES : 0)
                 + (long) grid.size() * Double.BYTES
-                + (long) lines.count * FastEngine.BYTES_PER_LINE;
+                + lines.bytes() + lines.count
+                + (long) segmentLines * LineDistribution.BYTES_PER_SEGMENT_LINE;
         long heap = Runtime.getRuntime().maxMemory();
         if (bytes > heap) {
             throw new InputException("fast engine: about " + bytes / (1 << 20) + " MB needed (FFT length " + fftLength
-                    + ", " + lines.count + " lines) but the heap allows " + heap / (1 << 20)
+                    + ", " + lines.count + " lines kept, at most " + segmentLines + " in one of "
+                    + b.layout.segments() + " segments) but the heap allows " + heap / (1 << 20)
                     + " MB; use a cutoff, a smaller range, fewer threads, a larger -Xmx or the exact engine");
         }
         long cacheBytes = 2L * correctionNodes * (fftLength / 2 + 1) * Double.BYTES;

@@ -6,9 +6,11 @@ import org.linewright.grid.engine.LineChunk;
 /**
  * The lines of one fast computation, kept from {@link FastEngine#accumulate} to {@link FastEngine#finish}: centre,
  * intensity, Doppler and Lorentz HWHM and the χ flag, in the order fed (33 bytes per line). Lines with S = 0 are
- * not kept. Primitive arrays grown by doubling.
+ * not kept. Primitive arrays grown by half their length.
  */
 final class LineBuffer {
+    /** Heap per line kept: four doubles and a boolean. */
+    static final int BYTES_PER_LINE = 4 * Double.BYTES + 1;
     double[] centerCm1 = new double[0];
     double[] strength = new double[0];
     double[] dopplerCm1 = new double[0];
@@ -50,11 +52,18 @@ final class LineBuffer {
         }
     }
 
+    /** Heap the buffer holds: {@value #BYTES_PER_LINE} bytes per line of capacity. */
+    long bytes() {
+        return (long) centerCm1.length * BYTES_PER_LINE;
+    }
+
     private void ensureCapacity(int needed) {
         if (needed <= centerCm1.length) {
             return;
         }
-        int capacity = Math.max(needed, Math.max(1 << 12, 2 * centerCm1.length));
+        // grown by half: at most a third of the capacity unused (doubling would leave up to half)
+        int capacity = (int) Math.min(Integer.MAX_VALUE - 8,
+                Math.max(needed, Math.max(1 << 12, centerCm1.length + (long) centerCm1.length / 2)));
         centerCm1 = Arrays.copyOf(centerCm1, capacity);
         strength = Arrays.copyOf(strength, capacity);
         dopplerCm1 = Arrays.copyOf(dopplerCm1, capacity);
