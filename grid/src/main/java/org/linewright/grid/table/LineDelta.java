@@ -8,6 +8,7 @@ import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.linewright.broadening.wings.WingKernel;
 import org.linewright.grid.calc.LineFilter;
 import org.linewright.ingest.line.LineBatch;
 import org.linewright.ingest.line.NumericRowBytes;
@@ -143,23 +144,8 @@ public final class LineDelta {
     }
 
     private static int count(double[] sorted, double lo, double hi) {
-        int from = lowerBound(sorted, lo);
-        int to = lowerBound(sorted, Math.nextUp(hi));
-        return to - from;
-    }
-
-    private static int lowerBound(double[] x, double v) {
-        int lo = 0;
-        int hi = x.length;
-        while (lo < hi) {
-            int mid = (lo + hi) >>> 1;
-            if (x[mid] < v) {
-                lo = mid + 1;
-            } else {
-                hi = mid;
-            }
-        }
-        return lo;
+        int from = WingKernel.firstIndexAtOrAbove(sorted, 0, sorted.length, lo);
+        return WingKernel.firstIndexAbove(sorted, from, sorted.length, hi) - from;
     }
 
     private static void put(Map<ByteBuffer, Integer> m, ByteBuffer key, List<Double> where, double nu) {
